@@ -1,0 +1,32 @@
+import { FemInputError } from './errors';
+
+/** A finite number, or a FemInputError naming `field`. */
+export function requireFinite(field: string, value: number): number {
+  if (typeof value !== 'number' || !Number.isFinite(value)) {
+    throw new FemInputError(field, `${field} must be a finite number`);
+  }
+  return value;
+}
+
+/** A finite number > 0, or a FemInputError naming `field`. */
+export function requirePositive(field: string, value: number): number {
+  requireFinite(field, value);
+  if (value <= 0) throw new FemInputError(field, `${field} must be greater than zero`);
+  return value;
+}
+
+/** A finite number ≥ 0, or a FemInputError naming `field`. */
+export function requireNonNegative(field: string, value: number): number {
+  requireFinite(field, value);
+  if (value < 0) throw new FemInputError(field, `${field} must not be negative`);
+  return value;
+}
+
+/** Poisson's ratio strictly inside (0, 0.5): 0.5 is incompressible and makes the element stiffness singular. */
+export function requirePoisson(field: string, value: number): number {
+  requireFinite(field, value);
+  if (value <= 0 || value >= 0.5) {
+    throw new FemInputError(field, `${field} must lie strictly between 0 and 0.5`);
+  }
+  return value;
+}
