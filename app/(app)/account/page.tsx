@@ -1,0 +1,18 @@
+import { ChangePasswordForm } from '@/components/account/change-password-form';
+import { PageTitle } from '@/components/ui/page-title';
+import { requirePageActor } from '@/lib/auth/session';
+
+export const metadata = { title: 'Account' };
+
+export default async function AccountPage() {
+  const actor = await requirePageActor('account:manage-own');
+  return (
+    <section>
+      <PageTitle title="Your account">
+        {actor.name} · {actor.email} · role <strong>{actor.role}</strong>
+      </PageTitle>
+      <h2 className="mb-3 font-semibold">Change password</h2>
+      <ChangePasswordForm />
+    </section>
+  );
+}

@@ -1,0 +1,9 @@
+import { AreaPlaceholder } from '@/components/shell/area-placeholder';
+import { requirePageActor } from '@/lib/auth/session';
+
+export const metadata = { title: 'Atlas' };
+
+export default async function AtlasPage() {
+  await requirePageActor('atlas:read');
+  return <AreaPlaceholder title="Atlas" href="/atlas" />;
+}

@@ -1,0 +1,9 @@
+import { AreaPlaceholder } from '@/components/shell/area-placeholder';
+import { requirePageActor } from '@/lib/auth/session';
+
+export const metadata = { title: 'Checks' };
+
+export default async function ChecksPage() {
+  await requirePageActor('checks:run');
+  return <AreaPlaceholder title="Checks" href="/checks" />;
+}

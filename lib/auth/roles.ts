@@ -1,0 +1,53 @@
+/** The four roles of DESIGN.md. */
+export const ROLES = ['admin', 'editor', 'engineer', 'buyer'] as const;
+export type Role = (typeof ROLES)[number];
+
+export function isRole(value: unknown): value is Role {
+  return typeof value === 'string' && (ROLES as readonly string[]).includes(value);
+}
+
+/**
+ * What a role may do. This table is the only place that decides; pages, route handlers,
+ * server actions and the data layer all ask `can(role, capability)`.
+ */
+const TABLE = {
+  'account:manage-own': ['admin', 'editor', 'engineer', 'buyer'],
+  'atlas:read': ['admin', 'editor', 'engineer', 'buyer'],
+  'properties:read-published': ['admin', 'editor', 'engineer', 'buyer'],
+  'checks:run': ['admin', 'editor', 'engineer'],
+  'assessments:manage-own': ['admin', 'editor', 'engineer'],
+  'editor:use': ['admin', 'editor'],
+  'invitations:create-buyer': ['admin', 'editor'],
+  'invitations:create-any': ['admin'],
+  'users:manage': ['admin'],
+  'outbox:read': ['admin'],
+  'audit:read': ['admin'],
+} as const satisfies Record<string, readonly Role[]>;
+
+export type Capability = keyof typeof TABLE;
+export const CAPABILITIES = Object.keys(TABLE) as Capability[];
+
+export function can(role: Role, capability: Capability): boolean {
+  return (TABLE[capability] as readonly Role[]).includes(role);
+}
+
+/** The areas of the app shell and the capability each one needs. */
+export const AREAS = [
+  { href: '/atlas', label: 'Atlas', capability: 'atlas:read' },
+  { href: '/properties', label: 'Properties', capability: 'properties:read-published' },
+  { href: '/checks', label: 'Checks', capability: 'checks:run' },
+  { href: '/assessments', label: 'Assessments', capability: 'assessments:manage-own' },
+  { href: '/editor', label: 'Editor', capability: 'editor:use' },
+  { href: '/admin', label: 'Admin', capability: 'users:manage' },
+] as const satisfies readonly { href: string; label: string; capability: Capability }[];
+
+export function areasFor(role: Role) {
+  return AREAS.filter((area) => can(role, area.capability));
+}
+
+/** Roles an inviter may hand out: editors invite buyers only; admins any role. */
+export function invitableRoles(role: Role): Role[] {
+  if (can(role, 'invitations:create-any')) return [...ROLES];
+  if (can(role, 'invitations:create-buyer')) return ['buyer'];
+  return [];
+}

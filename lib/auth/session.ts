@@ -1,0 +1,37 @@
+import 'server-only';
+import { getServerSession } from 'next-auth';
+import { forbidden, redirect } from 'next/navigation';
+import { authOptions } from '@/auth';
+import { getActiveActor } from '@/lib/data/users';
+import { ForbiddenError, UnauthenticatedError } from '@/lib/errors';
+import type { Actor } from './actor';
+import { can, type Capability } from './roles';
+
+/**
+ * The signed-in user, read fresh from the database: a disabled account or a changed role takes
+ * effect on the next request, whatever the session cookie still says.
+ */
+export async function getCurrentActor(): Promise<Actor | null> {
+  const session = await getServerSession(authOptions);
+  const id = Number(session?.user?.id);
+  if (!Number.isInteger(id) || id <= 0) return null;
+  return getActiveActor(id);
+}
+
+/** For route handlers and server actions: the actor, or a 401/403 AppError. */
+export async function requireActor(capability?: Capability): Promise<Actor> {
+  const actor = await getCurrentActor();
+  if (!actor) throw new UnauthenticatedError();
+  if (capability && !can(actor.role, capability)) {
+    throw new ForbiddenError(`The ${actor.role} role may not do this (${capability}).`);
+  }
+  return actor;
+}
+
+/** For pages: redirect signed-out visitors to sign-in; show the 403 page for a role without the capability. */
+export async function requirePageActor(capability?: Capability): Promise<Actor> {
+  const actor = await getCurrentActor();
+  if (!actor) redirect('/sign-in');
+  if (capability && !can(actor.role, capability)) forbidden();
+  return actor;
+}

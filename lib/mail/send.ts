@@ -1,0 +1,43 @@
+import 'server-only';
+import nodemailer, { type Transporter } from 'nodemailer';
+
+let transporter: Transporter | undefined;
+
+/** SMTP settings from the environment; the default is the local catcher started with the app. */
+export function smtpSettings() {
+  return {
+    host: process.env.SMTP_HOST ?? '127.0.0.1',
+    port: Number(process.env.SMTP_PORT ?? 2525),
+    secure: process.env.SMTP_SECURE === 'true',
+    user: process.env.SMTP_USER,
+    pass: process.env.SMTP_PASS,
+    from: process.env.MAIL_FROM ?? 'Tenderline <no-reply@tenderline.invalid>',
+  };
+}
+
+export interface OutgoingMail {
+  to: string;
+  subject: string;
+  text: string;
+  html?: string;
+}
+
+/** Send one message over SMTP. Throws when the server refuses or cannot be reached. */
+export async function sendMail(mail: OutgoingMail): Promise<void> {
+  const s = smtpSettings();
+  transporter ??= nodemailer.createTransport({
+    host: s.host,
+    port: s.port,
+    secure: s.secure,
+    auth: s.user ? { user: s.user, pass: s.pass } : undefined,
+    // The local catcher speaks plain SMTP on loopback.
+    ignoreTLS: !s.secure && (s.host === '127.0.0.1' || s.host === 'localhost'),
+    connectionTimeout: 5000,
+  });
+  await transporter.sendMail({ from: s.from, ...mail });
+}
+
+/** The public base URL used in links inside e-mails. */
+export function appUrl(): string {
+  return (process.env.APP_URL ?? process.env.NEXTAUTH_URL ?? 'http://localhost:3000').replace(/\/$/, '');
+}

@@ -1,0 +1,29 @@
+// The app as the browser tests see it: a fresh SQLite file, migrated and seeded, a catcher, next start.
+import fs from 'node:fs';
+import path from 'node:path';
+import knex from 'knex';
+
+const file = path.resolve('data/e2e.sqlite');
+fs.mkdirSync(path.dirname(file), { recursive: true });
+fs.rmSync(file, { force: true });
+process.env.KNEX_ENV = 'development';
+process.env.DATABASE_FILE = file;
+
+const { config } = await import('../knexfile');
+const db = knex(config.development);
+await db.migrate.latest();
+await db.seed.run();
+await db.destroy();
+
+const { serve } = await import('./serve');
+const port = Number(process.env.E2E_PORT ?? 3100);
+await serve({
+  port,
+  smtpPort: 0,
+  env: {
+    KNEX_ENV: 'development',
+    DATABASE_FILE: file,
+    NEXTAUTH_URL: `http://127.0.0.1:${port}`,
+    NEXTAUTH_SECRET: 'e2e-only-secret-not-for-production-0123456789',
+  },
+});
