@@ -10,6 +10,7 @@ test('an admin invites a buyer, who accepts through the e-mailed link and signs 
   await form.getByLabel('Role').selectOption('buyer');
   await form.getByRole('button', { name: 'Send invitation' }).click();
   await expect(form.getByTestId('form-success')).toContainText(buyerEmail);
+  await page.screenshot({ path: 'tests/artifacts/admin-users.png', fullPage: true });
 
   // The message went over SMTP to the catcher; read the link from the admin outbox.
   await page.goto('/admin/outbox');

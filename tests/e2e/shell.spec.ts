@@ -13,6 +13,7 @@ test('a signed-out visitor is sent to sign-in', async ({ page }) => {
   await page.goto('/admin/users');
   await expect(page).toHaveURL(/\/sign-in\?callbackUrl=/);
   await expect(page.getByRole('button', { name: 'Sign in' })).toBeVisible();
+  await page.screenshot({ path: 'tests/artifacts/sign-in.png' });
 });
 
 test('a wrong password gets a clear message', async ({ page }) => {
