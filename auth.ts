@@ -1,7 +1,13 @@
 import type { NextAuthOptions } from 'next-auth';
 import CredentialsProvider from 'next-auth/providers/credentials';
 import { verifyCredentials } from '@/lib/data/users';
-import { clearFailures, delayAfterFailure, lockedForMs, recordFailure, throttleKey } from '@/lib/auth/throttle';
+import {
+  clearFailures,
+  delayAfterFailure,
+  lockedForMs,
+  recordFailure,
+  throttleKey,
+} from '@/lib/auth/throttle';
 import { signInSchema } from '@/lib/validation/users';
 
 /** Error codes the sign-in page turns into messages. */
@@ -16,7 +22,10 @@ export const authOptions: NextAuthOptions = {
   providers: [
     CredentialsProvider({
       name: 'E-mail and password',
-      credentials: { email: { label: 'E-mail', type: 'email' }, password: { label: 'Password', type: 'password' } },
+      credentials: {
+        email: { label: 'E-mail', type: 'email' },
+        password: { label: 'Password', type: 'password' },
+      },
       async authorize(credentials) {
         const parsed = signInSchema.safeParse(credentials ?? {});
         if (!parsed.success) return null;

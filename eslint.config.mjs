@@ -5,5 +5,12 @@ import nextTs from 'eslint-config-next/typescript';
 export default defineConfig([
   ...nextVitals,
   ...nextTs,
-  globalIgnores(['.next/**', 'node_modules/**', 'data/**', 'next-env.d.ts', 'test-results/**', 'playwright-report/**']),
+  globalIgnores([
+    '.next/**',
+    'node_modules/**',
+    'data/**',
+    'next-env.d.ts',
+    'test-results/**',
+    'playwright-report/**',
+  ]),
 ]);

@@ -1,6 +1,12 @@
 'use client';
 
-export default function ErrorPage({ error, reset }: { error: Error & { digest?: string }; reset: () => void }) {
+export default function ErrorPage({
+  error,
+  reset,
+}: {
+  error: Error & { digest?: string };
+  reset: () => void;
+}) {
   return (
     <main className="mx-auto max-w-lg px-4 py-24 text-center">
       <h1 className="text-2xl font-semibold">Something went wrong</h1>
@@ -14,7 +20,11 @@ export default function ErrorPage({ error, reset }: { error: Error & { digest?: 
         ) : null}
         .
       </p>
-      <button type="button" onClick={reset} className="mt-6 rounded-md bg-leaf-700 px-3 py-1.5 text-sm text-white">
+      <button
+        type="button"
+        onClick={reset}
+        className="mt-6 rounded-md bg-leaf-700 px-3 py-1.5 text-sm text-white"
+      >
         Try again
       </button>
     </main>

@@ -5,7 +5,9 @@ export default function NotFound() {
     <main className="mx-auto max-w-lg px-4 py-24 text-center">
       <p className="num text-sm text-stone-500">404</p>
       <h1 className="mt-2 text-2xl font-semibold">No page here</h1>
-      <p className="mt-2 text-sm text-stone-600">The address may be mistyped, or the page has moved.</p>
+      <p className="mt-2 text-sm text-stone-600">
+        The address may be mistyped, or the page has moved.
+      </p>
       <Link href="/" className="mt-6 inline-block text-sm font-medium text-leaf-700 underline">
         Back to Tenderline
       </Link>

@@ -2,4 +2,7 @@
 import { serve } from './serve';
 
 console.log('Tenderline on http://localhost:3000 — demo accounts are listed in the README.');
-await serve({ port: Number(process.env.PORT ?? 3000), smtpPort: Number(process.env.SMTP_PORT ?? 2525) });
+await serve({
+  port: Number(process.env.PORT ?? 3000),
+  smtpPort: Number(process.env.SMTP_PORT ?? 2525),
+});

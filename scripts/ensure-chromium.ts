@@ -8,5 +8,8 @@ if (fs.existsSync(path)) {
 } else {
   const sudo = process.getuid?.() === 0 ? '' : 'sudo ';
   console.log('chromium: not found, installing Debian package chromium…');
-  execSync(`${sudo}apt-get update -qq && ${sudo}env DEBIAN_FRONTEND=noninteractive apt-get install -y -qq chromium`, { stdio: 'inherit' });
+  execSync(
+    `${sudo}apt-get update -qq && ${sudo}env DEBIAN_FRONTEND=noninteractive apt-get install -y -qq chromium`,
+    { stdio: 'inherit' },
+  );
 }

@@ -5,10 +5,15 @@ import fs from 'node:fs';
 const file = '.env.local';
 const current = fs.existsSync(file) ? fs.readFileSync(file, 'utf8') : '';
 const lines: string[] = [];
-if (!/^NEXTAUTH_SECRET=/m.test(current)) lines.push(`NEXTAUTH_SECRET=${randomBytes(32).toString('base64url')}`);
+if (!/^NEXTAUTH_SECRET=/m.test(current))
+  lines.push(`NEXTAUTH_SECRET=${randomBytes(32).toString('base64url')}`);
 if (!/^NEXTAUTH_URL=/m.test(current)) lines.push('NEXTAUTH_URL=http://localhost:3000');
 if (lines.length) {
-  fs.writeFileSync(file, current + (current && !current.endsWith('\n') ? '\n' : '') + lines.join('\n') + '\n', { mode: 0o600 });
+  fs.writeFileSync(
+    file,
+    current + (current && !current.endsWith('\n') ? '\n' : '') + lines.join('\n') + '\n',
+    { mode: 0o600 },
+  );
   console.log(`setup: wrote ${lines.map((l) => l.split('=')[0]).join(', ')} to ${file}`);
 } else {
   console.log(`setup: ${file} already has an auth secret`);

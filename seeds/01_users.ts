@@ -18,7 +18,15 @@ export async function seed(knex: Knex): Promise<void> {
   const hash = await bcrypt.hash(DEMO_PASSWORD, 10);
   const now = new Date();
   await knex('users')
-    .insert(DEMO_USERS.map((u) => ({ ...u, password_hash: hash, disabled: false, created_at: now, updated_at: now })))
+    .insert(
+      DEMO_USERS.map((u) => ({
+        ...u,
+        password_hash: hash,
+        disabled: false,
+        created_at: now,
+        updated_at: now,
+      })),
+    )
     .onConflict('email')
     .ignore();
 }

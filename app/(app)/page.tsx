@@ -9,13 +9,16 @@ export default async function HomePage() {
   return (
     <section>
       <PageTitle title={`Welcome, ${actor.name}`}>
-        Tenderline keeps sourced firmness and bruise data for soft produce beside handling guidance, and
-        estimates what a gripper pad, a drop or a deep bin does to the fruit.
+        Tenderline keeps sourced firmness and bruise data for soft produce beside handling guidance,
+        and estimates what a gripper pad, a drop or a deep bin does to the fruit.
       </PageTitle>
       <ul className="grid gap-4 sm:grid-cols-2 lg:grid-cols-3" data-testid="home-areas">
         {areasFor(actor.role).map((area) => (
           <li key={area.href}>
-            <Link href={area.href} className="block h-full rounded-lg border border-stone-200 bg-white p-4 shadow-sm hover:border-leaf-600">
+            <Link
+              href={area.href}
+              className="block h-full rounded-lg border border-stone-200 bg-white p-4 shadow-sm hover:border-leaf-600"
+            >
               <h2 className="font-semibold text-leaf-900">{area.label}</h2>
               <p className="mt-1 text-sm text-stone-600">{AREA_DESCRIPTIONS[area.href]}</p>
             </Link>

@@ -12,9 +12,28 @@ export function ChangePasswordForm() {
   const errors = state.fieldErrors ?? {};
   return (
     <form action={action} className="max-w-sm space-y-4">
-      <Field label="Current password" name="currentPassword" type="password" autoComplete="current-password" errors={errors.currentPassword} />
-      <Field label="New password" name="newPassword" type="password" autoComplete="new-password" hint="At least 10 characters." errors={errors.newPassword} />
-      <Field label="Repeat new password" name="confirmPassword" type="password" autoComplete="new-password" errors={errors.confirmPassword} />
+      <Field
+        label="Current password"
+        name="currentPassword"
+        type="password"
+        autoComplete="current-password"
+        errors={errors.currentPassword}
+      />
+      <Field
+        label="New password"
+        name="newPassword"
+        type="password"
+        autoComplete="new-password"
+        hint="At least 10 characters."
+        errors={errors.newPassword}
+      />
+      <Field
+        label="Repeat new password"
+        name="confirmPassword"
+        type="password"
+        autoComplete="new-password"
+        errors={errors.confirmPassword}
+      />
       <FormMessage tone={state.ok ? 'success' : 'error'} message={state.message} />
       <Button type="submit" disabled={pending}>
         {pending ? 'Saving…' : 'Change password'}

@@ -13,13 +13,24 @@ export function InviteForm({ roles }: { roles: Role[] }) {
   const errors = state.fieldErrors ?? {};
   return (
     <form action={action} className="max-w-md space-y-3" data-testid="invite-form">
-      <Field label="E-mail of the person to invite" name="email" type="email" maxLength={254} errors={errors.email} />
+      <Field
+        label="E-mail of the person to invite"
+        name="email"
+        type="email"
+        maxLength={254}
+        errors={errors.email}
+      />
       {roles.length > 1 ? (
         <div className="space-y-1">
           <label htmlFor="invite-role" className="block text-sm font-medium">
             Role
           </label>
-          <select id="invite-role" name="role" defaultValue="buyer" className="rounded-md border border-stone-300 bg-white px-2 py-1.5 text-sm">
+          <select
+            id="invite-role"
+            name="role"
+            defaultValue="buyer"
+            className="rounded-md border border-stone-300 bg-white px-2 py-1.5 text-sm"
+          >
             {roles.map((r) => (
               <option key={r} value={r}>
                 {r}

@@ -23,7 +23,13 @@ export function UserRowForm({ user, isSelf }: Props) {
       <td className="px-3 py-2">
         <form action={action} className="flex items-center gap-2">
           <input type="hidden" name="userId" value={user.id} />
-          <select name="role" defaultValue={user.role} aria-label={`Role of ${user.email}`} disabled={isSelf} className="rounded-md border border-stone-300 bg-white px-2 py-1 text-sm">
+          <select
+            name="role"
+            defaultValue={user.role}
+            aria-label={`Role of ${user.email}`}
+            disabled={isSelf}
+            className="rounded-md border border-stone-300 bg-white px-2 py-1 text-sm"
+          >
             {ROLES.map((r) => (
               <option key={r} value={r}>
                 {r}
@@ -39,12 +45,21 @@ export function UserRowForm({ user, isSelf }: Props) {
         <form action={action} className="flex items-center gap-2">
           <input type="hidden" name="userId" value={user.id} />
           <input type="hidden" name="disabled" value={user.disabled ? 'false' : 'true'} />
-          <span className={user.disabled ? 'text-red-700' : 'text-leaf-700'}>{user.disabled ? 'disabled' : 'active'}</span>
-          <Button type="submit" variant={user.disabled ? 'secondary' : 'danger'} disabled={pending || isSelf}>
+          <span className={user.disabled ? 'text-red-700' : 'text-leaf-700'}>
+            {user.disabled ? 'disabled' : 'active'}
+          </span>
+          <Button
+            type="submit"
+            variant={user.disabled ? 'secondary' : 'danger'}
+            disabled={pending || isSelf}
+          >
             {user.disabled ? 'Enable' : 'Disable'}
           </Button>
         </form>
-        <p aria-live="polite" className={`mt-1 text-xs ${state.ok ? 'text-leaf-700' : 'text-red-700'}`}>
+        <p
+          aria-live="polite"
+          className={`mt-1 text-xs ${state.ok ? 'text-leaf-700' : 'text-red-700'}`}
+        >
           {state.message}
         </p>
       </td>

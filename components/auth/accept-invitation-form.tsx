@@ -27,9 +27,28 @@ export function AcceptInvitationForm({ token, email }: { token: string; email: s
       <p className="text-sm text-stone-600">
         Account for <strong>{email}</strong>
       </p>
-      <Field label="Your name" name="name" autoComplete="name" maxLength={100} errors={errors.name} />
-      <Field label="Password" name="password" type="password" autoComplete="new-password" hint="At least 10 characters." errors={errors.password} />
-      <Field label="Repeat password" name="confirmPassword" type="password" autoComplete="new-password" errors={errors.confirmPassword} />
+      <Field
+        label="Your name"
+        name="name"
+        autoComplete="name"
+        maxLength={100}
+        errors={errors.name}
+      />
+      <Field
+        label="Password"
+        name="password"
+        type="password"
+        autoComplete="new-password"
+        hint="At least 10 characters."
+        errors={errors.password}
+      />
+      <Field
+        label="Repeat password"
+        name="confirmPassword"
+        type="password"
+        autoComplete="new-password"
+        errors={errors.confirmPassword}
+      />
       <FormMessage tone="error" message={state.message} />
       <Button type="submit" disabled={pending} className="w-full">
         {pending ? 'Creating account…' : 'Create account'}

@@ -54,8 +54,22 @@ export function SignInForm() {
 
   return (
     <form onSubmit={onSubmit} className="space-y-4" noValidate>
-      <Field label="E-mail" name="email" type="email" autoComplete="username" required maxLength={254} />
-      <Field label="Password" name="password" type="password" autoComplete="current-password" required maxLength={200} />
+      <Field
+        label="E-mail"
+        name="email"
+        type="email"
+        autoComplete="username"
+        required
+        maxLength={254}
+      />
+      <Field
+        label="Password"
+        name="password"
+        type="password"
+        autoComplete="current-password"
+        required
+        maxLength={200}
+      />
       <FormMessage tone="error" message={error} />
       <Button type="submit" disabled={pending} className="w-full">
         {pending ? 'Signing in…' : 'Sign in'}

@@ -2,7 +2,15 @@ import { PageTitle } from '@/components/ui/page-title';
 import { AREA_DESCRIPTIONS } from '@/lib/area-descriptions';
 
 /** An area page that says what will live there. */
-export function AreaPlaceholder({ title, href, children }: { title: string; href: string; children?: React.ReactNode }) {
+export function AreaPlaceholder({
+  title,
+  href,
+  children,
+}: {
+  title: string;
+  href: string;
+  children?: React.ReactNode;
+}) {
   return (
     <section>
       <PageTitle title={title}>{AREA_DESCRIPTIONS[href]}</PageTitle>

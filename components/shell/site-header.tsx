@@ -13,13 +13,21 @@ export function SiteHeader({ actor }: { actor: Actor }) {
         </Link>
         <nav aria-label="Areas" data-testid="area-nav" className="flex flex-wrap gap-1">
           {areas.map((area) => (
-            <Link key={area.href} href={area.href} className="rounded-md px-2 py-1 text-sm text-leaf-50 hover:bg-leaf-900">
+            <Link
+              key={area.href}
+              href={area.href}
+              className="rounded-md px-2 py-1 text-sm text-leaf-50 hover:bg-leaf-900"
+            >
               {area.label}
             </Link>
           ))}
         </nav>
         <div className="ml-auto flex items-center gap-2 text-sm">
-          <Link href="/account" className="rounded-md px-2 py-1 text-leaf-50 hover:bg-leaf-900" data-testid="account-link">
+          <Link
+            href="/account"
+            className="rounded-md px-2 py-1 text-leaf-50 hover:bg-leaf-900"
+            data-testid="account-link"
+          >
             {actor.name} <span className="text-leaf-100">({actor.role})</span>
           </Link>
           <SignOutButton />

@@ -7,7 +7,12 @@ export function Field({
   errors,
   hint,
   ...input
-}: InputHTMLAttributes<HTMLInputElement> & { label: string; name: string; errors?: string[]; hint?: string }) {
+}: InputHTMLAttributes<HTMLInputElement> & {
+  label: string;
+  name: string;
+  errors?: string[];
+  hint?: string;
+}) {
   const errorId = `${name}-error`;
   const hintId = hint ? `${name}-hint` : undefined;
   return (
@@ -19,7 +24,9 @@ export function Field({
         id={name}
         name={name}
         aria-invalid={errors?.length ? true : undefined}
-        aria-describedby={[errors?.length ? errorId : null, hintId].filter(Boolean).join(' ') || undefined}
+        aria-describedby={
+          [errors?.length ? errorId : null, hintId].filter(Boolean).join(' ') || undefined
+        }
         className="block w-full rounded-md border border-stone-300 bg-white px-3 py-1.5 text-sm shadow-sm focus:border-leaf-600 focus:outline-none focus:ring-1 focus:ring-leaf-600 aria-invalid:border-red-500"
         {...input}
       />

@@ -13,7 +13,10 @@ export async function inviteAction(_prev: ActionState, form: FormData): Promise<
 }
 
 /** Public: the invitation link's form. The token travels in a hidden field. */
-export async function acceptInvitationAction(_prev: ActionState, form: FormData): Promise<ActionState> {
+export async function acceptInvitationAction(
+  _prev: ActionState,
+  form: FormData,
+): Promise<ActionState> {
   return runAction(async () => {
     const values = formObject(form);
     const result = await acceptInvitation(values.token ?? '', values);

@@ -18,7 +18,8 @@ export async function runAction(body: () => Promise<string>): Promise<ActionStat
     if (error instanceof ValidationError) {
       return { status: 400, ok: false, message: error.message, fieldErrors: error.fieldErrors };
     }
-    if (error instanceof AppError) return { status: error.status, ok: false, message: error.message };
+    if (error instanceof AppError)
+      return { status: error.status, ok: false, message: error.message };
     console.error(error);
     return { status: 500, ok: false, message: 'Something went wrong on the server.' };
   }

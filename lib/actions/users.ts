@@ -14,7 +14,8 @@ export async function updateUserAction(_prev: ActionState, form: FormData): Prom
     const id = parseId(userId ?? '', 'userId');
     const change: Record<string, unknown> = {};
     if (role !== undefined) change.role = role;
-    if (disabled !== undefined) change.disabled = disabled === 'true' ? true : disabled === 'false' ? false : disabled;
+    if (disabled !== undefined)
+      change.disabled = disabled === 'true' ? true : disabled === 'false' ? false : disabled;
     const user = await updateUser(actor, id, change);
     revalidatePath('/admin/users');
     return `Saved ${user.email}: ${user.role}${user.disabled ? ', disabled' : ''}.`;

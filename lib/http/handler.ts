@@ -13,7 +13,11 @@ export function errorResponse(error: unknown): NextResponse {
   }
   if (error instanceof FemInputError) {
     return NextResponse.json(
-      { error: 'invalid_input', message: error.message, fieldErrors: { [error.field]: [error.message] } },
+      {
+        error: 'invalid_input',
+        message: error.message,
+        fieldErrors: { [error.field]: [error.message] },
+      },
       { status: 400 },
     );
   }
@@ -24,10 +28,16 @@ export function errorResponse(error: unknown): NextResponse {
     );
   }
   if (error instanceof AppError) {
-    return NextResponse.json({ error: error.code, message: error.message }, { status: error.status });
+    return NextResponse.json(
+      { error: error.code, message: error.message },
+      { status: error.status },
+    );
   }
   console.error(error);
-  return NextResponse.json({ error: 'server_error', message: 'Something went wrong on the server.' }, { status: 500 });
+  return NextResponse.json(
+    { error: 'server_error', message: 'Something went wrong on the server.' },
+    { status: 500 },
+  );
 }
 
 type Handler<C> = (request: Request, context: C) => Promise<Response>;
@@ -61,6 +71,9 @@ export async function readJson(request: Request): Promise<unknown> {
 /** Parse a positive integer id from a route segment, or 400. */
 export function parseId(value: string, field = 'id'): number {
   const id = Number(value);
-  if (!Number.isInteger(id) || id <= 0) throw new ValidationError(`The ${field} must be a positive whole number.`, { [field]: ['Must be a positive whole number.'] });
+  if (!Number.isInteger(id) || id <= 0)
+    throw new ValidationError(`The ${field} must be a positive whole number.`, {
+      [field]: ['Must be a positive whole number.'],
+    });
   return id;
 }

@@ -39,5 +39,8 @@ export async function sendMail(mail: OutgoingMail): Promise<void> {
 
 /** The public base URL used in links inside e-mails. */
 export function appUrl(): string {
-  return (process.env.APP_URL ?? process.env.NEXTAUTH_URL ?? 'http://localhost:3000').replace(/\/$/, '');
+  return (process.env.APP_URL ?? process.env.NEXTAUTH_URL ?? 'http://localhost:3000').replace(
+    /\/$/,
+    '',
+  );
 }

@@ -22,7 +22,10 @@ export const signInSchema = z.object({
 
 export const changePasswordSchema = z
   .object({
-    currentPassword: z.string({ error: 'Current password is required.' }).min(1, 'Current password is required.').max(200),
+    currentPassword: z
+      .string({ error: 'Current password is required.' })
+      .min(1, 'Current password is required.')
+      .max(200),
     newPassword,
     confirmPassword: z.string({ error: 'Repeat the new password.' }),
   })

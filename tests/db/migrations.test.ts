@@ -20,7 +20,9 @@ describe('migrations on a fresh database', () => {
     await db.seed.run();
     const users = await db('users').select('email', 'role').orderBy('email');
     expect(users).toHaveLength(DEMO_USERS.length);
-    expect(new Set(users.map((u) => u.role))).toEqual(new Set(['admin', 'editor', 'engineer', 'buyer']));
+    expect(new Set(users.map((u) => u.role))).toEqual(
+      new Set(['admin', 'editor', 'engineer', 'buyer']),
+    );
 
     // Seeding twice is harmless (insert … on conflict ignore).
     await db.seed.run();
@@ -40,7 +42,13 @@ describe('migrations on a fresh database', () => {
 
   it('enforces the invitation → inviter foreign key', async () => {
     await expect(
-      db('invitations').insert({ email: 'x@y.example', role: 'buyer', token_hash: 'a'.repeat(64), invited_by: 9999, expires_at: new Date() }),
+      db('invitations').insert({
+        email: 'x@y.example',
+        role: 'buyer',
+        token_hash: 'a'.repeat(64),
+        invited_by: 9999,
+        expires_at: new Date(),
+      }),
     ).rejects.toThrow(/FOREIGN KEY/);
   });
 });

@@ -1,7 +1,9 @@
 import { expect, test } from '@playwright/test';
 import { ACCOUNTS, signIn, signOut } from './helpers';
 
-test('an admin invites a buyer, who accepts through the e-mailed link and signs in', async ({ page }) => {
+test('an admin invites a buyer, who accepts through the e-mailed link and signs in', async ({
+  page,
+}) => {
   const buyerEmail = `visiting.qa.${Date.now()}@orchardbuyer.example`;
   await signIn(page, ACCOUNTS.admin);
   await page.goto('/admin/users');

@@ -29,7 +29,9 @@ for (const role of Object.keys(NAV) as (keyof typeof ACCOUNTS)[]) {
     await signIn(page, ACCOUNTS[role]);
     const links = page.getByTestId('area-nav').getByRole('link');
     await expect(links).toHaveText(NAV[role]);
-    await expect(page.getByTestId('standing-caution')).toContainText('not a substitute for bruise tests');
+    await expect(page.getByTestId('standing-caution')).toContainText(
+      'not a substitute for bruise tests',
+    );
     if (role === 'engineer') {
       await page.screenshot({ path: 'tests/artifacts/home-engineer.png', fullPage: true });
     }

@@ -13,8 +13,17 @@ export async function startTestCatcher() {
 export async function waitForMail(to: string, timeoutMs = 5000) {
   const until = Date.now() + timeoutMs;
   while (Date.now() < until) {
-    const row = await db('mail_outbox').where('to_addresses', 'like', `%${to}%`).orderBy('id', 'desc').first();
-    if (row) return row as { subject: string; text_body: string; from_address: string; to_addresses: string };
+    const row = await db('mail_outbox')
+      .where('to_addresses', 'like', `%${to}%`)
+      .orderBy('id', 'desc')
+      .first();
+    if (row)
+      return row as {
+        subject: string;
+        text_body: string;
+        from_address: string;
+        to_addresses: string;
+      };
     await new Promise((r) => setTimeout(r, 25));
   }
   throw new Error(`no mail to ${to} within ${timeoutMs} ms`);

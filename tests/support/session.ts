@@ -13,7 +13,10 @@ vi.mock('next-auth', async (importOriginal) => {
     getServerSession: vi.fn(async () =>
       sessionState.userId == null
         ? null
-        : { user: { id: String(sessionState.userId) }, expires: new Date(Date.now() + 3600e3).toISOString() },
+        : {
+            user: { id: String(sessionState.userId) },
+            expires: new Date(Date.now() + 3600e3).toISOString(),
+          },
     ),
   };
 });

@@ -56,8 +56,12 @@ describe('invitations over real SMTP on loopback', () => {
     const inv = await createInvitation(admin, { email, role: 'buyer' });
     const { token } = linkIn((await waitForMail(email)).text_body);
     // Eight days later the link has lapsed (expiry is 7 days).
-    expect((await getInvitationState(token, new Date(Date.now() + 8 * 24 * 3600e3))).state).toBe('expired');
-    await db('invitations').where({ id: inv.id }).update({ expires_at: new Date(Date.now() - 1000) });
+    expect((await getInvitationState(token, new Date(Date.now() + 8 * 24 * 3600e3))).state).toBe(
+      'expired',
+    );
+    await db('invitations')
+      .where({ id: inv.id })
+      .update({ expires_at: new Date(Date.now() - 1000) });
     const users = await countRows('users');
     await expect(acceptInvitation(token, values)).rejects.toThrow(/expired/);
     expect(await countRows('users')).toBe(users);
@@ -75,17 +79,26 @@ describe('invitations over real SMTP on loopback', () => {
   });
 
   it('lets editors invite buyers only, and refuses an existing account', async () => {
-    await expect(createInvitation(editor, { email: 'x@y.example', role: 'engineer' })).rejects.toBeInstanceOf(ForbiddenError);
-    await expect(createInvitation(admin, { email: ACCOUNTS.engineer, role: 'buyer' })).rejects.toBeInstanceOf(ConflictError);
+    await expect(
+      createInvitation(editor, { email: 'x@y.example', role: 'engineer' }),
+    ).rejects.toBeInstanceOf(ForbiddenError);
+    await expect(
+      createInvitation(admin, { email: ACCOUNTS.engineer, role: 'buyer' }),
+    ).rejects.toBeInstanceOf(ConflictError);
     const engineer = (await getActiveActor(await userId(ACCOUNTS.engineer)))!;
-    await expect(createInvitation(engineer, { email: 'z@y.example' })).rejects.toBeInstanceOf(ForbiddenError);
+    await expect(createInvitation(engineer, { email: 'z@y.example' })).rejects.toBeInstanceOf(
+      ForbiddenError,
+    );
   });
 
   it('spends a token once when two acceptances race', async () => {
     const email = 'race@pome-buyer.example';
     await createInvitation(admin, { email, role: 'buyer' });
     const { token } = linkIn((await waitForMail(email)).text_body);
-    const results = await Promise.allSettled([acceptInvitation(token, values), acceptInvitation(token, values)]);
+    const results = await Promise.allSettled([
+      acceptInvitation(token, values),
+      acceptInvitation(token, values),
+    ]);
     expect(results.filter((r) => r.status === 'fulfilled')).toHaveLength(1);
     expect(await db('users').where({ email }).count({ n: '*' })).toEqual([{ n: 1 }]);
   });

@@ -31,8 +31,12 @@ interface Row {
 }
 
 const json = (method: string, body?: unknown) =>
-  new Request('http://tenderline.test/api', { method, headers: { 'content-type': 'application/json' }, body: body === undefined ? undefined : JSON.stringify(body) });
-const params = <T,>(p: T) => ({ params: Promise.resolve(p) });
+  new Request('http://tenderline.test/api', {
+    method,
+    headers: { 'content-type': 'application/json' },
+    body: body === undefined ? undefined : JSON.stringify(body),
+  });
+const params = <T>(p: T) => ({ params: Promise.resolve(p) });
 const form = (values: Record<string, string>) => {
   const f = new FormData();
   for (const [k, v] of Object.entries(values)) f.set(k, v);
@@ -43,47 +47,97 @@ let n = 0;
 const freshEmail = (who: Who) => `matrix-${who}-${++n}@visitor.example`;
 
 const ROWS: Row[] = [
-  { name: 'GET /api/me', capability: 'account:manage-own', okStatus: 200, call: async () => (await me.GET(json('GET'), params({}))).status },
+  {
+    name: 'GET /api/me',
+    capability: 'account:manage-own',
+    okStatus: 200,
+    call: async () => (await me.GET(json('GET'), params({}))).status,
+  },
   {
     name: 'POST /api/account/password',
     capability: 'account:manage-own',
     okStatus: 200,
     call: async () =>
-      (await password.POST(json('POST', { currentPassword: DEMO_PASSWORD, newPassword: DEMO_PASSWORD, confirmPassword: DEMO_PASSWORD }), params({}))).status,
+      (
+        await password.POST(
+          json('POST', {
+            currentPassword: DEMO_PASSWORD,
+            newPassword: DEMO_PASSWORD,
+            confirmPassword: DEMO_PASSWORD,
+          }),
+          params({}),
+        )
+      ).status,
   },
-  { name: 'GET /api/admin/users', capability: 'users:manage', okStatus: 200, call: async () => (await users.GET(json('GET'), params({}))).status },
+  {
+    name: 'GET /api/admin/users',
+    capability: 'users:manage',
+    okStatus: 200,
+    call: async () => (await users.GET(json('GET'), params({}))).status,
+  },
   {
     name: 'PATCH /api/admin/users/[id]',
     capability: 'users:manage',
     okStatus: 200,
-    call: async () => (await user.PATCH(json('PATCH', { role: 'engineer' }), params({ id: String(engineerId) }))).status,
+    call: async () =>
+      (await user.PATCH(json('PATCH', { role: 'engineer' }), params({ id: String(engineerId) })))
+        .status,
   },
   {
     name: 'POST /api/invitations',
     capability: 'invitations:create-buyer',
     okStatus: 201,
-    call: async (who) => (await invitations.POST(json('POST', { email: freshEmail(who), role: 'buyer' }), params({}))).status,
+    call: async (who) =>
+      (await invitations.POST(json('POST', { email: freshEmail(who), role: 'buyer' }), params({})))
+        .status,
   },
-  { name: 'GET /api/admin/outbox', capability: 'outbox:read', okStatus: 200, call: async () => (await outbox.GET(json('GET'), params({}))).status },
-  { name: 'GET /api/admin/audit', capability: 'audit:read', okStatus: 200, call: async () => (await audit.GET(json('GET'), params({}))).status },
+  {
+    name: 'GET /api/admin/outbox',
+    capability: 'outbox:read',
+    okStatus: 200,
+    call: async () => (await outbox.GET(json('GET'), params({}))).status,
+  },
+  {
+    name: 'GET /api/admin/audit',
+    capability: 'audit:read',
+    okStatus: 200,
+    call: async () => (await audit.GET(json('GET'), params({}))).status,
+  },
   {
     name: 'action changePasswordAction',
     capability: 'account:manage-own',
     okStatus: 200,
     call: async () =>
-      (await changePasswordAction(initialActionState, form({ currentPassword: DEMO_PASSWORD, newPassword: DEMO_PASSWORD, confirmPassword: DEMO_PASSWORD }))).status,
+      (
+        await changePasswordAction(
+          initialActionState,
+          form({
+            currentPassword: DEMO_PASSWORD,
+            newPassword: DEMO_PASSWORD,
+            confirmPassword: DEMO_PASSWORD,
+          }),
+        )
+      ).status,
   },
   {
     name: 'action updateUserAction',
     capability: 'users:manage',
     okStatus: 200,
-    call: async () => (await updateUserAction(initialActionState, form({ userId: String(engineerId), disabled: 'false' }))).status,
+    call: async () =>
+      (
+        await updateUserAction(
+          initialActionState,
+          form({ userId: String(engineerId), disabled: 'false' }),
+        )
+      ).status,
   },
   {
     name: 'action inviteAction',
     capability: 'invitations:create-buyer',
     okStatus: 200,
-    call: async (who) => (await inviteAction(initialActionState, form({ email: freshEmail(who), role: 'buyer' }))).status,
+    call: async (who) =>
+      (await inviteAction(initialActionState, form({ email: freshEmail(who), role: 'buyer' })))
+        .status,
   },
 ];
 
@@ -93,7 +147,8 @@ describe('role matrix: every protected handler and action answers what the capab
   beforeAll(async () => {
     await freshDatabase();
     catcher = await startTestCatcher();
-    for (const role of ['admin', 'editor', 'engineer', 'buyer'] as const) ids[role] = await userId(ACCOUNTS[role]);
+    for (const role of ['admin', 'editor', 'engineer', 'buyer'] as const)
+      ids[role] = await userId(ACCOUNTS[role]);
     engineerId = ids.engineer!;
   });
   afterAll(() => catcher.close());
@@ -111,11 +166,15 @@ describe('role matrix: every protected handler and action answers what the capab
   it('a disabled account is treated as signed out even with a live session', async () => {
     const buyer = ids.buyer!;
     signInAs(ids.admin!);
-    expect((await user.PATCH(json('PATCH', { disabled: true }), params({ id: String(buyer) }))).status).toBe(200);
+    expect(
+      (await user.PATCH(json('PATCH', { disabled: true }), params({ id: String(buyer) }))).status,
+    ).toBe(200);
     signInAs(buyer);
     expect((await me.GET(json('GET'), params({}))).status).toBe(401);
     signInAs(ids.admin!);
-    expect((await user.PATCH(json('PATCH', { disabled: false }), params({ id: String(buyer) }))).status).toBe(200);
+    expect(
+      (await user.PATCH(json('PATCH', { disabled: false }), params({ id: String(buyer) }))).status,
+    ).toBe(200);
     signInAs(buyer);
     expect((await me.GET(json('GET'), params({}))).status).toBe(200);
   });

@@ -4,7 +4,13 @@ import { areasFor, can, CAPABILITIES, invitableRoles, ROLES } from '@/lib/auth/r
 // The role table of DESIGN.md ("Who uses it"), restated independently of lib/auth/roles.ts.
 const EXPECTED: Record<string, string[]> = {
   buyer: ['account:manage-own', 'atlas:read', 'properties:read-published'],
-  engineer: ['account:manage-own', 'atlas:read', 'properties:read-published', 'checks:run', 'assessments:manage-own'],
+  engineer: [
+    'account:manage-own',
+    'atlas:read',
+    'properties:read-published',
+    'checks:run',
+    'assessments:manage-own',
+  ],
 };
 
 describe('capability table', () => {

@@ -9,7 +9,8 @@ import * as nextauth from '@/app/api/auth/[...nextauth]/route';
 
 type Authorize = (c: Record<string, string>) => Promise<{ id: string; role: string } | null>;
 const provider = authOptions.providers[0] as unknown as { options: { authorize: Authorize } };
-const authorize = (email: string, password: string) => provider.options.authorize({ email, password });
+const authorize = (email: string, password: string) =>
+  provider.options.authorize({ email, password });
 
 describe('credentials sign-in', () => {
   beforeAll(async () => {
@@ -42,9 +43,18 @@ describe('credentials sign-in', () => {
     // Even the right password is refused while locked.
     await expect(authorize(email, DEMO_PASSWORD)).rejects.toThrow('RateLimited');
 
-    const body = new URLSearchParams({ email, password: DEMO_PASSWORD, csrfToken: 'x', json: 'true' });
+    const body = new URLSearchParams({
+      email,
+      password: DEMO_PASSWORD,
+      csrfToken: 'x',
+      json: 'true',
+    });
     const res = await nextauth.POST(
-      new Request('http://tenderline.test/api/auth/callback/credentials', { method: 'POST', body, headers: { 'content-type': 'application/x-www-form-urlencoded' } }),
+      new Request('http://tenderline.test/api/auth/callback/credentials', {
+        method: 'POST',
+        body,
+        headers: { 'content-type': 'application/x-www-form-urlencoded' },
+      }),
       { params: Promise.resolve({ nextauth: ['callback', 'credentials'] }) },
     );
     expect(res.status).toBe(429);

@@ -26,7 +26,9 @@ export default async function AuditPage() {
           <tbody>
             {entries.map((e) => (
               <tr key={e.id} className="border-t border-stone-200 align-top">
-                <td className="num px-3 py-2 text-xs">{e.createdAt.replace('T', ' ').slice(0, 19)}</td>
+                <td className="num px-3 py-2 text-xs">
+                  {e.createdAt.replace('T', ' ').slice(0, 19)}
+                </td>
                 <td className="px-3 py-2">{e.actor ?? '—'}</td>
                 <td className="px-3 py-2">{e.action}</td>
                 <td className="px-3 py-2">

@@ -11,21 +11,31 @@ export default async function OutboxPage() {
   return (
     <section>
       <PageTitle title="Admin">
-        Messages received by the local mail catcher. In production the same mail goes to the site&apos;s mail provider.
+        Messages received by the local mail catcher. In production the same mail goes to the
+        site&apos;s mail provider.
       </PageTitle>
       <AdminTabs current="/admin/outbox" />
       {messages.length === 0 ? <p className="text-sm text-stone-600">No mail yet.</p> : null}
       <ul className="space-y-4" data-testid="outbox">
         {messages.map((m) => (
-          <li key={m.id} className="rounded-lg border border-stone-200 bg-white p-4" data-testid="outbox-message">
+          <li
+            key={m.id}
+            className="rounded-lg border border-stone-200 bg-white p-4"
+            data-testid="outbox-message"
+          >
             <div className="flex flex-wrap justify-between gap-2 text-sm">
               <span className="font-medium">{m.subject}</span>
-              <span className="num text-xs text-stone-500">{m.receivedAt.replace('T', ' ').slice(0, 19)} UTC</span>
+              <span className="num text-xs text-stone-500">
+                {m.receivedAt.replace('T', ' ').slice(0, 19)} UTC
+              </span>
             </div>
             <p className="text-xs text-stone-500">
               from {m.from} to {m.to}
             </p>
-            <pre className="mt-2 whitespace-pre-wrap break-all text-sm text-stone-800" data-testid="outbox-body">
+            <pre
+              className="mt-2 whitespace-pre-wrap break-all text-sm text-stone-800"
+              data-testid="outbox-body"
+            >
               {m.text}
             </pre>
           </li>

@@ -13,7 +13,9 @@ export default async function UsersPage() {
   const users = await listUsers(actor);
   return (
     <section>
-      <PageTitle title="Admin">Users, roles and invitations. Every change is written to the audit log.</PageTitle>
+      <PageTitle title="Admin">
+        Users, roles and invitations. Every change is written to the audit log.
+      </PageTitle>
       <AdminTabs current="/admin/users" />
       <div className="overflow-x-auto rounded-lg border border-stone-200 bg-white">
         <table className="w-full text-left text-sm">

@@ -6,9 +6,11 @@ export const metadata = { title: 'Accept invitation' };
 export const dynamic = 'force-dynamic';
 
 const PROBLEMS = {
-  invalid: 'This invitation link is not valid. Check that you copied the whole link, or ask for a new invitation.',
+  invalid:
+    'This invitation link is not valid. Check that you copied the whole link, or ask for a new invitation.',
   used: 'This invitation has already been used. Sign in with the password you chose, or ask for a new invitation.',
-  expired: 'This invitation has expired (links work for 7 days). Ask the person who invited you for a new one.',
+  expired:
+    'This invitation has expired (links work for 7 days). Ask the person who invited you for a new one.',
 } as const;
 
 export default async function InvitePage({ params }: { params: Promise<{ token: string }> }) {

@@ -10,7 +10,10 @@ type Context = { params: Promise<{ nextauth: string[] }> };
 async function POST(request: Request, context: Context) {
   const { nextauth } = await context.params;
   if (nextauth[0] === 'callback' && nextauth[1] === 'credentials') {
-    const form = await request.clone().formData().catch(() => null);
+    const form = await request
+      .clone()
+      .formData()
+      .catch(() => null);
     const email = form?.get('email');
     if (typeof email === 'string' && email) {
       const wait = await lockedForMs(throttleKey(email));

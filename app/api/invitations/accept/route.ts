@@ -4,7 +4,9 @@ import { acceptInvitation } from '@/lib/data/invitations';
 import { handle, readJson } from '@/lib/http/handler';
 import { parseInput } from '@/lib/validation/parse';
 
-const tokenSchema = z.object({ token: z.string({ error: 'The invitation token is required.' }).min(1).max(200) });
+const tokenSchema = z.object({
+  token: z.string({ error: 'The invitation token is required.' }).min(1).max(200),
+});
 
 /** Public: spend an invitation token, creating the account. { token, name, password, confirmPassword } */
 export const POST = handle(async (request) => {
