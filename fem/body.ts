@@ -1,0 +1,59 @@
+import { buildCondensedBody, type FemBody } from './body-build';
+import { FemInputError } from './errors';
+import type { BodyModel, MeshLevel, UnitBodyKey } from './types';
+import { requireFinite, requirePoisson } from './validate';
+
+export type { FemBody } from './body-build';
+
+/** Allowed range of the axial/equatorial radius ratio of the unit body. */
+export const ASPECT_MIN = 0.3;
+export const ASPECT_MAX = 3;
+
+const MODELS: readonly BodyModel[] = ['axisymmetric', 'plane-strain'];
+const LEVELS: readonly MeshLevel[] = ['coarse', 'normal', 'fine'];
+/** Bodies kept, least recently used dropped first (a normal body holds ≈ 1.5 MB, a fine ≈ 6 MB). */
+export const CACHE_LIMIT = 32;
+const cache = new Map<string, FemBody>();
+
+/**
+ * The unit body (equatorial radius 1 m, E = 1 Pa) condensed onto the axial DOFs of its candidate
+ * contact nodes (surface nodes from the pole out to r = 0.6), built once per
+ * (model, aspect, poisson, level) and cached in memory (up to CACHE_LIMIT bodies, LRU).
+ * Scale per the CondensedBody contract: axisymmetric K_real = E·R·K, plane strain K_real = E·K per metre of thickness (half slice,
+ * see FemBody.forceFactor). Throws FemInputError naming the field for an invalid key.
+ * The returned object is shared: do not mutate its arrays or K.
+ */
+export function getCondensedBody(key: UnitBodyKey): FemBody {
+  const valid = validateKey(key);
+  const id = `${valid.model}|${valid.aspect}|${valid.poisson}|${valid.level}`;
+  const hit = cache.get(id);
+  if (hit) {
+    cache.delete(id);
+    cache.set(id, hit);
+    return hit;
+  }
+  const body = buildCondensedBody(valid);
+  cache.set(id, body);
+  if (cache.size > CACHE_LIMIT) cache.delete(cache.keys().next().value as string);
+  return body;
+}
+
+/** Empties the in-memory cache of condensed bodies (tests, memory pressure). */
+export function clearCondensedBodyCache(): void {
+  cache.clear();
+}
+
+function validateKey(key: UnitBodyKey): UnitBodyKey {
+  if (!MODELS.includes(key.model)) {
+    throw new FemInputError('model', `model must be one of ${MODELS.join(', ')}`);
+  }
+  if (!LEVELS.includes(key.level)) {
+    throw new FemInputError('level', `level must be one of ${LEVELS.join(', ')}`);
+  }
+  requireFinite('aspect', key.aspect);
+  if (key.aspect < ASPECT_MIN || key.aspect > ASPECT_MAX) {
+    throw new FemInputError('aspect', `aspect must lie between ${ASPECT_MIN} and ${ASPECT_MAX}`);
+  }
+  requirePoisson('poisson', key.poisson);
+  return { model: key.model, aspect: key.aspect, poisson: key.poisson, level: key.level };
+}

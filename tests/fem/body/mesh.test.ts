@@ -1,0 +1,86 @@
+import { describe, expect, it } from 'vitest';
+import { MESH_LEVELS } from '../../../fem/mesh/mesh-levels';
+import { meshQuality } from '../../../fem/mesh/mesh-quality';
+import { quarterEllipseMesh } from '../../../fem/mesh/quarter-ellipse';
+import type { MeshLevel } from '../../../fem/types';
+
+const LEVELS: MeshLevel[] = ['coarse', 'normal', 'fine'];
+
+/** Shoelace area of a closed polygon through the given nodes. */
+function polygonArea(r: Float64Array, z: Float64Array, loop: number[]): number {
+  let s = 0;
+  for (let i = 0; i < loop.length; i++) {
+    const a = loop[i];
+    const b = loop[(i + 1) % loop.length];
+    s += r[a] * z[b] - r[b] * z[a];
+  }
+  return 0.5 * s;
+}
+
+describe('quarter-ellipse mesh', () => {
+  for (const level of LEVELS) {
+    for (const aspect of [0.5, 1, 2, 0.3, 3]) {
+      it(`${level}, aspect ${aspect}: valid elements that tile the section`, () => {
+        const mesh = quarterEllipseMesh(aspect, MESH_LEVELS[level]);
+        const q = meshQuality(mesh);
+        // Bilinear map is one-to-one iff det J > 0 at the corners (then everywhere inside);
+        // Gauss points are checked too (Cook et al. 2002, isoparametric elements [memory]).
+        expect(q.minDetJ).toBeGreaterThan(0);
+        // Quality floor [practice]: no corner angle under ~15° (sine 0.25) even at aspect 0.3 / 3.
+        expect(q.minCornerSine).toBeGreaterThan(0.25);
+
+        // Element areas sum to the area inside the boundary polygon (midplane, surface, axis):
+        // with positive Jacobians this means no gaps or overlaps. Tolerance 1e-12 (round-off).
+        let area = 0;
+        for (let e = 0; e < mesh.quads.length / 4; e++) {
+          area += polygonArea(
+            mesh.nodeR,
+            mesh.nodeZ,
+            Array.from(mesh.quads.subarray(4 * e, 4 * e + 4)),
+          );
+        }
+        const loop = [
+          ...mesh.midplane,
+          ...[...mesh.surface].reverse().slice(1),
+          ...mesh.axis.slice(1, -1),
+        ];
+        const boundary = polygonArea(mesh.nodeR, mesh.nodeZ, loop);
+        expect(Math.abs(area - boundary)).toBeLessThan(1e-12);
+        // And close to the quarter ellipse πab/4 (chords cut a little off; 1 % bound for the coarse level).
+        expect(Math.abs(boundary / ((Math.PI * aspect) / 4) - 1)).toBeLessThan(0.01);
+      });
+    }
+  }
+
+  it('puts boundary nodes on the boundary, the surface ordered from the pole', () => {
+    const aspect = 1.7;
+    const m = quarterEllipseMesh(aspect, MESH_LEVELS.normal);
+    for (const v of m.axis) expect(m.nodeR[v]).toBe(0);
+    for (const v of m.midplane) expect(m.nodeZ[v]).toBe(0);
+    expect(m.nodeZ[m.surface[0]]).toBeCloseTo(aspect, 14);
+    for (let i = 0; i < m.surface.length; i++) {
+      const v = m.surface[i];
+      // On the ellipse r² + (z/a)² = 1 to round-off (tolerance 1e-12).
+      expect(Math.abs(m.nodeR[v] ** 2 + (m.nodeZ[v] / aspect) ** 2 - 1)).toBeLessThan(1e-12);
+      if (i > 0) expect(m.nodeR[v]).toBeGreaterThan(m.nodeR[m.surface[i - 1]]);
+    }
+  });
+
+  for (const level of LEVELS) {
+    it(`${level}: fine near the pole, spacing growing with distance, to r ≥ 0.6`, () => {
+      const p = MESH_LEVELS[level];
+      const m = quarterEllipseMesh(1, p);
+      const r = Array.from(m.surface, (v) => m.nodeR[v]);
+      // Brief's spacing at the pole (0.02 / 0.01 / 0.005 of the radius); 1 % for the arc/chord.
+      expect(Math.abs(r[1] - p.poleSpacing)).toBeLessThan(0.01 * p.poleSpacing);
+      const reach = r.findIndex((x) => x > 0.6);
+      expect(reach).toBeGreaterThan(0);
+      for (let i = 1; i <= reach; i++) {
+        const h = r[i] - r[i - 1];
+        // Surface step never above 1.5× the pole spacing or 15 % of the distance from the pole,
+        // so a contact of radius a ≥ 0.05 spans several nodes [practice].
+        expect(h).toBeLessThan(Math.max(1.5 * p.poleSpacing, 0.15 * r[i]));
+      }
+    });
+  }
+});
