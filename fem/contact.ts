@@ -1,0 +1,163 @@
+import { CholeskyDecomposition, Matrix } from 'ml-matrix';
+import { FemConvergenceError, FemInputError } from './errors';
+
+/** A condensed contact system held as its compliance (flexibility) C = K⁻¹. */
+export interface ContactSystem {
+  size: number;
+  /** C = K⁻¹ (m/N for a real body), symmetric positive definite */
+  compliance: Matrix;
+  /** the same, row-major, for fast products */
+  flat: Float64Array;
+}
+
+/** Options of one contact solve. */
+export interface ContactOptions {
+  /** initial axial gap g_i ≥ 0 (m) between node i and the undisplaced pad; Infinity = unreachable */
+  gap: Float64Array;
+  /** pad travel d (m) toward the centre; the pad face sits at g_i − d in displacement terms */
+  travel: number;
+  /** series compliance of the facing per node (m/N), e.g. t_l / (E_l A_i); zero or absent = rigid */
+  facingCompliance?: Float64Array;
+  /** active set to start from (warm start); default: nodes whose initial gap the travel closes */
+  initialActive?: Uint8Array;
+  /** iteration limit; default 2·size + 20 */
+  maxIterations?: number;
+}
+
+/** Converged contact state. Force p_i ≥ 0 is the compressive load the pad puts on node i. */
+export interface ContactSolution {
+  active: Uint8Array;
+  /** p_i ≥ 0 (N): the body feels f_z = −p_i */
+  force: Float64Array;
+  /** axial displacement u_i (m), negative toward the centre: u = −C p */
+  displacement: Float64Array;
+  /** remaining gap s_i ≥ 0 (m) between node and facing surface; 0 in contact, Infinity if unreachable */
+  gap: Float64Array;
+  iterations: number;
+  added: number;
+  released: number;
+}
+
+/** Builds the contact system from a condensed stiffness K (SPD); throws FemInputError otherwise. */
+export function createContactSystem(stiffness: Matrix): ContactSystem {
+  const n = stiffness.rows;
+  if (!stiffness.isSquare()) throw new FemInputError('stiffness', 'stiffness must be square');
+  const scale = Math.max(stiffness.max(), -stiffness.min());
+  const sym = new Matrix(n, n);
+  for (let i = 0; i < n; i++) {
+    for (let j = 0; j < n; j++) {
+      const a = stiffness.get(i, j);
+      const b = stiffness.get(j, i);
+      if (!(Math.abs(a - b) <= 1e-8 * scale)) {
+        throw new FemInputError('stiffness', 'stiffness must be symmetric');
+      }
+      sym.set(i, j, (a + b) / 2);
+    }
+  }
+  const chol = new CholeskyDecomposition(sym);
+  if (!chol.isPositiveDefinite()) {
+    throw new FemInputError('stiffness', 'stiffness must be positive definite');
+  }
+  const inv = chol.solve(Matrix.eye(n));
+  const compliance = new Matrix(n, n);
+  const flat = new Float64Array(n * n);
+  for (let i = 0; i < n; i++) {
+    for (let j = 0; j < n; j++) {
+      const c = (inv.get(i, j) + inv.get(j, i)) / 2;
+      compliance.set(i, j, c);
+      flat[i * n + j] = c;
+    }
+  }
+  return { size: n, compliance, flat };
+}
+
+/**
+ * Unilateral frictionless contact by an active set, as the complementarity problem
+ * s = (g − d) + (C + D_f) p, s ≥ 0, p ≥ 0, s·p = 0 (D_f: facing compliance in series).
+ * Active nodes get their displacement imposed (s_i = 0), solved on the active submatrix;
+ * nodes with tensile force are released and penetrating nodes added, all at once; if a set
+ * recurs, it switches to flipping the lowest-index violation (Murty's rule, finite for the
+ * positive-definite C). Throws FemConvergenceError past the iteration limit.
+ */
+export function solveContact(system: ContactSystem, options: ContactOptions): ContactSolution {
+  const n = system.size;
+  const C = system.flat;
+  const { gap, travel } = options;
+  if (gap.length !== n) throw new FemInputError('gap', 'gap must have one entry per contact node');
+  const facing = options.facingCompliance ?? new Float64Array(n);
+  const q = gap.map((g) => g - travel);
+  const reachable = q.map((v) => (Number.isFinite(v) ? 1 : 0));
+  const active = new Uint8Array(n);
+  for (let i = 0; i < n; i++) {
+    const start = options.initialActive ? options.initialActive[i] === 1 : q[i] < 0;
+    active[i] = start && reachable[i] ? 1 : 0;
+  }
+  const tolS = 1e-10 * Math.max(...q.filter(Number.isFinite).map(Math.abs), travel);
+  const maxIterations = options.maxIterations ?? 2 * n + 20;
+  const seen = new Set<string>();
+  let murty = false;
+  let added = 0;
+  let released = 0;
+  for (let iteration = 1; iteration <= maxIterations; iteration++) {
+    const p = solveActive(system.compliance, facing, q, active);
+    const s = new Float64Array(n);
+    for (let i = 0; i < n; i++) {
+      let v = q[i] + facing[i] * p[i];
+      for (let j = 0; j < n; j++) if (p[j] !== 0) v += C[i * n + j] * p[j];
+      s[i] = v;
+    }
+    const tolP = 1e-10 * Math.max(...p.map(Math.abs));
+    const flips: number[] = [];
+    for (let i = 0; i < n; i++) {
+      if (active[i] && p[i] < -tolP) flips.push(i);
+      else if (!active[i] && reachable[i] && s[i] < -tolS) flips.push(i);
+    }
+    if (flips.length === 0) {
+      const displacement = new Float64Array(n);
+      for (let i = 0; i < n; i++) {
+        let v = 0;
+        for (let j = 0; j < n; j++) if (p[j] !== 0) v -= C[i * n + j] * p[j];
+        displacement[i] = v;
+        if (active[i]) s[i] = 0;
+      }
+      return { active, force: p, displacement, gap: s, iterations: iteration, added, released };
+    }
+    for (const i of murty ? flips.slice(0, 1) : flips) {
+      if (active[i]) released++;
+      else added++;
+      active[i] = active[i] ? 0 : 1;
+    }
+    const key = active.join('');
+    if (seen.has(key)) murty = true;
+    seen.add(key);
+  }
+  throw new FemConvergenceError(
+    `contact active set did not settle within ${maxIterations} iterations (travel ${travel} m)`,
+  );
+}
+
+/** Forces on the active set with every active gap closed: (C + D_f)_AA p_A = −q_A. */
+function solveActive(
+  C: Matrix,
+  facing: Float64Array,
+  q: Float64Array,
+  active: Uint8Array,
+): Float64Array {
+  const idx: number[] = [];
+  active.forEach((a, i) => a && idx.push(i));
+  const p = new Float64Array(active.length);
+  if (idx.length === 0) return p;
+  const sub = C.selection(idx, idx);
+  const rhs = new Matrix(idx.length, 1);
+  idx.forEach((i, k) => {
+    sub.set(k, k, sub.get(k, k) + facing[i]);
+    rhs.set(k, 0, -q[i]);
+  });
+  const chol = new CholeskyDecomposition(sub);
+  if (!chol.isPositiveDefinite()) {
+    throw new FemConvergenceError('contact submatrix lost positive definiteness');
+  }
+  const x = chol.solve(rhs);
+  idx.forEach((i, k) => (p[i] = x.get(k, 0)));
+  return p;
+}

@@ -1,0 +1,70 @@
+import { FemConvergenceError } from './errors';
+import type { BodyModel } from './types';
+
+/** Standard gravity g, m/s² (CGPM 1901). */
+export const STANDARD_GRAVITY = 9.80665;
+
+/**
+ * Fruit mass from density ρ (kg/m³) and radii (m): spheroid (4/3)π R_eq² R_ax in kg; for the
+ * plane-strain slice the elliptical prism ρ π R_eq R_ax in kg per metre of length.
+ */
+export function fruitMass(
+  model: BodyModel,
+  equatorialRadius: number,
+  axialRadius: number,
+  density: number,
+): number {
+  return model === 'axisymmetric'
+    ? density * (4 / 3) * Math.PI * equatorialRadius ** 2 * axialRadius
+    : density * Math.PI * equatorialRadius * axialRadius;
+}
+
+/** Liftability inputs of the two-pad friction grip. */
+export interface GripRule {
+  /** fruit mass, kg (or kg/m in plane strain) */
+  mass: number;
+  /** Coulomb friction coefficient μ between pad and skin */
+  friction: number;
+  /** safety factor on weight SF */
+  safetyFactor: number;
+  /** upward acceleration of the lift in g */
+  accelG: number;
+}
+
+/** Design load the grip must carry, SF·m·(g + a), N (or N/m). */
+export function requiredHoldLoad(rule: GripRule): number {
+  return rule.safetyFactor * rule.mass * STANDARD_GRAVITY * (1 + rule.accelG);
+}
+
+/**
+ * Lift ratio of two opposed pads each pressing with normal force F (N): μ·2F / (SF·m·(g + a)),
+ * from the grip rule 2μN ≥ SF·m(g + a) [practice]. ≥ 1 means the fruit can be lifted.
+ */
+export function liftRatio(padForce: number, rule: GripRule): number {
+  return (rule.friction * 2 * padForce) / requiredHoldLoad(rule);
+}
+
+/**
+ * Least travel in [lo, hi] (m) with ratio ≥ 1, by bisection, given ratio(lo) < 1 ≤ ratio(hi) and
+ * a ratio that does not decrease with travel. Stops when the bracket is narrower than `tol` (m).
+ * Returns the upper end, so the grip found always satisfies the rule.
+ */
+export function bisectGrip(
+  ratioAt: (travel: number) => number,
+  lo: number,
+  hi: number,
+  tol: number,
+): number {
+  for (let i = 0; i < 200; i++) {
+    if (hi - lo <= tol) return hi;
+    const mid = (lo + hi) / 2;
+    if (ratioAt(mid) >= 1) hi = mid;
+    else lo = mid;
+  }
+  throw new FemConvergenceError('grip bisection did not narrow the bracket');
+}
+
+/** Margin = allowed / actual (> 1 is safe), or null when either is missing or the actual is zero. */
+export function margin(allowed: number | null, actual: number): number | null {
+  return allowed === null || !(actual > 0) ? null : allowed / actual;
+}

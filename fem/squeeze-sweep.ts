@@ -1,0 +1,57 @@
+import { FemInputError } from './errors';
+import { findLiftability, runIncrements, squeezeWarnings } from './squeeze';
+import { validateSqueezeInput, type SqueezeInput } from './squeeze-input';
+import { prepareSqueeze } from './squeeze-state';
+
+/** One pad size of a sweep, SI; margins > 1 are safe, null when not computable. */
+export interface PadSweepPoint {
+  /** overall pad face diameter D, m */
+  padDiameter: number;
+  /** pad force and peak pressure at the full travel, N (N/m) and Pa */
+  finalForce: number;
+  finalPeakPressure: number;
+  /** grip travel (m), force (N), peak pressure (Pa); null if the fruit is not lifted */
+  gripTravel: number | null;
+  gripForce: number | null;
+  gripPeakPressure: number | null;
+  bruiseMargin: number | null;
+  shearMargin: number | null;
+  /** why there is no grip, or null */
+  reason: string | null;
+  /** pad warnings, and whether the contact at the grip (or full travel) reaches the rounded edge */
+  warnings: string[];
+}
+
+/**
+ * Margin versus pad size: runs the squeeze of `input` for each pad diameter (m), reusing the cached
+ * condensed body, and reports the grip point and margins per diameter. The edge radius of `input`
+ * (or its default) applies to every pad. Shear is evaluated at the grip point only.
+ * @throws FemInputError naming 'padDiameters' (empty or more than 200) or any bad input field
+ */
+export function sweepPadDiameters(
+  input: SqueezeInput,
+  diameters: readonly number[],
+): PadSweepPoint[] {
+  if (!Array.isArray(diameters) || diameters.length === 0 || diameters.length > 200) {
+    throw new FemInputError('padDiameters', 'padDiameters must list 1 to 200 diameters');
+  }
+  return diameters.map((padDiameter) => {
+    const prep = prepareSqueeze(validateSqueezeInput({ ...input, padDiameter }));
+    const track = runIncrements(prep, false);
+    const final = track[track.length - 1].state;
+    const lift = findLiftability(prep, track);
+    const grip = lift?.grip ?? null;
+    return {
+      padDiameter,
+      finalForce: final.force,
+      finalPeakPressure: final.peakPressure,
+      gripTravel: grip?.travel ?? null,
+      gripForce: grip?.force ?? null,
+      gripPeakPressure: grip?.peakPressure ?? null,
+      bruiseMargin: grip?.bruiseMargin ?? null,
+      shearMargin: grip?.shearMargin ?? null,
+      reason: lift === null ? 'no liftability inputs (density and friction)' : lift.reason,
+      warnings: squeezeWarnings(prep, grip ?? final),
+    };
+  });
+}

@@ -1,0 +1,110 @@
+/**
+ * Benchmark of the squeeze core: `npm run bench`. Per mesh level: size, cold build of the
+ * condensed body (mesh + assemble + factor + condense, cache cleared), the first squeeze on a
+ * fresh body (builds the cached compliance and stress influence), the warm 20-increment squeeze
+ * and the warm 20-diameter pad sweep (medians of repeats), and peak memory.
+ * Targets (normal mesh): cold ≤ 300 ms, warm squeeze ≤ 10 ms, sweep ≤ 200 ms.
+ */
+import {
+  clearCondensedBodyCache,
+  getCondensedBody,
+  runSqueeze,
+  sweepPadDiameters,
+  type MeshLevel,
+  type SqueezeInput,
+} from '../fem';
+
+const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
+
+function time(fn: () => void): number {
+  const t = performance.now();
+  fn();
+  return performance.now() - t;
+}
+
+function repeat(n: number, fn: () => void): number {
+  return median(Array.from({ length: n }, () => time(fn)));
+}
+
+// Reference case: 80 mm sphere, E = 3 MPa, ν = 0.35, 1 mm travel, 30 mm pad, with liftability.
+const base = (mesh: MeshLevel): SqueezeInput => ({
+  equatorialRadius: 0.04,
+  modulus: 3e6,
+  poisson: 0.35,
+  travel: 0.001,
+  steps: 20,
+  mesh,
+  padDiameter: 0.03,
+  density: 840,
+  friction: 0.4,
+  safetyFactor: 2,
+  bruiseThreshold: 150e3,
+});
+const diameters = Array.from({ length: 20 }, (_, i) => 0.006 + 0.002 * i);
+
+let peakRss = 0;
+let peakHeap = 0;
+const sample = () => {
+  const m = process.memoryUsage();
+  peakRss = Math.max(peakRss, m.rss);
+  peakHeap = Math.max(peakHeap, m.heapUsed);
+};
+
+// One throwaway pass so that JIT warm-up is not charged to the first mesh level.
+runSqueeze({ ...base('coarse'), poisson: 0.3 });
+sweepPadDiameters({ ...base('coarse'), poisson: 0.3 }, diameters);
+
+const rows: string[][] = [];
+for (const level of ['coarse', 'normal', 'fine'] as const) {
+  const key = { model: 'axisymmetric' as const, aspect: 1, poisson: 0.35, level };
+  const colds = Array.from({ length: 3 }, () => {
+    clearCondensedBodyCache();
+    const t = time(() => getCondensedBody(key));
+    sample();
+    return t;
+  });
+  const input = base(level);
+  const first = time(() => runSqueeze(input));
+  sample();
+  const squeeze = repeat(9, () => runSqueeze(input));
+  const sweep = repeat(3, () => sweepPadDiameters(input, diameters));
+  sample();
+  const body = getCondensedBody(key);
+  rows.push([
+    level,
+    String(body.nodes),
+    String(body.dofs),
+    String(body.contactR.length),
+    colds[0].toFixed(0),
+    median(colds).toFixed(0),
+    first.toFixed(1),
+    squeeze.toFixed(2),
+    sweep.toFixed(1),
+    (peakRss / 2 ** 20).toFixed(0),
+    (peakHeap / 2 ** 20).toFixed(0),
+  ]);
+}
+
+const head = [
+  'mesh',
+  'nodes',
+  'DOFs',
+  'contact',
+  'cold ms',
+  'cold med',
+  '1st sq ms',
+  'squeeze ms',
+  'sweep ms',
+  'rss MB',
+  'heap MB',
+];
+const widths = head.map((h, i) => Math.max(h.length, ...rows.map((r) => r[i].length)));
+const line = (cells: string[]) => cells.map((c, i) => c.padStart(widths[i])).join('  ');
+console.log(line(head));
+for (const r of rows) console.log(line(r));
+console.log(
+  'cold: first build after clearing the cache (and median of 3); 1st sq: first squeeze on the ' +
+    'fresh body (compliance + stress influence); squeeze: 20 increments + grip, median of 9; ' +
+    'sweep: 20 pad diameters, median of 3; memory: peaks so far (cumulative).',
+);
+console.log('targets (normal): cold ≤ 300 ms, squeeze ≤ 10 ms, sweep ≤ 200 ms');

@@ -1,0 +1,73 @@
+import { execFile } from 'node:child_process';
+import path from 'node:path';
+import { promisify } from 'node:util';
+import { describe, expect, it } from 'vitest';
+
+const run = promisify(execFile);
+const root = path.resolve(import.meta.dirname, '../../..');
+const tsx = path.join(root, 'node_modules/.bin/tsx');
+const cli = (args: string[]) => run(tsx, ['scripts/fem.ts', 'squeeze', ...args], { cwd: root });
+
+const valid = [
+  '--diameter-mm',
+  '80',
+  '--modulus-mpa',
+  '3',
+  '--poisson',
+  '0.35',
+  '--travel-mm',
+  '1',
+  '--steps',
+  '5',
+  '--mesh',
+  'coarse',
+  '--pad-diameter-mm',
+  '30',
+  '--density',
+  '840',
+  '--friction',
+  '0.4',
+  '--safety-factor',
+  '2',
+  '--threshold-kpa',
+  '150',
+];
+
+describe('fem CLI (scripts/fem.ts)', () => {
+  it('prints one JSON object for a valid run', async () => {
+    const { stdout } = await cli([...valid, '--json']);
+    const out = JSON.parse(stdout);
+    expect(out.steps).toHaveLength(5);
+    expect(out.final.travel_mm).toBeCloseTo(1, 6);
+    expect(out.final.force_n).toBeGreaterThan(0);
+    expect(out.steps[0]).toHaveProperty('lift_ratio');
+    expect(out.grip.travel_mm).toBeGreaterThan(0);
+    // margin = threshold / peak at grip (DESIGN.md); 1e-3 relative: both printed to 3–4 figures.
+    expect(out.grip.margin).toBeCloseTo(150 / out.grip.peak_pressure_kpa, 2);
+    expect(out.hertz.at_travel.force_n).toBeGreaterThan(0);
+    expect(out.mesh).toMatchObject({ level: 'coarse' });
+    expect(out.profile[0]).toHaveProperty('r_mm');
+  }, 30_000);
+
+  it.each([
+    ['an unknown option', ['--bogus', '1']],
+    ['a non-number', ['--poisson', 'abc']],
+    ['a bad Poisson ratio', ['--poisson', '0.6']],
+    ['a bad mesh name', ['--mesh', 'medium']],
+  ])(
+    'exits 2 with one line on stderr for %s',
+    async (_name, patch) => {
+      const args = [...valid];
+      const at = args.indexOf(patch[0]);
+      if (at >= 0) args.splice(at, 2, ...patch);
+      else args.push(...patch);
+      const err = await cli(args).then(
+        () => null,
+        (e: { code: number; stderr: string }) => e,
+      );
+      expect(err?.code).toBe(2);
+      expect(err?.stderr.trim().split('\n')).toHaveLength(1);
+    },
+    30_000,
+  );
+});

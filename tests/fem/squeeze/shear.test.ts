@@ -1,0 +1,34 @@
+import { describe, expect, it } from 'vitest';
+import { describeState, prepareSqueeze, solveAt, validateSqueezeInput } from '../../../fem';
+
+// Consistency [computed]: the cached stress influence used per increment must give the same
+// largest shear as the body's own recover() + stresses() on the same contact displacements.
+describe('subsurface shear from the stress influence', () => {
+  it.each(['axisymmetric', 'plane-strain'] as const)('matches recover + stresses (%s)', (model) => {
+    const E = 3e6;
+    const R = 0.04;
+    const c = validateSqueezeInput({
+      model,
+      equatorialRadius: R,
+      modulus: E,
+      poisson: 0.35,
+      travel: 0.001,
+      mesh: 'coarse',
+    });
+    const prep = prepareSqueeze(c);
+    const sol = solveAt(prep, 0.001);
+    const { state } = describeState(prep, sol, 0.001, true);
+    const u = prep.body.recover(sol.displacement.map((x) => x / R));
+    let best = 0;
+    for (const s of prep.body.stresses(u)) {
+      if (s.r > state.contactRadius / R) continue;
+      const centre = (s.srr + s.szz) / 2;
+      const rad = Math.hypot((s.srr - s.szz) / 2, s.srz);
+      const top = Math.max(centre + rad, s.stt);
+      const bottom = Math.min(centre - rad, s.stt);
+      best = Math.max(best, (top - bottom) / 2);
+    }
+    // 1e-9 relative: two evaluation orders of the same linear map.
+    expect((state.maxShear as number) / (best * E)).toBeCloseTo(1, 9);
+  });
+});
