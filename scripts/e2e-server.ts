@@ -1,4 +1,5 @@
 // The app as the browser tests see it: a fresh SQLite file, migrated and seeded, a catcher, next start.
+import { randomBytes } from 'node:crypto';
 import fs from 'node:fs';
 import path from 'node:path';
 import knex from 'knex';
@@ -24,6 +25,6 @@ await serve({
     KNEX_ENV: 'development',
     DATABASE_FILE: file,
     NEXTAUTH_URL: `http://127.0.0.1:${port}`,
-    NEXTAUTH_SECRET: 'e2e-only-secret-not-for-production-0123456789',
+    NEXTAUTH_SECRET: randomBytes(32).toString('base64url'),
   },
 });

@@ -58,3 +58,16 @@ test('an unknown address shows the not-found page', async ({ page }) => {
   expect(response?.status()).toBe(404);
   await expect(page.getByRole('heading', { name: 'No page here' })).toBeVisible();
 });
+
+test('repeated failed sign-ins are refused with a clear message', async ({ page }) => {
+  await page.goto('/sign-in');
+  await page.getByLabel('E-mail').fill('someone.guessing@elsewhere.example');
+  for (let i = 0; i < 5; i++) {
+    await page.getByLabel('Password').fill(`guess-${i}`);
+    await page.getByRole('button', { name: 'Sign in' }).click();
+    await expect(page.getByTestId('form-error')).toContainText('do not match');
+  }
+  await page.getByLabel('Password').fill('guess-6');
+  await page.getByRole('button', { name: 'Sign in' }).click();
+  await expect(page.getByTestId('form-error')).toContainText('Too many failed sign-ins');
+});
