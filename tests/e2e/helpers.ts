@@ -1,13 +1,8 @@
 import { expect, type Page } from '@playwright/test';
 
-// Demo accounts from seeds/01_users.ts (demo only).
-export const PASSWORD = 'kestrel-demo-2026';
-export const ACCOUNTS = {
-  admin: 'admin@kestrelvale.example',
-  editor: 'editor@kestrelvale.example',
-  engineer: 'engineer@kestrelvale.example',
-  buyer: 'buyer@kestrelvale.example',
-} as const;
+import { ACCOUNTS, DEMO_PASSWORD as PASSWORD } from '../support/accounts';
+
+export { ACCOUNTS, PASSWORD };
 
 export async function signIn(page: Page, email: string, password = PASSWORD) {
   await page.goto('/sign-in');
