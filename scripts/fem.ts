@@ -188,10 +188,20 @@ function pretty(data: ReturnType<typeof toJson>): string {
 
 const fmt = (v: number | null, width: number) => (v === null ? '—' : String(v)).padStart(width);
 
+/** `--x -3` → `--x=-3`, so a negative number reaches validation and gets its specific message. */
+const joinNegatives = (argv: string[]) =>
+  argv.flatMap((arg, i) =>
+    /^-\d|^-\.\d/.test(arg) && argv[i - 1]?.startsWith('--') && !argv[i - 1].includes('=')
+      ? []
+      : /^--[a-z-]+$/.test(arg) && /^-\d|^-\.\d/.test(argv[i + 1] ?? '')
+        ? [`${arg}=${argv[i + 1]}`]
+        : [arg],
+  );
+
 function main(argv: string[]): number {
   try {
     const { values, positionals } = parseArgs({
-      args: argv,
+      args: joinNegatives(argv),
       options: OPTIONS,
       strict: true,
       allowPositionals: true,

@@ -54,6 +54,7 @@ describe('fem CLI (scripts/fem.ts)', () => {
     ['a non-number', ['--poisson', 'abc']],
     ['a bad Poisson ratio', ['--poisson', '0.6']],
     ['a bad mesh name', ['--mesh', 'medium']],
+    ['a negative modulus', ['--modulus-mpa', '-3']],
   ])(
     'exits 2 with one line on stderr for %s',
     async (_name, patch) => {
