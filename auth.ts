@@ -10,11 +10,7 @@ import {
 } from '@/lib/auth/throttle';
 import { signInSchema } from '@/lib/validation/users';
 
-/** Error codes the sign-in page turns into messages. */
-export const SIGN_IN_ERRORS = {
-  CredentialsSignin: 'That e-mail and password do not match an active account.',
-  RateLimited: 'Too many failed sign-ins for this e-mail. Wait 15 minutes and try again.',
-} as const;
+export { SIGN_IN_ERRORS } from '@/lib/auth/sign-in-messages';
 
 export const authOptions: NextAuthOptions = {
   session: { strategy: 'jwt', maxAge: 8 * 3600 },

@@ -6,11 +6,7 @@ import { useState, type FormEvent } from 'react';
 import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
 import { FormMessage } from '@/components/ui/form-message';
-
-const MESSAGES: Record<string, string> = {
-  CredentialsSignin: 'That e-mail and password do not match an active account.',
-  RateLimited: 'Too many failed sign-ins for this e-mail. Wait 15 minutes and try again.',
-};
+import { SIGN_IN_ERRORS as MESSAGES } from '@/lib/auth/sign-in-messages';
 
 /** Where to go after signing in: only a path on this site, never another host. */
 function safeCallback(value: string | null): string {

@@ -1,6 +1,7 @@
 import 'server-only';
 import { getServerSession } from 'next-auth';
 import { forbidden, redirect } from 'next/navigation';
+import { cache } from 'react';
 import { authOptions } from '@/auth';
 import { getActiveActor } from '@/lib/data/users';
 import { ForbiddenError, UnauthenticatedError } from '@/lib/errors';
@@ -9,14 +10,15 @@ import { can, type Capability } from './roles';
 
 /**
  * The signed-in user, read fresh from the database: a disabled account or a changed role takes
- * effect on the next request, whatever the session cookie still says.
+ * effect on the next request, whatever the session cookie still says. Memoised per request
+ * (React cache), so the layout and the page share one lookup.
  */
-export async function getCurrentActor(): Promise<Actor | null> {
+export const getCurrentActor = cache(async (): Promise<Actor | null> => {
   const session = await getServerSession(authOptions);
   const id = Number(session?.user?.id);
   if (!Number.isInteger(id) || id <= 0) return null;
   return getActiveActor(id);
-}
+});
 
 /** For route handlers and server actions: the actor, or a 401/403 AppError. */
 export async function requireActor(capability?: Capability): Promise<Actor> {
