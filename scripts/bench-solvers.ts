@@ -8,35 +8,7 @@ import { MESH_LEVELS } from '../fem/mesh/mesh-levels';
 import { quarterEllipseMesh } from '../fem/mesh/quarter-ellipse';
 import { csrGet, type CsrMatrix } from '../fem/solver/csr';
 import { solveSymmetric } from '../fem/solver/symmetric-solve';
-
-interface SparseData {
-  values: number[];
-  index: number[];
-  ptr: number[];
-  size: [number, number];
-}
-type SparseCtor = new (data: SparseData) => math.Matrix;
-const SparseMatrix = (math as unknown as { SparseMatrix: SparseCtor }).SparseMatrix;
-
-/** mathjs SparseMatrix (CSC) of the rows/columns `dofs` of symmetric K. */
-function toMathjs(k: CsrMatrix, dofs: number[]): math.Matrix {
-  const map = new Int32Array(k.n).fill(-1);
-  dofs.forEach((d, i) => (map[d] = i));
-  const values: number[] = [];
-  const index: number[] = [];
-  const ptr = [0];
-  for (const col of dofs) {
-    for (let p = k.rowPtr[col]; p < k.rowPtr[col + 1]; p++) {
-      const row = map[k.colIdx[p]];
-      if (row >= 0) {
-        index.push(row);
-        values.push(k.values[p]);
-      }
-    }
-    ptr.push(index.length);
-  }
-  return new SparseMatrix({ values, index, ptr, size: [dofs.length, dofs.length] });
-}
+import { mathjsSubmatrix as toMathjs } from './mathjs-sparse';
 
 function time<T>(fn: () => T): [T, number] {
   const t0 = performance.now();
