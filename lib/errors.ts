@@ -44,6 +44,24 @@ export class ConflictError extends AppError {
   }
 }
 
+export class GoneError extends AppError {
+  constructor(message: string) {
+    super(410, 'gone', message);
+  }
+}
+
+export class PayloadTooLargeError extends AppError {
+  constructor(limitBytes: number) {
+    super(413, 'too_large', `The request body is larger than ${Math.round(limitBytes / 1024)} KB.`);
+  }
+}
+
+export class UnsupportedMediaTypeError extends AppError {
+  constructor(accepted: readonly string[]) {
+    super(415, 'unsupported_media_type', `Send the request body as ${accepted.join(' or ')}.`);
+  }
+}
+
 export class RateLimitError extends AppError {
   readonly retryAfterSeconds: number;
   constructor(message: string, retryAfterSeconds: number) {

@@ -2,7 +2,7 @@
 
 import { useActionState } from 'react';
 import { changePasswordAction } from '@/lib/actions/account';
-import { initialActionState } from '@/lib/actions/state';
+import { initialActionState } from '@/lib/actions/initial-state';
 import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
 import { FormMessage } from '@/components/ui/form-message';

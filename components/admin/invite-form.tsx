@@ -2,7 +2,7 @@
 
 import { useActionState } from 'react';
 import { inviteAction } from '@/lib/actions/invitations';
-import { initialActionState } from '@/lib/actions/state';
+import { initialActionState } from '@/lib/actions/initial-state';
 import type { Role } from '@/lib/auth/roles';
 import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';

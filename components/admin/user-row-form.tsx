@@ -2,7 +2,7 @@
 
 import { useActionState } from 'react';
 import { updateUserAction } from '@/lib/actions/users';
-import { initialActionState } from '@/lib/actions/state';
+import { initialActionState } from '@/lib/actions/initial-state';
 import { ROLES, type Role } from '@/lib/auth/roles';
 import { Button } from '@/components/ui/button';
 

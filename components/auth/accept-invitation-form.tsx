@@ -3,7 +3,7 @@
 import Link from 'next/link';
 import { useActionState } from 'react';
 import { acceptInvitationAction } from '@/lib/actions/invitations';
-import { initialActionState } from '@/lib/actions/state';
+import { initialActionState } from '@/lib/actions/initial-state';
 import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
 import { FormMessage } from '@/components/ui/form-message';

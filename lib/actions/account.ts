@@ -2,7 +2,8 @@
 
 import { requireActor } from '@/lib/auth/session';
 import { changeOwnPassword } from '@/lib/data/users';
-import { formObject, runAction, type ActionState } from './state';
+import { formObject } from '@/lib/validation/form';
+import { runAction, type ActionState } from './state';
 
 export async function changePasswordAction(
   _prev: ActionState,

@@ -2,7 +2,8 @@
 
 import { requireActor } from '@/lib/auth/session';
 import { acceptInvitation, createInvitation } from '@/lib/data/invitations';
-import { formObject, runAction, type ActionState } from './state';
+import { formObject } from '@/lib/validation/form';
+import { runAction, type ActionState } from './state';
 
 export async function inviteAction(_prev: ActionState, form: FormData): Promise<ActionState> {
   return runAction(async () => {

@@ -1,4 +1,8 @@
-import { AppError, ValidationError, type FieldErrors } from '@/lib/errors';
+import 'server-only';
+import { headers } from 'next/headers';
+import { ForbiddenError, type FieldErrors } from '@/lib/errors';
+import { errorPayload } from '@/lib/http/error-map';
+import { crossSiteMessage, crossSiteReason } from '@/lib/http/origin';
 
 /** What a server action answers; `status` mirrors the HTTP status a route handler would give. */
 export interface ActionState {
@@ -6,28 +10,22 @@ export interface ActionState {
   ok: boolean;
   message?: string;
   fieldErrors?: FieldErrors;
+  /** Values to put back into the form after an error (never passwords). */
+  values?: Record<string, string>;
 }
 
-export const initialActionState: ActionState = { status: 0, ok: false };
-
-/** Run an action body; typed errors become a state with their status and messages. */
+/**
+ * Run an action body after the same cross-site check as route handlers (proxy.ts refuses a
+ * foreign origin first with a plain 403; this is the second layer). Typed errors become a state
+ * with their status and messages, through the one error map.
+ */
 export async function runAction(body: () => Promise<string>): Promise<ActionState> {
   try {
+    const reason = crossSiteReason(await headers());
+    if (reason) throw new ForbiddenError(crossSiteMessage(reason));
     return { status: 200, ok: true, message: await body() };
   } catch (error) {
-    if (error instanceof ValidationError) {
-      return { status: 400, ok: false, message: error.message, fieldErrors: error.fieldErrors };
-    }
-    if (error instanceof AppError)
-      return { status: error.status, ok: false, message: error.message };
-    console.error(error);
-    return { status: 500, ok: false, message: 'Something went wrong on the server.' };
+    const p = errorPayload(error);
+    return { status: p.status, ok: false, message: p.message, fieldErrors: p.fieldErrors };
   }
-}
-
-/** FormData → a plain object of its string fields. */
-export function formObject(form: FormData): Record<string, string> {
-  const out: Record<string, string> = {};
-  for (const [key, value] of form.entries()) if (typeof value === 'string') out[key] = value;
-  return out;
 }

@@ -41,7 +41,8 @@ export async function getActiveActor(id: number): Promise<Actor | null> {
 
 /** Credentials check for sign-in: the enabled user with this e-mail and password, else null. */
 export async function verifyCredentials(email: string, password: string): Promise<Actor | null> {
-  const r = (await db('users').where({ email: email.toLowerCase() }).first()) as UserRecord | undefined;
+  const r = (await db('users').where({ email: email.toLowerCase() }).first()) as
+    UserRecord | undefined;
   if (!r) {
     await spendVerifyTime(password);
     return null;
@@ -53,7 +54,9 @@ export async function verifyCredentials(email: string, password: string): Promis
 
 export async function listUsers(actor: Actor): Promise<UserRow[]> {
   assertCan(actor, 'users:manage');
-  const rows = await db('users').select('id', 'email', 'name', 'role', 'disabled', 'created_at').orderBy('email');
+  const rows = await db('users')
+    .select('id', 'email', 'name', 'role', 'disabled', 'created_at')
+    .orderBy('email');
   return rows.map(toRow);
 }
 
@@ -64,7 +67,10 @@ export async function updateUser(actor: Actor, userId: number, input: unknown): 
   return db.transaction(async (trx) => {
     const before = await trx('users').where({ id: userId }).first();
     if (!before) throw new NotFoundError('No such user.');
-    if (before.id === actor.id && (change.disabled === true || (change.role && change.role !== 'admin'))) {
+    if (
+      before.id === actor.id &&
+      (change.disabled === true || (change.role && change.role !== 'admin'))
+    ) {
       throw new ValidationError('You cannot disable yourself or drop your own admin role.', {
         [change.disabled ? 'disabled' : 'role']: ['Ask another admin to make this change.'],
       });
@@ -96,8 +102,15 @@ export async function changeOwnPassword(actor: Actor, input: unknown): Promise<v
   }
   const hash = await hashPassword(change.newPassword);
   await db.transaction(async (trx) => {
-    await trx('users').where({ id: actor.id }).update({ password_hash: hash, updated_at: new Date() });
-    await recordAudit(trx, { actorId: actor.id, action: 'user.password', entity: 'user', entityId: actor.id });
+    await trx('users')
+      .where({ id: actor.id })
+      .update({ password_hash: hash, updated_at: new Date() });
+    await recordAudit(trx, {
+      actorId: actor.id,
+      action: 'user.password',
+      entity: 'user',
+      entityId: actor.id,
+    });
   });
 }
 

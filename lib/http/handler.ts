@@ -1,79 +1,70 @@
 import 'server-only';
 import { NextResponse } from 'next/server';
-import { AppError, RateLimitError, ValidationError } from '@/lib/errors';
-import { FemInputError } from '@/fem/errors';
+import { ForbiddenError, UnsupportedMediaTypeError } from '@/lib/errors';
+import { assertLengthWithin, JSON_BODY_LIMIT, readJson } from './body';
+import { errorPayload } from './error-map';
+import { crossSiteMessage, crossSiteReason } from './origin';
+
+export { readJson };
 
 /** A typed error → a JSON answer with its status; anything else → 500 without internals. */
 export function errorResponse(error: unknown): NextResponse {
-  if (error instanceof ValidationError) {
-    return NextResponse.json(
-      { error: error.code, message: error.message, fieldErrors: error.fieldErrors },
-      { status: 400 },
-    );
-  }
-  if (error instanceof FemInputError) {
-    return NextResponse.json(
-      {
-        error: 'invalid_input',
-        message: error.message,
-        fieldErrors: { [error.field]: [error.message] },
-      },
-      { status: 400 },
-    );
-  }
-  if (error instanceof RateLimitError) {
-    return NextResponse.json(
-      { error: error.code, message: error.message },
-      { status: 429, headers: { 'Retry-After': String(error.retryAfterSeconds) } },
-    );
-  }
-  if (error instanceof AppError) {
-    return NextResponse.json(
-      { error: error.code, message: error.message },
-      { status: error.status },
-    );
-  }
-  console.error(error);
+  const p = errorPayload(error);
   return NextResponse.json(
-    { error: 'server_error', message: 'Something went wrong on the server.' },
-    { status: 500 },
+    { error: p.code, message: p.message, ...(p.fieldErrors && { fieldErrors: p.fieldErrors }) },
+    { status: p.status, headers: p.headers },
   );
+}
+
+export interface HandleOptions {
+  /** Body types a write accepts; JSON unless the route says otherwise (uploads: multipart). */
+  accept?: readonly string[];
+  /** The largest body accepted, refused with 413 by Content-Length before it is read. */
+  maxBodyBytes?: number;
+}
+
+const WRITE_METHODS = new Set(['POST', 'PUT', 'PATCH', 'DELETE']);
+
+function mediaType(request: Request): string | null {
+  const value = request.headers.get('content-type');
+  return value ? value.split(';')[0].trim().toLowerCase() : null;
+}
+
+function hasBody(request: Request): boolean {
+  const length = request.headers.get('content-length');
+  return request.body !== null && length !== '0';
+}
+
+/** The guards every state-changing request passes before the route sees it. */
+function guardWrite(request: Request, options: HandleOptions): void {
+  const reason = crossSiteReason(request.headers);
+  if (reason) throw new ForbiddenError(crossSiteMessage(reason));
+  const accept = options.accept ?? ['application/json'];
+  const type = mediaType(request);
+  const bodyless = request.method === 'DELETE' && !hasBody(request);
+  if (!bodyless && (type === null || !accept.includes(type))) {
+    throw new UnsupportedMediaTypeError(accept);
+  }
+  assertLengthWithin(request, options.maxBodyBytes ?? JSON_BODY_LIMIT);
 }
 
 type Handler<C> = (request: Request, context: C) => Promise<Response>;
 
-/** Wrap a route handler so typed errors become their HTTP status. */
-export function handle<C>(fn: Handler<C>): Handler<C> {
+/**
+ * Wrap a route handler: writes must come from the app's own origin (403), carry an accepted body
+ * type (415) and fit the size limit (413); typed errors become their status; answers are never
+ * cached, since they may hold private data.
+ */
+export function handle<C>(fn: Handler<C>, options: HandleOptions = {}): Handler<C> {
   return async (request, context) => {
+    let response: Response;
     try {
-      return await fn(request, context);
+      if (WRITE_METHODS.has(request.method)) guardWrite(request, options);
+      response = await fn(request, context);
     } catch (error) {
-      return errorResponse(error);
+      response = errorResponse(error);
     }
+    if (!response.headers.has('Cache-Control')) response.headers.set('Cache-Control', 'no-store');
+    return response;
   };
-}
-
-const MAX_BODY_BYTES = 256 * 1024;
-
-/** Read a JSON body; malformed or oversized JSON is a 400. The data layer validates the shape. */
-export async function readJson(request: Request): Promise<unknown> {
-  const text = await request.text();
-  if (text.length > MAX_BODY_BYTES) throw new ValidationError('The request body is too large.');
-  try {
-    return JSON.parse(text);
-  } catch {
-    throw new ValidationError('The request body must be valid JSON.', {
-      _form: ['The request body must be valid JSON.'],
-    });
-  }
-}
-
-/** Parse a positive integer id from a route segment, or 400. */
-export function parseId(value: string, field = 'id'): number {
-  const id = Number(value);
-  if (!Number.isInteger(id) || id <= 0)
-    throw new ValidationError(`The ${field} must be a positive whole number.`, {
-      [field]: ['Must be a positive whole number.'],
-    });
-  return id;
 }

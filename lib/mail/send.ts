@@ -37,10 +37,5 @@ export async function sendMail(mail: OutgoingMail): Promise<void> {
   await transporter.sendMail({ from: s.from, ...mail });
 }
 
-/** The public base URL used in links inside e-mails. */
-export function appUrl(): string {
-  return (process.env.APP_URL ?? process.env.NEXTAUTH_URL ?? 'http://localhost:3000').replace(
-    /\/$/,
-    '',
-  );
-}
+/** The public base URL used in links inside e-mails: the app's own origin. */
+export { appUrl } from '@/lib/http/origin';

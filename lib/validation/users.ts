@@ -1,5 +1,7 @@
 import { z } from 'zod';
 import { ROLES } from '@/lib/auth/roles';
+import { formBoolean } from './form';
+import { idSchema } from './id';
 
 const email = z
   .string({ error: 'E-mail is required.' })
@@ -60,6 +62,17 @@ export const userUpdateSchema = z
     disabled: z.boolean({ error: 'Disabled must be true or false.' }).optional(),
   })
   .strict()
+  .refine((v) => v.role !== undefined || v.disabled !== undefined, {
+    message: 'Give a role or a disabled flag to change.',
+  });
+
+/** The admin users table's row form: the same change, with the id and flag as form strings. */
+export const userUpdateFormSchema = z
+  .object({
+    userId: idSchema,
+    role: roleSchema.optional(),
+    disabled: formBoolean.optional(),
+  })
   .refine((v) => v.role !== undefined || v.disabled !== undefined, {
     message: 'Give a role or a disabled flag to change.',
   });

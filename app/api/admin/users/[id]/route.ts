@@ -1,7 +1,8 @@
 import { NextResponse } from 'next/server';
 import { requireActor } from '@/lib/auth/session';
 import { updateUser } from '@/lib/data/users';
-import { handle, parseId, readJson } from '@/lib/http/handler';
+import { handle, readJson } from '@/lib/http/handler';
+import { parseId } from '@/lib/validation/id';
 
 type Context = { params: Promise<{ id: string }> };
 

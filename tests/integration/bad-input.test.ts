@@ -184,11 +184,11 @@ describe('bad input answers 400 with a field message and writes nothing', () => 
     });
   }
 
-  it('an oversized body is refused', async () => {
+  it('an oversized body is refused with 413', async () => {
     const res = await invitations.POST(
       raw(JSON.stringify({ email: 'a@b.example', pad: 'x'.repeat(300_000) })),
       params({}),
     );
-    expect(res.status).toBe(400);
+    expect(res.status).toBe(413);
   });
 });

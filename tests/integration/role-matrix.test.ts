@@ -14,7 +14,7 @@ import * as audit from '@/app/api/admin/audit/route';
 import { changePasswordAction } from '@/lib/actions/account';
 import { updateUserAction } from '@/lib/actions/users';
 import { inviteAction } from '@/lib/actions/invitations';
-import { initialActionState } from '@/lib/actions/state';
+import { initialActionState } from '@/lib/actions/initial-state';
 
 type Who = Role | 'signed-out';
 const WHO: Who[] = ['signed-out', 'admin', 'editor', 'engineer', 'buyer'];
