@@ -6,7 +6,7 @@
 export { FemConvergenceError, FemInputError } from './errors';
 export type { BodyModel, CondensedBody, MeshLevel, StressSample, UnitBodyKey } from './types';
 export { requireFinite, requireNonNegative, requirePoisson, requirePositive } from './validate';
-export * from './body';
+export * from './body/cache';
 export * from './closed-form';
 export {
   createPad,
@@ -16,15 +16,15 @@ export {
   SHARP_EDGE_RADIUS,
   type PadGeometry,
   type PadSpec,
-} from './pad';
+} from './squeeze/pad';
 export {
   createContactSystem,
   solveContact,
   type ContactOptions,
   type ContactSolution,
   type ContactSystem,
-} from './contact';
-export { contactRadius, recoverPressure, surfaceWeights } from './pressure';
+} from './solver/active-set';
+export { contactRadius, recoverPressure, surfaceWeights } from './squeeze/pressure-recovery';
 export {
   bisectGrip,
   fruitMass,
@@ -33,14 +33,14 @@ export {
   requiredHoldLoad,
   STANDARD_GRAVITY,
   type GripRule,
-} from './liftability';
+} from './squeeze/grip';
 export {
   validateSqueezeInput,
   MAX_TRAVEL_FRACTION,
   type LiftInput,
   type SqueezeCase,
   type SqueezeInput,
-} from './squeeze-input';
+} from './squeeze/01-input';
 export {
   describeState,
   padForce,
@@ -48,9 +48,9 @@ export {
   solveAt,
   type PreparedSqueeze,
   type SqueezeState,
-} from './squeeze-state';
-export { getShearField, maxShearUnder, type ShearField, type ShearPeak } from './squeeze-shear';
-export { hertzComparison, type HertzComparison, type HertzFigures } from './squeeze-hertz';
+} from './squeeze/03-contact';
+export { getShearField, maxShearUnder, type ShearField, type ShearPeak } from './squeeze/shear-field';
+export { hertzComparison, type HertzComparison, type HertzFigures } from './squeeze/hertz';
 export {
   findLiftability,
   runIncrements,
@@ -62,5 +62,5 @@ export {
   type Liftability,
   type PressurePoint,
   type SqueezeResult,
-} from './squeeze';
-export { sweepPadDiameters, type PadSweepPoint } from './squeeze-sweep';
+} from './squeeze/07-run';
+export { sweepPadDiameters, type PadSweepPoint } from './squeeze/08-sweep';

@@ -1,14 +1,14 @@
 // Benchmarks the fem skyline LDLᵀ (RCM ordering) against mathjs's sparse LU on the normal mesh:
 // one full solve, and the static condensation onto the contact DOFs. Run: npx tsx scripts/bench-solvers.ts
 import * as math from 'mathjs';
-import { assembleStiffness } from '../fem/assembly';
-import { condense } from '../fem/condense';
-import { addEdgePressure } from '../fem/elements/edge-load';
+import { assembleStiffness } from '../fem/body/assembly';
+import { condense } from '../fem/solver/condense';
+import { addEdgePressure } from '../tests/fem/support/edge-load';
 import { MESH_LEVELS } from '../fem/mesh/mesh-levels';
 import { quarterEllipseMesh } from '../fem/mesh/quarter-ellipse';
 import { csrGet, type CsrMatrix } from '../fem/solver/csr';
-import { solveSymmetric } from '../fem/solver/symmetric-solve';
-import { mathjsSubmatrix as toMathjs } from './mathjs-sparse';
+import { solveSymmetric } from '../tests/fem/support/symmetric-solve';
+import { mathjsSubmatrix as toMathjs } from '../tests/fem/support/mathjs-sparse';
 
 function time<T>(fn: () => T): [T, number] {
   const t0 = performance.now();

@@ -1,7 +1,7 @@
 import { CholeskyDecomposition } from 'ml-matrix';
 import { afterEach, describe, expect, it } from 'vitest';
-import { clearCondensedBodyCache, getCondensedBody } from '../../../fem/body';
-import { addEdgePressure } from '../../../fem/elements/edge-load';
+import { clearCondensedBodyCache, getCondensedBody } from '../../../fem/body/cache';
+import { addEdgePressure } from '../support/edge-load';
 import { FemInputError } from '../../../fem/errors';
 import type { UnitBodyKey } from '../../../fem/types';
 

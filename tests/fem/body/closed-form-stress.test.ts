@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { MeshLevel } from '../../../fem/types';
-import { solvePressureCase } from './quarter-problem';
+import { solvePressureCase } from '../support/quarter-problem';
 
 /**
  * Quarter disc (R = 1 m, D = 2 m, t = 1 m) loaded by a radial pressure over the arc from the pole

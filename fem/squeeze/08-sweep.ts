@@ -1,7 +1,7 @@
-import { FemInputError } from './errors';
-import { findLiftability, runIncrements, squeezeWarnings } from './squeeze';
-import { validateSqueezeInput, type SqueezeInput } from './squeeze-input';
-import { prepareSqueeze } from './squeeze-state';
+import { FemInputError } from '../errors';
+import { findLiftability, runIncrements, squeezeWarnings } from './07-run';
+import { validateSqueezeInput, type SqueezeInput } from './01-input';
+import { prepareSqueeze } from './03-contact';
 
 /** One pad size of a sweep, SI; margins > 1 are safe, null when not computable. */
 export interface PadSweepPoint {

@@ -1,8 +1,8 @@
-import { ASPECT_MAX, ASPECT_MIN } from './body';
-import { FemInputError } from './errors';
+import { ASPECT_MAX, ASPECT_MIN } from '../body/cache';
+import { FemInputError } from '../errors';
 import { createPad, type PadGeometry } from './pad';
-import type { BodyModel, MeshLevel } from './types';
-import { requireFinite, requireNonNegative, requirePoisson, requirePositive } from './validate';
+import type { BodyModel, MeshLevel } from '../types';
+import { requireFinite, requireNonNegative, requirePoisson, requirePositive } from '../validate';
 
 /**
  * Inputs of a squeeze check, SI units (m, Pa, kg/m³). Two identical pads squeeze the fruit along

@@ -1,5 +1,5 @@
 import { CholeskyDecomposition, Matrix } from 'ml-matrix';
-import { FemConvergenceError, FemInputError } from './errors';
+import { FemConvergenceError, FemInputError } from '../errors';
 
 /** A condensed contact system held as its compliance (flexibility) C = K⁻¹. */
 export interface ContactSystem {

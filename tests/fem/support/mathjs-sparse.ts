@@ -1,6 +1,6 @@
 // Dev-only bridge to mathjs, the independent reference solver of the tests and the solver benchmark.
 import * as math from 'mathjs';
-import type { CsrMatrix } from '../fem/solver/csr';
+import type { CsrMatrix } from '../../../fem/solver/csr';
 
 interface SparseData {
   values: number[];

@@ -1,5 +1,5 @@
-import { FemConvergenceError } from './errors';
-import type { BodyModel } from './types';
+import { FemConvergenceError } from '../errors';
+import type { BodyModel } from '../types';
 
 /** Standard gravity g, m/s² (CGPM 1901). */
 export const STANDARD_GRAVITY = 9.80665;

@@ -1,6 +1,6 @@
-import type { FemBody } from './body';
-import { elasticD, lameLambda } from './elements/elastic-d';
-import { q4Stress } from './elements/q4-stress';
+import type { FemBody } from '../body/cache';
+import { elasticD, lameLambda } from '../elements/elastic-d';
+import { q4Stress } from '../elements/q4-stress';
 
 /**
  * Stress influence of the contact nodes on the element centroids under the candidate contact

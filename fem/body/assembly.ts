@@ -1,8 +1,8 @@
-import { elasticD } from './elements/elastic-d';
-import { Q4Workspace, q4Stiffness } from './elements/q4-stiffness';
-import type { QuadMesh } from './mesh/quad-mesh';
-import type { CsrMatrix } from './solver/csr';
-import type { BodyModel } from './types';
+import { elasticD } from '../elements/elastic-d';
+import { Q4Workspace, q4Stiffness } from '../elements/q4-stiffness';
+import type { QuadMesh } from '../mesh/quad-mesh';
+import type { CsrMatrix } from '../solver/csr';
+import type { BodyModel } from '../types';
 
 /**
  * Global stiffness K (N/m) of a quad mesh, DOF layout [u_r0, u_z0, u_r1, u_z1, …], as a CSR

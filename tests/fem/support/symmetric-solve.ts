@@ -1,6 +1,6 @@
-import type { CsrMatrix } from './csr';
-import { reverseCuthillMcKee } from './rcm';
-import { SkylineMatrix } from './skyline';
+import type { CsrMatrix } from '../../../fem/solver/csr';
+import { reverseCuthillMcKee } from '../../../fem/solver/rcm';
+import { SkylineMatrix } from '../../../fem/solver/skyline';
 
 /**
  * Solves K u = f for a symmetric positive definite K (after constraints) with u = 0 on the DOFs

@@ -3,13 +3,13 @@ import { describe, expect, it } from 'vitest';
 import { elasticD } from '../../../fem/elements/elastic-d';
 import { q4Stiffness } from '../../../fem/elements/q4-stiffness';
 import type { BodyModel } from '../../../fem/types';
-import { assembleStiffness } from '../../../fem/assembly';
+import { assembleStiffness } from '../../../fem/body/assembly';
 import { centroidStresses } from '../../../fem/elements/element-stresses';
 import { q4Stress } from '../../../fem/elements/q4-stress';
 import { GAUSS_2 } from '../../../fem/elements/quad4';
 import type { QuadMesh } from '../../../fem/mesh/quad-mesh';
 import { csrMultiply } from '../../../fem/solver/csr';
-import { solveSymmetric } from '../../../fem/solver/symmetric-solve';
+import { solveSymmetric } from '../support/symmetric-solve';
 
 // A distorted (non-parallelogram) quad away from the axis, counter-clockwise; invented inputs.
 const XR = [0.5, 1.3, 1.45, 0.6];

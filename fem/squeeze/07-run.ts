@@ -1,6 +1,6 @@
-import { bisectGrip, liftRatio, margin, requiredHoldLoad } from './liftability';
-import { hertzComparison, type HertzComparison } from './squeeze-hertz';
-import { validateSqueezeInput, type SqueezeCase, type SqueezeInput } from './squeeze-input';
+import { bisectGrip, liftRatio, margin, requiredHoldLoad } from './grip';
+import { hertzComparison, type HertzComparison } from './hertz';
+import { validateSqueezeInput, type SqueezeCase, type SqueezeInput } from './01-input';
 import {
   describeState,
   padForce,
@@ -8,8 +8,8 @@ import {
   solveAt,
   type PreparedSqueeze,
   type SqueezeState,
-} from './squeeze-state';
-import type { MeshLevel } from './types';
+} from './03-contact';
+import type { MeshLevel } from '../types';
 
 /** Contact pressure at one contact node: radius r (m) from the axis, pressure (Pa, compressive +). */
 export interface PressurePoint {

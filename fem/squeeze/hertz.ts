@@ -4,8 +4,8 @@ import {
   hertzSphereAtApproach,
   hertzSphereAtForce,
   hertzSubsurfaceShear,
-} from './closed-form';
-import type { SqueezeCase } from './squeeze-input';
+} from '../closed-form';
+import type { SqueezeCase } from './01-input';
 
 /** Hertz state for comparison, SI (N or N/m, m, Pa); pressures compressive positive. */
 export interface HertzFigures {

@@ -1,9 +1,9 @@
-import { buildCondensedBody, type FemBody } from './body-build';
-import { FemInputError } from './errors';
-import type { BodyModel, MeshLevel, UnitBodyKey } from './types';
-import { requireFinite, requirePoisson } from './validate';
+import { buildCondensedBody, type FemBody } from './build';
+import { FemInputError } from '../errors';
+import type { BodyModel, MeshLevel, UnitBodyKey } from '../types';
+import { requireFinite, requirePoisson } from '../validate';
 
-export type { FemBody } from './body-build';
+export type { FemBody } from './build';
 
 /** Allowed range of the axial/equatorial radius ratio of the unit body. */
 export const ASPECT_MIN = 0.3;

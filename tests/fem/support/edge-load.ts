@@ -1,4 +1,4 @@
-import { GAUSS_2 } from './quad4';
+import { GAUSS_2 } from '../../../fem/elements/quad4';
 
 /**
  * Adds the consistent nodal forces (N) of a uniform pressure `p` (Pa, positive pushing into the

@@ -1,7 +1,7 @@
 // Independent reference solver for the tests: mathjs's sparse LU (slu + lusolve), not our skyline.
 import * as math from 'mathjs';
 import type { CsrMatrix } from '../../../fem/solver/csr';
-import { mathjsSubmatrix } from '../../../scripts/mathjs-sparse';
+import { mathjsSubmatrix } from './mathjs-sparse';
 
 /** mathjs SparseMatrix of K without the `fixed` rows and columns, plus the kept DOF indices. */
 export function reducedSparse(k: CsrMatrix, fixed: Uint8Array): { a: math.Matrix; free: number[] } {

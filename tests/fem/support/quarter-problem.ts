@@ -1,10 +1,10 @@
 // Test helper: a quarter-section mesh with its symmetry constraints and a solve under surface pressure.
-import { assembleStiffness } from '../../../fem/assembly';
-import { addEdgePressure } from '../../../fem/elements/edge-load';
+import { assembleStiffness } from '../../../fem/body/assembly';
+import { addEdgePressure } from './edge-load';
 import { centroidStresses } from '../../../fem/elements/element-stresses';
 import { MESH_LEVELS } from '../../../fem/mesh/mesh-levels';
 import { quarterEllipseMesh } from '../../../fem/mesh/quarter-ellipse';
-import { solveSymmetric } from '../../../fem/solver/symmetric-solve';
+import { solveSymmetric } from './symmetric-solve';
 import type { BodyModel, MeshLevel, StressSample } from '../../../fem/types';
 
 export interface PressureCase {

@@ -1,5 +1,5 @@
-import { FemInputError } from './errors';
-import { requirePositive } from './validate';
+import { FemInputError } from '../errors';
+import { requirePositive } from '../validate';
 
 /** Default radius of the rounded edge of a finite pad (m). */
 export const DEFAULT_EDGE_RADIUS = 0.002;

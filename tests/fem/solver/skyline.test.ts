@@ -1,11 +1,11 @@
 import { describe, expect, it } from 'vitest';
-import { assembleStiffness } from '../../../fem/assembly';
-import { addEdgePressure } from '../../../fem/elements/edge-load';
+import { assembleStiffness } from '../../../fem/body/assembly';
+import { addEdgePressure } from '../support/edge-load';
 import { MESH_LEVELS } from '../../../fem/mesh/mesh-levels';
 import { quarterEllipseMesh } from '../../../fem/mesh/quarter-ellipse';
 import { csrGet, csrMultiply } from '../../../fem/solver/csr';
-import { solveSymmetric } from '../../../fem/solver/symmetric-solve';
-import { mathjsSolve } from './mathjs-reference';
+import { solveSymmetric } from '../support/symmetric-solve';
+import { mathjsSolve } from '../support/mathjs-reference';
 
 const maxAbs = (v: ArrayLike<number>): number =>
   Array.from(v).reduce((m, x) => Math.max(m, Math.abs(x)), 0);

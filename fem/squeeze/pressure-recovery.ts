@@ -1,4 +1,4 @@
-import type { BodyModel } from './types';
+import type { BodyModel } from '../types';
 
 /**
  * Surface weights of the contact nodes, piecewise linear in r between consecutive nodes and

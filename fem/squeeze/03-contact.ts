@@ -1,16 +1,16 @@
-import { getCondensedBody, type FemBody } from './body';
+import { getCondensedBody, type FemBody } from '../body/cache';
 import {
   createContactSystem,
   solveContact,
   type ContactSolution,
   type ContactSystem,
-} from './contact';
-import { FemInputError } from './errors';
-import { fruitMass, liftRatio, type GripRule } from './liftability';
+} from '../solver/active-set';
+import { FemInputError } from '../errors';
+import { fruitMass, liftRatio, type GripRule } from './grip';
 import { padLift, padReach } from './pad';
-import { contactRadius, recoverPressure, surfaceWeights } from './pressure';
-import type { SqueezeCase } from './squeeze-input';
-import { getShearField, maxShearUnder } from './squeeze-shear';
+import { contactRadius, recoverPressure, surfaceWeights } from './pressure-recovery';
+import type { SqueezeCase } from './01-input';
+import { getShearField, maxShearUnder } from './shear-field';
 
 /**
  * One squeeze state, SI. Plane strain gives forces in N per metre of slice and the contact

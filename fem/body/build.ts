@@ -1,11 +1,11 @@
 import { Matrix } from 'ml-matrix';
 import { assembleStiffness } from './assembly';
-import { condense } from './condense';
-import { centroidStresses } from './elements/element-stresses';
-import { FemInputError } from './errors';
-import { MESH_LEVELS } from './mesh/mesh-levels';
-import { quarterEllipseMesh } from './mesh/quarter-ellipse';
-import type { CondensedBody, StressSample, UnitBodyKey } from './types';
+import { condense } from '../solver/condense';
+import { centroidStresses } from '../elements/element-stresses';
+import { FemInputError } from '../errors';
+import { MESH_LEVELS } from '../mesh/mesh-levels';
+import { quarterEllipseMesh } from '../mesh/quarter-ellipse';
+import type { CondensedBody, StressSample, UnitBodyKey } from '../types';
 
 /** Candidate contact nodes are the surface nodes with r ≤ this (units of the equatorial radius). */
 export const CONTACT_REACH = 0.6;

@@ -1,10 +1,10 @@
 import { describe, expect, it } from 'vitest';
-import { assembleStiffness } from '../../../fem/assembly';
-import { condense } from '../../../fem/condense';
+import { assembleStiffness } from '../../../fem/body/assembly';
+import { condense } from '../../../fem/solver/condense';
 import { MESH_LEVELS } from '../../../fem/mesh/mesh-levels';
 import { quarterEllipseMesh } from '../../../fem/mesh/quarter-ellipse';
 import { csrFromDense, csrMultiply } from '../../../fem/solver/csr';
-import { solveSymmetric } from '../../../fem/solver/symmetric-solve';
+import { solveSymmetric } from '../support/symmetric-solve';
 
 const maxAbs = (v: ArrayLike<number>): number =>
   Array.from(v).reduce((m, x) => Math.max(m, Math.abs(x)), 0);

@@ -1,6 +1,6 @@
-import type { CsrMatrix } from './solver/csr';
-import { reverseCuthillMcKee } from './solver/rcm';
-import { SkylineMatrix } from './solver/skyline';
+import type { CsrMatrix } from './csr';
+import { reverseCuthillMcKee } from './rcm';
+import { SkylineMatrix } from './skyline';
 
 /** A symmetric system condensed onto its kept DOFs (Guyan static condensation). */
 export interface CondensedSystem {

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { MESH_LEVELS } from '../../../fem/mesh/mesh-levels';
-import { meshQuality } from '../../../fem/mesh/mesh-quality';
+import { meshQuality } from '../support/mesh-quality';
 import { quarterEllipseMesh } from '../../../fem/mesh/quarter-ellipse';
 import type { MeshLevel } from '../../../fem/types';
 

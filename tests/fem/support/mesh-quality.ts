@@ -1,5 +1,5 @@
-import { GAUSS_2, q4Jacobian } from '../elements/quad4';
-import type { QuadMesh } from './quad-mesh';
+import { GAUSS_2, q4Jacobian } from '../../../fem/elements/quad4';
+import type { QuadMesh } from '../../../fem/mesh/quad-mesh';
 
 /** Worst-element figures of a quad mesh. */
 export interface MeshQuality {
