@@ -1,19 +1,23 @@
 import type { NextAuthOptions } from 'next-auth';
 import CredentialsProvider from 'next-auth/providers/credentials';
-import { verifyCredentials } from '@/lib/data/users';
-import {
-  clearFailures,
-  delayAfterFailure,
-  lockedForMs,
-  recordFailure,
-  throttleKey,
-} from '@/lib/auth/throttle';
+import { attemptSignIn } from '@/lib/auth/sign-in';
+import { signInContext } from '@/lib/auth/sign-in-context';
+import { endAllSessions, getSessionUser } from '@/lib/data/users';
+import { clientAddress } from '@/lib/http/client-address';
+import { isHttpsApp } from '@/lib/http/origin';
 import { signInSchema } from '@/lib/validation/users';
 
-export { SIGN_IN_ERRORS } from '@/lib/auth/sign-in-messages';
+/** Thrown inside the jwt callback: next-auth then clears the cookie and reports no session. */
+class SessionRevoked extends Error {
+  constructor() {
+    super('The session was ended (signed out, password changed, or account changed).');
+    this.name = 'SessionRevoked';
+  }
+}
 
 export const authOptions: NextAuthOptions = {
   session: { strategy: 'jwt', maxAge: 8 * 3600 },
+  useSecureCookies: isHttpsApp(),
   pages: { signIn: '/sign-in', error: '/sign-in' },
   providers: [
     CredentialsProvider({
@@ -22,34 +26,62 @@ export const authOptions: NextAuthOptions = {
         email: { label: 'E-mail', type: 'email' },
         password: { label: 'Password', type: 'password' },
       },
-      async authorize(credentials) {
+      async authorize(credentials, req) {
         const parsed = signInSchema.safeParse(credentials ?? {});
         if (!parsed.success) return null;
-        const key = throttleKey(parsed.data.email);
-        if ((await lockedForMs(key)) > 0) throw new Error('RateLimited');
-        const actor = await verifyCredentials(parsed.data.email, parsed.data.password);
-        if (!actor) {
-          await recordFailure(key);
-          const delay = await delayAfterFailure(key);
-          await new Promise((resolve) => setTimeout(resolve, delay));
-          return null;
+        const address = clientAddress(req?.headers ?? {});
+        const outcome = await attemptSignIn(parsed.data.email, parsed.data.password, address);
+        if (outcome.kind === 'limited') {
+          const context = signInContext.getStore();
+          if (context) context.limitedForMs = outcome.retryAfterMs;
+          throw new Error('RateLimited');
         }
-        await clearFailures(key);
-        return { id: String(actor.id), email: actor.email, name: actor.name, role: actor.role };
+        if (outcome.kind === 'failed') return null;
+        const { id, email, name, role, generation } = outcome.user;
+        return { id: String(id), email, name, role, generation };
       },
     }),
   ],
   callbacks: {
+    /**
+     * At sign-in the token takes the user's generation; on every later read the user must still
+     * be enabled and of that generation, so sign-out, a password change, disabling or a role
+     * change ends the session everywhere, and /api/auth/session agrees with the server.
+     */
     async jwt({ token, user }) {
-      if (user) token.role = user.role;
+      if (user) {
+        token.role = user.role;
+        token.gen = user.generation;
+        return token;
+      }
+      const current = await getSessionUser(Number(token.sub));
+      if (!current || current.generation !== token.gen) throw new SessionRevoked();
+      token.role = current.role;
       return token;
     },
     async session({ session, token }) {
       if (session.user) {
         session.user.id = token.sub ?? '';
         session.user.role = token.role;
+        session.user.generation = token.gen;
       }
       return session;
     },
+  },
+  events: {
+    async signOut({ token }) {
+      const id = Number(token?.sub);
+      if (Number.isInteger(id) && id > 0) await endAllSessions(id, 'sign-out');
+    },
+  },
+  logger: {
+    error(code, metadata) {
+      // A revoked session is expected, not a server fault.
+      const cause = (metadata as { error?: unknown })?.error ?? metadata;
+      if (code === 'JWT_SESSION_ERROR' && cause instanceof SessionRevoked) return;
+      console.error(`[next-auth] ${code}`, metadata);
+    },
+    warn() {},
+    debug() {},
   },
 };

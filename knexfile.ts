@@ -13,6 +13,20 @@ const shared = {
 };
 
 /**
+ * The app and the mail catcher are separate connections to one file: write-ahead logging lets
+ * readers run beside a writer, and a busy timeout makes a second writer wait instead of failing.
+ */
+function walMode(conn: { pragma: (sql: string) => unknown }, done: (err: Error | null) => void) {
+  try {
+    conn.pragma('journal_mode = WAL');
+    conn.pragma('busy_timeout = 5000');
+    done(null);
+  } catch (error) {
+    done(error as Error);
+  }
+}
+
+/**
  * development: a SQLite file under data/ (or DATABASE_FILE);
  * test: a throw-away SQLite database (DATABASE_FILE, else in memory with a pool of one);
  * production: PostgreSQL from DATABASE_URL, same migrations.
@@ -22,6 +36,7 @@ const config: Record<'development' | 'test' | 'production', Knex.Config> = {
     client: 'better-sqlite3',
     connection: { filename: sqliteFile },
     useNullAsDefault: true,
+    pool: { min: 1, max: 1, afterCreate: walMode },
     ...shared,
   },
   test: {

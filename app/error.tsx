@@ -1,5 +1,7 @@
 'use client';
 
+import { useEffect } from 'react';
+
 export default function ErrorPage({
   error,
   reset,
@@ -7,6 +9,10 @@ export default function ErrorPage({
   error: Error & { digest?: string };
   reset: () => void;
 }) {
+  // The server logged the full error under this digest; the browser console gets what it has.
+  useEffect(() => {
+    console.error(error);
+  }, [error]);
   return (
     <main className="mx-auto max-w-lg px-4 py-24 text-center">
       <h1 className="text-2xl font-semibold">Something went wrong</h1>

@@ -1,8 +1,8 @@
-// `npm run demo`: after setup, migrate, seed and build, serve the app on http://localhost:3000.
+// `npm run demo`: after setup, migrate, seed and build, serve the app on its APP_URL.
+import fs from 'node:fs';
 import { serve } from './serve';
 
-console.log('Tenderline on http://localhost:3000 — demo accounts are listed in the README.');
-await serve({
-  port: Number(process.env.PORT ?? 3000),
-  smtpPort: Number(process.env.SMTP_PORT ?? 2525),
-});
+if (fs.existsSync('.env.local')) process.loadEnvFile('.env.local');
+const appUrl = process.env.APP_URL ?? process.env.NEXTAUTH_URL ?? 'http://127.0.0.1:3000';
+console.log(`Tenderline on ${appUrl} — demo accounts are listed in the README.`);
+await serve({ appUrl, smtpPort: Number(process.env.SMTP_PORT ?? 2525) });

@@ -19,12 +19,11 @@ await db.destroy();
 const { serve } = await import('./serve');
 const port = Number(process.env.E2E_PORT ?? 3100);
 await serve({
-  port,
+  appUrl: `http://127.0.0.1:${port}`,
   smtpPort: 0,
   env: {
     KNEX_ENV: 'development',
     DATABASE_FILE: file,
-    NEXTAUTH_URL: `http://127.0.0.1:${port}`,
     NEXTAUTH_SECRET: randomBytes(32).toString('base64url'),
   },
 });

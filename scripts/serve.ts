@@ -1,36 +1,43 @@
-// Starts the mail catcher and `next start` side by side; stops both on Ctrl-C.
+// Starts the mail catcher and the app server side by side; stops both on Ctrl-C. The catcher
+// takes mail only with a credential made for this run and handed to the app alone.
 import { spawn } from 'node:child_process';
+import { randomBytes } from 'node:crypto';
 import knex from 'knex';
 import { config, knexEnvironment } from '../knexfile';
 import { startMailCatcher } from '../lib/mail/catcher';
 
 export async function serve(options: {
-  port: number;
+  appUrl: string;
   smtpPort: number;
   env?: Record<string, string>;
 }) {
+  const url = new URL(options.appUrl);
   const db = knex(config[knexEnvironment()]);
-  const catcher = await startMailCatcher(db, options.smtpPort);
+  const credentials = { user: 'tenderline-app', pass: randomBytes(24).toString('base64url') };
+  const catcher = await startMailCatcher(db, options.smtpPort, '127.0.0.1', credentials);
   console.log(`mail catcher listening on 127.0.0.1:${catcher.port}`);
-  const next = spawn(
-    process.execPath,
-    ['node_modules/next/dist/bin/next', 'start', '-p', String(options.port), '-H', '127.0.0.1'],
-    {
-      stdio: 'inherit',
-      env: {
-        ...process.env,
-        ...options.env,
-        SMTP_HOST: '127.0.0.1',
-        SMTP_PORT: String(catcher.port),
-      },
+  const app = spawn(process.execPath, ['scripts/server.mjs'], {
+    stdio: 'inherit',
+    env: {
+      ...process.env,
+      ...options.env,
+      NODE_ENV: 'production',
+      APP_URL: options.appUrl,
+      NEXTAUTH_URL: options.appUrl,
+      PORT: url.port || '80',
+      HOST: url.hostname,
+      SMTP_HOST: '127.0.0.1',
+      SMTP_PORT: String(catcher.port),
+      SMTP_USER: credentials.user,
+      SMTP_PASS: credentials.pass,
     },
-  );
+  });
   const stop = async () => {
-    next.kill('SIGTERM');
+    app.kill('SIGTERM');
     await catcher.close();
     await db.destroy();
   };
   process.on('SIGINT', () => void stop().then(() => process.exit(0)));
   process.on('SIGTERM', () => void stop().then(() => process.exit(0)));
-  next.on('exit', (code) => void stop().then(() => process.exit(code ?? 0)));
+  app.on('exit', (code) => void stop().then(() => process.exit(code ?? 0)));
 }

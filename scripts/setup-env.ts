@@ -7,7 +7,9 @@ const current = fs.existsSync(file) ? fs.readFileSync(file, 'utf8') : '';
 const lines: string[] = [];
 if (!/^NEXTAUTH_SECRET=/m.test(current))
   lines.push(`NEXTAUTH_SECRET=${randomBytes(32).toString('base64url')}`);
-if (!/^NEXTAUTH_URL=/m.test(current)) lines.push('NEXTAUTH_URL=http://localhost:3000');
+// One address for the server, its links and its cookies: it listens on this host and port.
+if (!/^APP_URL=/m.test(current)) lines.push('APP_URL=http://127.0.0.1:3000');
+if (!/^NEXTAUTH_URL=/m.test(current)) lines.push('NEXTAUTH_URL=http://127.0.0.1:3000');
 if (lines.length) {
   fs.writeFileSync(
     file,

@@ -5,14 +5,17 @@ import 'next-auth/jwt';
 declare module 'next-auth' {
   interface User {
     role: Role;
+    generation: number;
   }
   interface Session {
-    user: { id: string; email: string; name: string; role: Role };
+    user: { id: string; email: string; name: string; role: Role; generation: number };
   }
 }
 
 declare module 'next-auth/jwt' {
   interface JWT {
     role: Role;
+    /** The user's session generation at sign-in; a bumped generation ends this session. */
+    gen: number;
   }
 }

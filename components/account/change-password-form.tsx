@@ -1,5 +1,6 @@
 'use client';
 
+import Link from 'next/link';
 import { useActionState } from 'react';
 import { changePasswordAction } from '@/lib/actions/account';
 import { initialActionState } from '@/lib/actions/initial-state';
@@ -35,6 +36,11 @@ export function ChangePasswordForm() {
         errors={errors.confirmPassword}
       />
       <FormMessage tone={state.ok ? 'success' : 'error'} message={state.message} />
+      {state.ok ? (
+        <Link href="/sign-in" className="block text-sm font-medium text-leaf-700 underline">
+          Sign in again
+        </Link>
+      ) : null}
       <Button type="submit" disabled={pending}>
         {pending ? 'Saving…' : 'Change password'}
       </Button>

@@ -6,7 +6,7 @@ import { useState, type FormEvent } from 'react';
 import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
 import { FormMessage } from '@/components/ui/form-message';
-import { SIGN_IN_ERRORS as MESSAGES } from '@/lib/auth/sign-in-messages';
+import { signInMessage } from '@/lib/auth/sign-in-messages';
 
 /** Where to go after signing in: only a path on this site, never another host. */
 function safeCallback(value: string | null): string {
@@ -24,7 +24,7 @@ export function SignInForm() {
   const params = useSearchParams();
   const [error, setError] = useState<string | undefined>(() => {
     const code = params.get('error');
-    return code ? (MESSAGES[code] ?? 'Sign-in failed. Try again.') : undefined;
+    return code ? signInMessage(code) : undefined;
   });
   const [pending, setPending] = useState(false);
 
@@ -41,7 +41,7 @@ export function SignInForm() {
     setPending(false);
     if (!result || result.error || !result.ok) {
       const code = result?.status === 429 ? 'RateLimited' : (result?.error ?? 'CredentialsSignin');
-      setError(MESSAGES[code] ?? MESSAGES.CredentialsSignin);
+      setError(signInMessage(code));
       return;
     }
     router.replace(safeCallback(params.get('callbackUrl')));

@@ -1,6 +1,6 @@
 import Link from 'next/link';
 import type { Actor } from '@/lib/auth/actor';
-import { areasFor } from '@/lib/auth/roles';
+import { areasFor } from '@/lib/navigation';
 import { SignOutButton } from './sign-out-button';
 
 export function SiteHeader({ actor }: { actor: Actor }) {

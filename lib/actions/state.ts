@@ -1,5 +1,6 @@
 import 'server-only';
 import { headers } from 'next/headers';
+import { unstable_rethrow } from 'next/navigation';
 import { ForbiddenError, type FieldErrors } from '@/lib/errors';
 import { errorPayload } from '@/lib/http/error-map';
 import { crossSiteMessage, crossSiteReason } from '@/lib/http/origin';
@@ -25,6 +26,7 @@ export async function runAction(body: () => Promise<string>): Promise<ActionStat
     if (reason) throw new ForbiddenError(crossSiteMessage(reason));
     return { status: 200, ok: true, message: await body() };
   } catch (error) {
+    unstable_rethrow(error); // redirect() and notFound() are Next's control flow, not errors
     const p = errorPayload(error);
     return { status: p.status, ok: false, message: p.message, fieldErrors: p.fieldErrors };
   }

@@ -1,4 +1,4 @@
-/** The four roles of DESIGN.md. */
+/** The four roles of the product: site owner, lab editor, packhouse engineer, visiting buyer. */
 export const ROLES = ['admin', 'editor', 'engineer', 'buyer'] as const;
 export type Role = (typeof ROLES)[number];
 
@@ -29,20 +29,6 @@ export const CAPABILITIES = Object.keys(TABLE) as Capability[];
 
 export function can(role: Role, capability: Capability): boolean {
   return (TABLE[capability] as readonly Role[]).includes(role);
-}
-
-/** The areas of the app shell and the capability each one needs. */
-export const AREAS = [
-  { href: '/atlas', label: 'Atlas', capability: 'atlas:read' },
-  { href: '/properties', label: 'Properties', capability: 'properties:read-published' },
-  { href: '/checks', label: 'Checks', capability: 'checks:run' },
-  { href: '/assessments', label: 'Assessments', capability: 'assessments:manage-own' },
-  { href: '/editor', label: 'Editor', capability: 'editor:use' },
-  { href: '/admin', label: 'Admin', capability: 'users:manage' },
-] as const satisfies readonly { href: string; label: string; capability: Capability }[];
-
-export function areasFor(role: Role) {
-  return AREAS.filter((area) => can(role, area.capability));
 }
 
 /** Roles an inviter may hand out: editors invite buyers only; admins any role. */

@@ -4,29 +4,28 @@ import { forbidden, redirect } from 'next/navigation';
 import { cache } from 'react';
 import { authOptions } from '@/auth';
 import { getActiveActor } from '@/lib/data/users';
-import { ForbiddenError, UnauthenticatedError } from '@/lib/errors';
-import type { Actor } from './actor';
+import { UnauthenticatedError } from '@/lib/errors';
+import { assertCan, type Actor } from './actor';
 import { can, type Capability } from './roles';
 
 /**
- * The signed-in user, read fresh from the database: a disabled account or a changed role takes
- * effect on the next request, whatever the session cookie still says. Memoised per request
- * (React cache), so the layout and the page share one lookup.
+ * The signed-in user, read fresh from the database: a disabled account, a changed role or an
+ * ended session (older generation) takes effect on the next request, whatever the cookie says.
+ * Memoised per request (React cache), so the layout and the page share one lookup.
  */
 export const getCurrentActor = cache(async (): Promise<Actor | null> => {
   const session = await getServerSession(authOptions);
   const id = Number(session?.user?.id);
-  if (!Number.isInteger(id) || id <= 0) return null;
-  return getActiveActor(id);
+  const generation = Number(session?.user?.generation);
+  if (!Number.isInteger(id) || id <= 0 || !Number.isInteger(generation)) return null;
+  return getActiveActor(id, generation);
 });
 
 /** For route handlers and server actions: the actor, or a 401/403 AppError. */
 export async function requireActor(capability?: Capability): Promise<Actor> {
   const actor = await getCurrentActor();
   if (!actor) throw new UnauthenticatedError();
-  if (capability && !can(actor.role, capability)) {
-    throw new ForbiddenError(`The ${actor.role} role may not do this (${capability}).`);
-  }
+  if (capability) assertCan(actor, capability);
   return actor;
 }
 

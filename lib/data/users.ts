@@ -1,4 +1,5 @@
 import 'server-only';
+import type { Knex } from 'knex';
 import { db } from '@/lib/db';
 import { assertCan, type Actor } from '@/lib/auth/actor';
 import { hashPassword, spendVerifyTime, verifyPassword } from '@/lib/auth/password';
@@ -6,7 +7,8 @@ import { isRole, type Role } from '@/lib/auth/roles';
 import { ConflictError, NotFoundError, ValidationError } from '@/lib/errors';
 import { parseInput } from '@/lib/validation/parse';
 import { changePasswordSchema, userUpdateSchema } from '@/lib/validation/users';
-import { recordAudit } from './audit';
+import { clearAccountLimits } from '@/lib/auth/sign-in-limits';
+import { recordAudit } from './audit-trail';
 
 export interface UserRow {
   id: number;
@@ -32,24 +34,83 @@ function toRow(r: Record<string, unknown>): UserRow {
   };
 }
 
-/** An enabled user by id, as an Actor, or null (unknown or disabled). */
-export async function getActiveActor(id: number): Promise<Actor | null> {
-  const r = await db('users').where({ id }).first();
-  if (!r || r.disabled || !isRole(r.role)) return null;
-  return { id: r.id, email: r.email, name: r.name, role: r.role };
+/** What the session carries about a user: who, their role now, and their session generation. */
+export interface SessionUser extends Actor {
+  generation: number;
 }
 
-/** Credentials check for sign-in: the enabled user with this e-mail and password, else null. */
-export async function verifyCredentials(email: string, password: string): Promise<Actor | null> {
+function toSessionUser(r: Record<string, unknown>): SessionUser | null {
+  if (!r || r.disabled || !isRole(r.role)) return null;
+  return {
+    id: Number(r.id),
+    email: String(r.email),
+    name: String(r.name),
+    role: r.role,
+    generation: Number(r.session_generation),
+  };
+}
+
+/** An enabled user by id with their session generation, or null (unknown or disabled). */
+export async function getSessionUser(id: number): Promise<SessionUser | null> {
+  return toSessionUser(await db('users').where({ id }).first());
+}
+
+/**
+ * The actor for a session of this generation; null when unknown, disabled or signed out since.
+ * Without a generation (server-side jobs and tests acting as a user) only the account is checked.
+ */
+export async function getActiveActor(id: number, generation?: number): Promise<Actor | null> {
+  const user = await getSessionUser(id);
+  if (!user || (generation !== undefined && user.generation !== generation)) return null;
+  return { id: user.id, email: user.email, name: user.name, role: user.role };
+}
+
+export type CredentialsResult =
+  | { user: SessionUser; knownId: number; reason?: undefined }
+  | {
+      user: null;
+      knownId: number | null;
+      reason: 'unknown-account' | 'wrong-password' | 'disabled';
+    };
+
+/** Check an e-mail and password; says why not (for the audit log only, never to the visitor). */
+export async function findCredentials(email: string, password: string): Promise<CredentialsResult> {
   const r = (await db('users').where({ email: email.toLowerCase() }).first()) as
     UserRecord | undefined;
   if (!r) {
     await spendVerifyTime(password);
-    return null;
+    return { user: null, knownId: null, reason: 'unknown-account' };
   }
-  const ok = await verifyPassword(password, r.password_hash);
-  if (!ok || r.disabled || !isRole(r.role)) return null;
-  return { id: r.id, email: r.email, name: r.name, role: r.role };
+  if (!(await verifyPassword(password, r.password_hash))) {
+    return { user: null, knownId: r.id, reason: 'wrong-password' };
+  }
+  const user = toSessionUser(r as unknown as Record<string, unknown>);
+  if (!user) return { user: null, knownId: r.id, reason: 'disabled' };
+  return { user, knownId: r.id };
+}
+
+/** The enabled user with this e-mail and password, else null. */
+export async function verifyCredentials(email: string, password: string): Promise<Actor | null> {
+  return (await findCredentials(email, password)).user;
+}
+
+/** End every session of a user: tokens of the old generation are refused from now on. */
+export async function bumpSessionGeneration(trx: Knex.Transaction, userId: number): Promise<void> {
+  await trx('users').where({ id: userId }).increment('session_generation', 1);
+}
+
+/** Sign a user out on every device (their own choice, or next-auth's sign-out). */
+export async function endAllSessions(userId: number, reason: string): Promise<void> {
+  await db.transaction(async (trx) => {
+    await bumpSessionGeneration(trx, userId);
+    await recordAudit(trx, {
+      actorId: userId,
+      action: 'session.end-all',
+      entity: 'user',
+      entityId: userId,
+      detail: { reason },
+    });
+  });
 }
 
 export async function listUsers(actor: Actor): Promise<UserRow[]> {
@@ -79,6 +140,8 @@ export async function updateUser(actor: Actor, userId: number, input: unknown): 
     if (change.role) patch.role = change.role;
     if (change.disabled !== undefined) patch.disabled = change.disabled;
     await trx('users').where({ id: userId }).update(patch);
+    // A disabled account or a changed role starts from a fresh sign-in everywhere.
+    await bumpSessionGeneration(trx, userId);
     await recordAudit(trx, {
       actorId: actor.id,
       action: 'user.update',
@@ -105,12 +168,32 @@ export async function changeOwnPassword(actor: Actor, input: unknown): Promise<v
     await trx('users')
       .where({ id: actor.id })
       .update({ password_hash: hash, updated_at: new Date() });
+    // Every session, this one included, must sign in again with the new password.
+    await bumpSessionGeneration(trx, actor.id);
     await recordAudit(trx, {
       actorId: actor.id,
       action: 'user.password',
       entity: 'user',
       entityId: actor.id,
     });
+  });
+}
+
+/** Admin: clear an account's sign-in lock (every address and the account-wide count). */
+export async function clearSignInLock(actor: Actor, userId: number): Promise<number> {
+  assertCan(actor, 'users:manage');
+  return db.transaction(async (trx) => {
+    const user = await trx('users').where({ id: userId }).first();
+    if (!user) throw new NotFoundError('No such user.');
+    const cleared = await clearAccountLimits(trx, user.email);
+    await recordAudit(trx, {
+      actorId: actor.id,
+      action: 'sign-in.unlock',
+      entity: 'user',
+      entityId: userId,
+      detail: { email: user.email, cleared },
+    });
+    return cleared;
   });
 }
 

@@ -41,8 +41,9 @@ function guardWrite(request: Request, options: HandleOptions): void {
   if (reason) throw new ForbiddenError(crossSiteMessage(reason));
   const accept = options.accept ?? ['application/json'];
   const type = mediaType(request);
+  // A declared type must be an accepted one; only a DELETE without a body may declare none.
   const bodyless = request.method === 'DELETE' && !hasBody(request);
-  if (!bodyless && (type === null || !accept.includes(type))) {
+  if (type === null ? !bodyless : !accept.includes(type)) {
     throw new UnsupportedMediaTypeError(accept);
   }
   assertLengthWithin(request, options.maxBodyBytes ?? JSON_BODY_LIMIT);

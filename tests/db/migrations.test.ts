@@ -3,7 +3,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { config } from '@/knexfile';
 import { DEMO_USERS } from '@/seeds/01_users';
 
-const TABLES = ['users', 'sign_in_throttle', 'invitations', 'mail_outbox', 'audit_log'];
+const TABLES = ['users', 'sign_in_limits', 'invitations', 'mail_outbox', 'audit_log'];
 
 describe('migrations on a fresh database', () => {
   let db: Knex;

@@ -1,13 +1,19 @@
 import { vi } from 'vitest';
+import { setRequestHeaders } from './request';
 
 /**
  * Only next-auth's cookie reading is replaced: tests say who is signed in, and everything after
  * that (the database lookup of the user, the capability table, the handler) runs for real.
+ * The mock stands for a freshly signed-in, valid token: it carries the user's current session
+ * generation (tests/integration/sessions.test.ts runs the real token checks).
  */
-export const sessionState: { userId: number | null; headers: Headers } = {
-  userId: null,
-  headers: new Headers(),
-};
+export const sessionState: { userId: number | null } = { userId: null };
+
+async function generationOf(): Promise<number> {
+  const { db } = await import('@/lib/db');
+  const row = await db('users').where({ id: sessionState.userId }).first();
+  return Number(row?.session_generation ?? 0);
+}
 
 vi.mock('next-auth', async (importOriginal) => {
   const actual = await importOriginal<typeof import('next-auth')>();
@@ -17,18 +23,12 @@ vi.mock('next-auth', async (importOriginal) => {
       sessionState.userId == null
         ? null
         : {
-            user: { id: String(sessionState.userId) },
+            user: { id: String(sessionState.userId), generation: await generationOf() },
             expires: new Date(Date.now() + 3600e3).toISOString(),
           },
     ),
   };
 });
-
-// Server actions read the request's headers (the cross-site check); tests set them.
-vi.mock('next/headers', () => ({
-  headers: vi.fn(async () => sessionState.headers),
-  cookies: vi.fn(async () => ({ get: () => undefined, getAll: () => [] })),
-}));
 
 // Outside a Next request there is no cache to revalidate.
 vi.mock('next/cache', () => ({ revalidatePath: vi.fn(), revalidateTag: vi.fn() }));
@@ -38,6 +38,4 @@ export function signInAs(userId: number | null) {
 }
 
 /** The headers the next server action sees (for example a foreign Origin). */
-export function actionHeaders(init: Record<string, string> = {}) {
-  sessionState.headers = new Headers(init);
-}
+export const actionHeaders = setRequestHeaders;

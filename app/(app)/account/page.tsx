@@ -1,4 +1,5 @@
 import { ChangePasswordForm } from '@/components/account/change-password-form';
+import { SignOutEverywhere } from '@/components/account/sign-out-everywhere';
 import { PageTitle } from '@/components/ui/page-title';
 import { requirePageActor } from '@/lib/auth/session';
 
@@ -13,6 +14,8 @@ export default async function AccountPage() {
       </PageTitle>
       <h2 className="mb-3 font-semibold">Change password</h2>
       <ChangePasswordForm />
+      <h2 className="mb-3 mt-10 font-semibold">Sessions</h2>
+      <SignOutEverywhere />
     </section>
   );
 }

@@ -1,7 +1,7 @@
 import { NextResponse } from 'next/server';
 import { requireActor } from '@/lib/auth/session';
 import { handle } from '@/lib/http/handler';
-import { areasFor } from '@/lib/auth/roles';
+import { areasFor } from '@/lib/navigation';
 
 /** The signed-in user and the areas their role may enter. */
 export const GET = handle(async () => {

@@ -1,6 +1,6 @@
 import { NextResponse } from 'next/server';
 import { requireActor } from '@/lib/auth/session';
-import { listAudit } from '@/lib/data/audit-log';
+import { listAudit } from '@/lib/data/audit-reader';
 import { handle } from '@/lib/http/handler';
 
 export const GET = handle(async () => {

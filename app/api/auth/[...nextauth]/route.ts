@@ -1,32 +1,69 @@
 import NextAuth from 'next-auth';
-import { authOptions, SIGN_IN_ERRORS } from '@/auth';
-import { lockedForMs, throttleKey } from '@/lib/auth/throttle';
+import { NextRequest } from 'next/server';
+import { authOptions } from '@/auth';
+import { signInContext, type SignInContext } from '@/lib/auth/sign-in-context';
+import { signInMessage } from '@/lib/auth/sign-in-messages';
+import { errorResponse } from '@/lib/http/handler';
+import { readText } from '@/lib/http/body';
+import { crossSiteMessage, crossSiteReason } from '@/lib/http/origin';
+import { AppError, ForbiddenError, UnsupportedMediaTypeError } from '@/lib/errors';
 
 const handler = NextAuth(authOptions);
-
 type Context = { params: Promise<{ nextauth: string[] }> };
 
-/** Refuse a locked-out e-mail with 429 before next-auth sees the attempt. */
-async function POST(request: Request, context: Context) {
-  const { nextauth } = await context.params;
-  if (nextauth[0] === 'callback' && nextauth[1] === 'credentials') {
-    const form = await request
-      .clone()
-      .formData()
-      .catch(() => null);
-    const email = form?.get('email');
-    if (typeof email === 'string' && email) {
-      const wait = await lockedForMs(throttleKey(email));
-      if (wait > 0) {
-        const url = new URL('/sign-in?error=RateLimited', request.url).toString();
-        return Response.json(
-          { error: 'RateLimited', message: SIGN_IN_ERRORS.RateLimited, url },
-          { status: 429, headers: { 'Retry-After': String(Math.ceil(wait / 1000)) } },
-        );
-      }
-    }
-  }
-  return handler(request, context);
+const FORM = 'application/x-www-form-urlencoded';
+const FORM_BODY_LIMIT = 16 * 1024;
+const POST_ONLY = new Set(['callback/credentials', 'signout']);
+
+function noStore(response: Response): Response {
+  response.headers.set('Cache-Control', 'no-store');
+  return response;
 }
 
-export { handler as GET, POST };
+/** Odd requests get a 4xx with a plain message before next-auth sees them. */
+async function GET(request: NextRequest, context: Context) {
+  const action = (await context.params).nextauth.join('/');
+  if (POST_ONLY.has(action)) {
+    const error = new AppError(
+      405,
+      'method_not_allowed',
+      'Send this as a POST from the sign-in form.',
+    );
+    const response = errorResponse(error);
+    response.headers.set('Allow', 'POST');
+    return response;
+  }
+  return noStore(await handler(request, context));
+}
+
+/**
+ * Sign-in, sign-out and the rest of next-auth's POSTs: from the app's own pages only, as a small
+ * form body. The attempt is limited inside authorize(); a refusal comes back here as a 429.
+ */
+async function POST(request: NextRequest, context: Context) {
+  try {
+    const reason = crossSiteReason(request.headers);
+    if (reason) throw new ForbiddenError(crossSiteMessage(reason));
+    const type = request.headers.get('content-type')?.split(';')[0].trim().toLowerCase();
+    if (type !== FORM) throw new UnsupportedMediaTypeError([FORM]);
+    const body = await readText(request, FORM_BODY_LIMIT);
+    const forwarded = new NextRequest(request.url, {
+      method: 'POST',
+      headers: request.headers,
+      body,
+    });
+    const state: SignInContext = {};
+    const response = await signInContext.run(state, () => handler(forwarded, context));
+    if (state.limitedForMs === undefined) return noStore(response);
+    const url = new URL('/sign-in?error=RateLimited', request.url).toString();
+    const retryAfter = String(Math.max(1, Math.ceil(state.limitedForMs / 1000)));
+    return Response.json(
+      { error: 'RateLimited', message: signInMessage('RateLimited'), url },
+      { status: 429, headers: { 'Retry-After': retryAfter, 'Cache-Control': 'no-store' } },
+    );
+  } catch (error) {
+    return errorResponse(error);
+  }
+}
+
+export { GET, POST };
