@@ -1,5 +1,5 @@
 /** Shown while a data page renders on the server: the page's frame, without its numbers yet. */
-export default function Loading() {
+export function PageSkeleton() {
   return (
     <div className="animate-pulse space-y-4" aria-busy="true" aria-live="polite">
       <span className="sr-only">Loading…</span>
