@@ -7,7 +7,7 @@ import { isRole, type Role } from '@/lib/auth/roles';
 import { ConflictError, NotFoundError, ValidationError } from '@/lib/errors';
 import { parseInput } from '@/lib/validation/parse';
 import { changePasswordSchema, userUpdateSchema } from '@/lib/validation/users';
-import { clearAccountLimits } from '@/lib/auth/sign-in-limits';
+import { clearAccountLimits, listAccountLocks, type AccountLock } from '@/lib/auth/sign-in-limits';
 import { recordAudit } from './audit-trail';
 
 export interface UserRow {
@@ -177,6 +177,18 @@ export async function changeOwnPassword(actor: Actor, input: unknown): Promise<v
       entityId: actor.id,
     });
   });
+}
+
+/** Admin: the accounts with a sign-in lock now, matched to their users. */
+export async function listSignInLocks(actor: Actor): Promise<(AccountLock & { userId: number })[]> {
+  assertCan(actor, 'users:manage');
+  const locks = await listAccountLocks();
+  if (!locks.length) return [];
+  const rows = await db('users')
+    .whereIn('email', [...new Set(locks.map((l) => l.email))])
+    .select('id', 'email');
+  const ids = new Map(rows.map((r) => [String(r.email), Number(r.id)]));
+  return locks.flatMap((l) => (ids.has(l.email) ? [{ ...l, userId: ids.get(l.email)! }] : []));
 }
 
 /** Admin: clear an account's sign-in lock (every address and the account-wide count). */

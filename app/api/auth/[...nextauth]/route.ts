@@ -6,7 +6,8 @@ import { signInMessage } from '@/lib/auth/sign-in-messages';
 import { errorResponse } from '@/lib/http/handler';
 import { readText } from '@/lib/http/body';
 import { crossSiteMessage, crossSiteReason } from '@/lib/http/origin';
-import { AppError, ForbiddenError, UnsupportedMediaTypeError } from '@/lib/errors';
+import { AppError, ForbiddenError, RateLimitError, UnsupportedMediaTypeError } from '@/lib/errors';
+import { errorPayload } from '@/lib/http/error-map';
 
 const handler = NextAuth(authOptions);
 type Context = { params: Promise<{ nextauth: string[] }> };
@@ -55,11 +56,16 @@ async function POST(request: NextRequest, context: Context) {
     const state: SignInContext = {};
     const response = await signInContext.run(state, () => handler(forwarded, context));
     if (state.limitedForMs === undefined) return noStore(response);
+    // The one error map gives status and Retry-After; next-auth's client also needs `url`,
+    // whose `error` code the sign-in page turns back into the same message.
+    const seconds = Math.max(1, Math.ceil(state.limitedForMs / 1000));
+    const p = errorPayload(new RateLimitError(signInMessage('RateLimited'), seconds));
     const url = new URL('/sign-in?error=RateLimited', request.url).toString();
-    const retryAfter = String(Math.max(1, Math.ceil(state.limitedForMs / 1000)));
-    return Response.json(
-      { error: 'RateLimited', message: signInMessage('RateLimited'), url },
-      { status: 429, headers: { 'Retry-After': retryAfter, 'Cache-Control': 'no-store' } },
+    return noStore(
+      Response.json(
+        { error: p.code, message: p.message, url },
+        { status: p.status, headers: p.headers },
+      ),
     );
   } catch (error) {
     return errorResponse(error);
