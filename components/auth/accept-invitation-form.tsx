@@ -24,7 +24,7 @@ export function AcceptInvitationForm({ token, email }: { token: string; email: s
   return (
     <form action={action} className="space-y-4">
       <input type="hidden" name="token" value={token} />
-      <p className="text-sm text-stone-600">
+      <p className="text-sm text-stone-600 wrap-anywhere">
         Account for <strong>{email}</strong>
       </p>
       <Field
@@ -32,6 +32,7 @@ export function AcceptInvitationForm({ token, email }: { token: string; email: s
         name="name"
         autoComplete="name"
         maxLength={100}
+        defaultValue={state.values?.name}
         errors={errors.name}
       />
       <Field

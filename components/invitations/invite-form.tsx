@@ -8,9 +8,11 @@ import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
 import { FormMessage } from '@/components/ui/form-message';
 
+/** Invite by e-mail, for admins (any role) and editors (buyers only): `roles` are those offered. */
 export function InviteForm({ roles }: { roles: Role[] }) {
   const [state, action, pending] = useActionState(inviteAction, initialActionState);
   const errors = state.fieldErrors ?? {};
+  const role = roles.find((r) => r === state.values?.role) ?? 'buyer';
   return (
     <form action={action} className="max-w-md space-y-3" data-testid="invite-form">
       <Field
@@ -18,6 +20,7 @@ export function InviteForm({ roles }: { roles: Role[] }) {
         name="email"
         type="email"
         maxLength={254}
+        defaultValue={state.values?.email}
         errors={errors.email}
       />
       {roles.length > 1 ? (
@@ -28,7 +31,8 @@ export function InviteForm({ roles }: { roles: Role[] }) {
           <select
             id="invite-role"
             name="role"
-            defaultValue="buyer"
+            key={role}
+            defaultValue={role}
             className="rounded-md border border-stone-300 bg-white px-2 py-1.5 text-sm"
           >
             {roles.map((r) => (

@@ -1,27 +1,38 @@
 import 'server-only';
-import { createHash, randomBytes } from 'node:crypto';
 import { db } from '@/lib/db';
 import { assertCan, type Actor } from '@/lib/auth/actor';
 import { hashPassword } from '@/lib/auth/password';
 import { invitableRoles, isRole, type Role } from '@/lib/auth/roles';
-import { AppError, ConflictError, ForbiddenError, ValidationError } from '@/lib/errors';
-import { appUrl, sendMail } from '@/lib/mail/send';
+import { ConflictError, ForbiddenError, GoneError, ValidationError } from '@/lib/errors';
+import { PROBLEM_MESSAGES, type InvitationProblem } from '@/lib/invitations/messages';
+import { invitationTokenSchema, TOKEN_PATTERN } from '@/lib/validation/invitations';
 import { parseInput } from '@/lib/validation/parse';
 import { acceptInvitationSchema, invitationSchema } from '@/lib/validation/users';
-import { recordAudit } from './audit';
+import { recordAudit } from './audit-trail';
+import { hashToken, mailInvitation, newToken } from './invitation-mail';
+import {
+  assertUnderHourlyLimit,
+  canManage,
+  insertInvitation,
+  markReplaced,
+  stateOf,
+  toDate,
+  whereOpen,
+  type InvitationRecord,
+} from './invitation-rules';
 import { insertUser } from './users';
 
-export const INVITATION_DAYS = 7;
-
-function hashToken(token: string): string {
-  return createHash('sha256').update(token).digest('hex');
-}
+export { INVITATION_DAYS, INVITATIONS_PER_HOUR } from './invitation-rules';
 
 export type InvitationState =
   | { state: 'valid'; id: number; email: string; role: Role; expiresAt: Date }
-  | { state: 'invalid' | 'used' | 'expired' };
+  | { state: InvitationProblem };
 
-/** Invite someone by e-mail with a one-time link; editors may invite buyers only. */
+/**
+ * Invite someone by e-mail with a one-time link; editors may invite buyers only. An open
+ * invitation to the same address is replaced (its link then says so), provided the inviter may
+ * manage it; at most 20 invitations per inviter an hour.
+ */
 export async function createInvitation(actor: Actor, input: unknown) {
   assertCan(actor, 'invitations:create-buyer');
   const { email, role } = parseInput(invitationSchema, input);
@@ -30,99 +41,85 @@ export async function createInvitation(actor: Actor, input: unknown) {
       `The ${actor.role} role may invite ${invitableRoles(actor.role).join(', ')} only.`,
     );
   }
-  const token = randomBytes(32).toString('base64url');
-  const expiresAt = new Date(Date.now() + INVITATION_DAYS * 24 * 3600 * 1000);
-  const id = await db.transaction(async (trx) => {
+  const { token, tokenHash } = newToken();
+  const now = new Date();
+  const created = await db.transaction(async (trx) => {
+    await assertUnderHourlyLimit(trx, actor.id, now);
     if (await trx('users').where({ email }).first()) {
       throw new ConflictError('An account with this e-mail already exists.');
     }
-    const [row] = await trx('invitations')
-      .insert({
-        email,
-        role,
-        token_hash: hashToken(token),
-        invited_by: actor.id,
-        expires_at: expiresAt,
-        created_at: new Date(),
-      })
-      .returning('id');
-    const newId = typeof row === 'object' ? Number(row.id) : Number(row);
+    const open: InvitationRecord[] = await whereOpen(trx('invitations').where({ email }));
+    if (open.some((row) => !canManage(actor, row))) {
+      throw new ConflictError(
+        'Someone else has already invited this address. Ask an admin to revoke that invitation first.',
+      );
+    }
+    const replaced = open.map((row) => Number(row.id));
+    const row = await insertInvitation(trx, { email, role, tokenHash, invitedBy: actor.id, now });
+    await markReplaced(trx, replaced, row.id, now);
     await recordAudit(trx, {
       actorId: actor.id,
       action: 'invitation.create',
       entity: 'invitation',
-      entityId: newId,
-      detail: { email, role },
+      entityId: row.id,
+      detail: replaced.length ? { email, role, replaced } : { email, role },
     });
-    return newId;
+    return { ...row, replaced };
   });
-  const link = `${appUrl()}/invite/${token}`;
-  try {
-    await sendMail({
-      to: email,
-      subject: 'Your invitation to Tenderline',
-      text: [
-        `${actor.name} has invited you to Tenderline as ${role === 'buyer' ? 'a buyer' : `an ${role}`}.`,
-        '',
-        `Open this link to choose your name and password (it works once, until ${expiresAt.toUTCString()}):`,
-        link,
-        '',
-        'If you did not expect this message, you can ignore it.',
-      ].join('\n'),
-    });
-  } catch {
-    throw new AppError(
-      502,
-      'mail_failed',
-      'The invitation was saved but the e-mail could not be sent. Check the mail settings and invite again.',
-    );
-  }
-  return { id, email, role, expiresAt };
+  await mailInvitation(
+    { to: email, role, inviterName: actor.name, token, expiresAt: created.expiresAt },
+    'The invitation was saved but the e-mail could not be sent. Check the mail settings and resend it from the pending list.',
+  );
+  return { id: created.id, email, role, expiresAt: created.expiresAt, replaced: created.replaced };
 }
 
-/** What a link's token stands for, without revealing why a bad token is bad beyond used/expired. */
+/** What a link's token stands for; a malformed or unknown token is simply 'invalid'. */
 export async function getInvitationState(
   token: string,
   now = new Date(),
 ): Promise<InvitationState> {
-  if (typeof token !== 'string' || !/^[A-Za-z0-9_-]{20,100}$/.test(token))
-    return { state: 'invalid' };
-  const row = await db('invitations')
+  if (typeof token !== 'string' || !TOKEN_PATTERN.test(token)) return { state: 'invalid' };
+  const row: InvitationRecord | undefined = await db('invitations')
     .where({ token_hash: hashToken(token) })
     .first();
   if (!row || !isRole(row.role)) return { state: 'invalid' };
-  if (row.accepted_at) return { state: 'used' };
-  const expiresAt = new Date(row.expires_at);
-  if (expiresAt.getTime() <= now.getTime()) return { state: 'expired' };
+  const state = stateOf(row, now);
+  if (state !== 'pending') return { state };
+  const expiresAt = toDate(row.expires_at);
   return { state: 'valid', id: row.id, email: row.email, role: row.role, expiresAt };
 }
 
-/** Accept an invitation: creates the account and spends the token in one transaction. */
+/**
+ * Accept an invitation: creates the account and spends the token in one transaction. An unknown
+ * token is a 400 on the token field; a used, revoked, replaced or expired one is 410.
+ */
 export async function acceptInvitation(
-  token: string,
+  token: unknown,
   input: unknown,
 ): Promise<{ userId: number; email: string }> {
+  const link = parseInput(invitationTokenSchema, { token });
   const values = parseInput(acceptInvitationSchema, input);
   const passwordHash = await hashPassword(values.password);
   return db.transaction(async (trx) => {
-    const row = await trx('invitations')
-      .where({ token_hash: hashToken(String(token)) })
+    const row: InvitationRecord | undefined = await trx('invitations')
+      .where({ token_hash: hashToken(link.token) })
       .first();
-    if (!row) throw new ValidationError('This invitation link is not valid.');
-    if (row.accepted_at) throw new ConflictError('This invitation has already been used.');
-    if (new Date(row.expires_at).getTime() <= Date.now())
-      throw new ValidationError('This invitation has expired.');
+    if (!row || !isRole(row.role)) {
+      throw new ValidationError(PROBLEM_MESSAGES.invalid, { token: [PROBLEM_MESSAGES.invalid] });
+    }
+    const state = stateOf(row);
+    if (state !== 'pending') throw new GoneError(PROBLEM_MESSAGES[state]);
     const userId = await insertUser(trx, {
       email: row.email,
       name: values.name,
       role: row.role,
       passwordHash,
     });
-    const spent = await trx('invitations')
-      .where({ id: row.id })
-      .whereNull('accepted_at')
-      .update({ accepted_at: new Date(), accepted_user_id: userId });
-    if (spent !== 1) throw new ConflictError('This invitation has already been used.');
+    const spent = await whereOpen(trx('invitations').where({ id: row.id })).update({
+      accepted_at: new Date(),
+      accepted_user_id: userId,
+    });
+    if (spent !== 1) throw new ConflictError(PROBLEM_MESSAGES.used);
     await recordAudit(trx, {
       actorId: userId,
       action: 'invitation.accept',

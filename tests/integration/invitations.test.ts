@@ -6,7 +6,10 @@ import { ACCOUNTS } from '../support/accounts';
 import { db } from '@/lib/db';
 import { acceptInvitation, createInvitation, getInvitationState } from '@/lib/data/invitations';
 import { getActiveActor, verifyCredentials } from '@/lib/data/users';
-import { ConflictError, ForbiddenError, ValidationError } from '@/lib/errors';
+import { ConflictError, ForbiddenError, GoneError, ValidationError } from '@/lib/errors';
+import * as accept from '@/app/api/invitations/accept/route';
+import { acceptInvitationAction } from '@/lib/actions/invitations';
+import { initialActionState } from '@/lib/actions/initial-state';
 import type { Actor } from '@/lib/auth/actor';
 
 const PASSWORD = 'buyer-password-01';
@@ -46,7 +49,7 @@ describe('invitations over real SMTP on loopback', () => {
     expect((await verifyCredentials(email, PASSWORD))?.id).toBe(newId);
 
     expect((await getInvitationState(token)).state).toBe('used');
-    await expect(acceptInvitation(token, values)).rejects.toBeInstanceOf(ConflictError);
+    await expect(acceptInvitation(token, values)).rejects.toBeInstanceOf(GoneError);
     const actions = (await db('audit_log').select('action')).map((r) => r.action);
     expect(actions).toEqual(expect.arrayContaining(['invitation.create', 'invitation.accept']));
   });
@@ -101,5 +104,60 @@ describe('invitations over real SMTP on loopback', () => {
     ]);
     expect(results.filter((r) => r.status === 'fulfilled')).toHaveLength(1);
     expect(await db('users').where({ email }).count({ n: '*' })).toEqual([{ n: 1 }]);
+  });
+
+  it('says an over-long or malformed token is not valid, and a missing one is required', async () => {
+    const post = (body: unknown) =>
+      accept.POST(
+        new Request('http://tenderline.test/api', {
+          method: 'POST',
+          headers: { 'content-type': 'application/json' },
+          body: JSON.stringify(body),
+        }),
+        { params: Promise.resolve({}) },
+      );
+    for (const token of ['x'.repeat(201), 'a'.repeat(5000), 'has spaces and / slashes', 42]) {
+      const res = await post({ ...values, token });
+      expect(res.status).toBe(400);
+      expect((await res.json()).fieldErrors.token).toEqual(['This invitation link is not valid.']);
+    }
+    const missing = await (await post(values)).json();
+    expect(missing.fieldErrors.token).toEqual(['The invitation token is required.']);
+  });
+
+  it('answers 410 from the accept API for a used link', async () => {
+    const email = 'used-twice@kiwi-buyer.example';
+    await createInvitation(admin, { email, role: 'buyer' });
+    const { token } = linkIn((await waitForMail(email)).text_body);
+    await acceptInvitation(token, values);
+    const res = await accept.POST(
+      new Request('http://tenderline.test/api', {
+        method: 'POST',
+        headers: { 'content-type': 'application/json' },
+        body: JSON.stringify({ ...values, token }),
+      }),
+      { params: Promise.resolve({}) },
+    );
+    expect(res.status).toBe(410);
+    expect((await res.json()).message).toContain('already been used');
+  });
+
+  it('keeps the typed name (never the password) when the accept form reports an error', async () => {
+    const email = 'short-password@fig-buyer.example';
+    await createInvitation(admin, { email, role: 'buyer' });
+    const { token } = linkIn((await waitForMail(email)).text_body);
+    const f = new FormData();
+    for (const [k, v] of Object.entries({
+      token,
+      name: 'Ana Ruiz',
+      password: 'short',
+      confirmPassword: 'short',
+    }))
+      f.set(k, v);
+    const state = await acceptInvitationAction(initialActionState, f);
+    expect(state.ok).toBe(false);
+    expect(state.fieldErrors?.password?.[0]).toMatch(/at least 10/);
+    expect(state.values).toEqual({ name: 'Ana Ruiz' });
+    expect(JSON.stringify(state)).not.toContain('short"');
   });
 });
