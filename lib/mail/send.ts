@@ -1,7 +1,8 @@
 import 'server-only';
 import nodemailer, { type Transporter } from 'nodemailer';
 
-let transporter: Transporter | undefined;
+/** The transporter and the settings it was built from; rebuilt when the environment changes. */
+let cached: { key: string; transporter: Transporter } | undefined;
 
 /** SMTP settings from the environment; the default is the local catcher started with the app. */
 export function smtpSettings() {
@@ -25,16 +26,21 @@ export interface OutgoingMail {
 /** Send one message over SMTP. Throws when the server refuses or cannot be reached. */
 export async function sendMail(mail: OutgoingMail): Promise<void> {
   const s = smtpSettings();
-  transporter ??= nodemailer.createTransport({
-    host: s.host,
-    port: s.port,
-    secure: s.secure,
-    auth: s.user ? { user: s.user, pass: s.pass } : undefined,
-    // The local catcher speaks plain SMTP on loopback.
-    ignoreTLS: !s.secure && (s.host === '127.0.0.1' || s.host === 'localhost'),
-    connectionTimeout: 5000,
-  });
-  await transporter.sendMail({ from: s.from, ...mail });
+  const key = JSON.stringify([s.host, s.port, s.secure, s.user, s.pass]);
+  if (cached?.key !== key) {
+    cached?.transporter.close();
+    const transporter = nodemailer.createTransport({
+      host: s.host,
+      port: s.port,
+      secure: s.secure,
+      auth: s.user ? { user: s.user, pass: s.pass } : undefined,
+      // The local catcher speaks plain SMTP on loopback.
+      ignoreTLS: !s.secure && (s.host === '127.0.0.1' || s.host === 'localhost'),
+      connectionTimeout: 5000,
+    });
+    cached = { key, transporter };
+  }
+  await cached.transporter.sendMail({ from: s.from, ...mail });
 }
 
 /** The public base URL used in links inside e-mails: the app's own origin. */

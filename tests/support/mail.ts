@@ -1,12 +1,22 @@
+import { randomBytes } from 'node:crypto';
 import { db } from '@/lib/db';
 import { startMailCatcher } from '@/lib/mail/catcher';
 
-/** The real catcher on a free loopback port; the app's SMTP settings point at it. */
+/**
+ * The real catcher on a free loopback port, requiring SMTP AUTH with random credentials; the
+ * app's SMTP settings point at it and log in with them.
+ */
 export async function startTestCatcher() {
-  const catcher = await startMailCatcher(db, 0);
+  const credentials = {
+    user: `tenderline-${randomBytes(4).toString('hex')}`,
+    pass: randomBytes(24).toString('base64url'),
+  };
+  const catcher = await startMailCatcher(db, 0, '127.0.0.1', credentials);
   process.env.SMTP_HOST = '127.0.0.1';
   process.env.SMTP_PORT = String(catcher.port);
-  return catcher;
+  process.env.SMTP_USER = credentials.user;
+  process.env.SMTP_PASS = credentials.pass;
+  return { ...catcher, credentials };
 }
 
 /** Wait until the catcher has stored a message to this address (SMTP finishes before the insert). */
