@@ -1,7 +1,8 @@
 import Link from 'next/link';
 import { PageTitle } from '@/components/ui/page-title';
-import { AREA_DESCRIPTIONS } from '@/lib/area-descriptions';
-import { areasFor } from '@/lib/auth/roles';
+import { areaDescription } from '@/lib/area-descriptions';
+import { can } from '@/lib/auth/roles';
+import { areasFor } from '@/lib/navigation';
 import { requirePageActor } from '@/lib/auth/session';
 
 export default async function HomePage() {
@@ -9,8 +10,10 @@ export default async function HomePage() {
   return (
     <section>
       <PageTitle title={`Welcome, ${actor.name}`}>
-        Tenderline keeps sourced firmness and bruise data for soft produce beside handling guidance,
-        and estimates what a gripper pad, a drop or a deep bin does to the fruit.
+        Tenderline keeps sourced firmness and bruise data for soft produce beside handling guidance
+        {can(actor.role, 'checks:run')
+          ? ', and estimates what a gripper pad, a drop or a deep bin does to the fruit.'
+          : '.'}
       </PageTitle>
       <ul className="grid gap-4 sm:grid-cols-2 lg:grid-cols-3" data-testid="home-areas">
         {areasFor(actor.role).map((area) => (
@@ -20,7 +23,9 @@ export default async function HomePage() {
               className="block h-full rounded-lg border border-stone-200 bg-white p-4 shadow-sm hover:border-leaf-600"
             >
               <h2 className="font-semibold text-leaf-900">{area.label}</h2>
-              <p className="mt-1 text-sm text-stone-600">{AREA_DESCRIPTIONS[area.href]}</p>
+              <p className="mt-1 text-sm text-stone-600">
+                {areaDescription(area.href, actor.role)}
+              </p>
             </Link>
           </li>
         ))}

@@ -4,6 +4,6 @@ import { requirePageActor } from '@/lib/auth/session';
 export const metadata = { title: 'Assessments' };
 
 export default async function AssessmentsPage() {
-  await requirePageActor('assessments:manage-own');
-  return <AreaPlaceholder title="Assessments" href="/assessments" />;
+  const actor = await requirePageActor('assessments:manage-own');
+  return <AreaPlaceholder title="Assessments" href="/assessments" role={actor.role} />;
 }

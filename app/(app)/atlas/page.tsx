@@ -4,6 +4,6 @@ import { requirePageActor } from '@/lib/auth/session';
 export const metadata = { title: 'Atlas' };
 
 export default async function AtlasPage() {
-  await requirePageActor('atlas:read');
-  return <AreaPlaceholder title="Atlas" href="/atlas" />;
+  const actor = await requirePageActor('atlas:read');
+  return <AreaPlaceholder title="Atlas" href="/atlas" role={actor.role} />;
 }

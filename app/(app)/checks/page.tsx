@@ -4,6 +4,6 @@ import { requirePageActor } from '@/lib/auth/session';
 export const metadata = { title: 'Checks' };
 
 export default async function ChecksPage() {
-  await requirePageActor('checks:run');
-  return <AreaPlaceholder title="Checks" href="/checks" />;
+  const actor = await requirePageActor('checks:run');
+  return <AreaPlaceholder title="Checks" href="/checks" role={actor.role} />;
 }

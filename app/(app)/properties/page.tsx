@@ -4,6 +4,6 @@ import { requirePageActor } from '@/lib/auth/session';
 export const metadata = { title: 'Properties' };
 
 export default async function PropertiesPage() {
-  await requirePageActor('properties:read-published');
-  return <AreaPlaceholder title="Properties" href="/properties" />;
+  const actor = await requirePageActor('properties:read-published');
+  return <AreaPlaceholder title="Properties" href="/properties" role={actor.role} />;
 }
