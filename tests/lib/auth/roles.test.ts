@@ -11,9 +11,9 @@ import { areasFor } from '@/lib/navigation';
 
 /**
  * The whole capability table restated by hand, role by role, from the product's role table
- * (buyer: reads guidance and published summaries; engineer: reads everything published, runs
- * checks, keeps assessments; editor: all an engineer can plus drafts, reviews and inviting
- * buyers; admin: all of that plus users, invitations, mail and the audit log).
+ * (buyer: reads guidance and published summaries; engineer: reads everything published with its
+ * history, follows cultivars, runs checks, keeps assessments; editor: all an engineer can plus
+ * drafts, reviews, lab-test and photo uploads and inviting buyers; admin: all of that plus users, invitations, mail and the audit log).
  */
 const EXPECTED: Record<Role, Capability[]> = {
   buyer: ['account:manage-own', 'atlas:read', 'properties:read-published'],
@@ -21,6 +21,8 @@ const EXPECTED: Record<Role, Capability[]> = {
     'account:manage-own',
     'atlas:read',
     'properties:read-published',
+    'properties:read-history',
+    'properties:follow',
     'checks:run',
     'assessments:manage-own',
   ],
@@ -28,18 +30,30 @@ const EXPECTED: Record<Role, Capability[]> = {
     'account:manage-own',
     'atlas:read',
     'properties:read-published',
+    'properties:read-history',
+    'properties:follow',
     'checks:run',
     'assessments:manage-own',
     'editor:use',
+    'revisions:edit',
+    'revisions:review',
+    'lab-tests:upload',
+    'images:upload',
     'invitations:create-buyer',
   ],
   admin: [
     'account:manage-own',
     'atlas:read',
     'properties:read-published',
+    'properties:read-history',
+    'properties:follow',
     'checks:run',
     'assessments:manage-own',
     'editor:use',
+    'revisions:edit',
+    'revisions:review',
+    'lab-tests:upload',
+    'images:upload',
     'invitations:create-buyer',
     'invitations:create-any',
     'users:manage',
