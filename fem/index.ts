@@ -3,11 +3,92 @@
  * SI units throughout (m, N, Pa, kg); pressures and forces of contact are compressive-positive
  * magnitudes. Every function documents its units and sign conventions where it is declared.
  */
+export { STANDARD_GRAVITY } from './constants';
 export { FemConvergenceError, FemInputError } from './errors';
-export type { BodyModel, CondensedBody, MeshLevel, StressSample, UnitBodyKey } from './types';
-export { requireFinite, requireNonNegative, requirePoisson, requirePositive } from './validate';
-export * from './body/cache';
+export {
+  BODY_MODELS,
+  MESH_LEVELS,
+  type BodyModel,
+  type CondensedBody,
+  type MeshLevel,
+  type StressSample,
+  type UnitBodyKey,
+} from './types';
+export {
+  requireFinite,
+  requireNonNegative,
+  requireOneOf,
+  requirePoisson,
+  requirePositive,
+} from './validate';
+export {
+  ASPECT_MAX,
+  ASPECT_MIN,
+  CACHE_LIMIT,
+  clearCondensedBodyCache,
+  getCondensedBody,
+  type FemBody,
+} from './body/cache';
 export * from './closed-form';
+export { solveContact, type ContactOptions, type ContactSolution } from './solver/active-set';
+export { createContactSystem, type ContactSystem } from './solver/compliance';
+
+// The squeeze pipeline, fem/squeeze/, one stage per numbered file; each stage prepares and calls
+// only the stage before it: 01 input → 02 body → 03 contact → 04 pressure → 05 shear →
+// 06 liftability → 07 run (runSqueeze) → 08 sweep (sweepPadDiameters).
+export {
+  validateSqueezeInput,
+  MAX_TRAVEL_FRACTION,
+  type LiftInput,
+  type SqueezeCase,
+  type SqueezeInput,
+} from './squeeze/01-input';
+export { prepareBody, type BodyStage } from './squeeze/02-body';
+export { padForce, prepareContact, solveAt, type ContactStage } from './squeeze/03-contact';
+export {
+  contactRadius,
+  preparePressure,
+  pressureAt,
+  type PressureAt,
+  type PressureStage,
+} from './squeeze/04-pressure';
+export {
+  prepareShear,
+  stateAt,
+  type ShearStage,
+  type SqueezeState,
+  type StateAt,
+} from './squeeze/05-shear';
+export {
+  findLiftability,
+  liftStateAt,
+  prepareLift,
+  profileOf,
+  runIncrements,
+  GRIP_TOLERANCE,
+  type GripPoint,
+  type IncrementTrack,
+  type Liftability,
+  type LiftStage,
+  type PressurePoint,
+} from './squeeze/06-liftability';
+export {
+  runCase,
+  runSqueeze,
+  squeezeWarnings,
+  type CaseRun,
+  type SqueezeResult,
+} from './squeeze/07-run';
+export { sweepPadDiameters, type PadSweepPoint } from './squeeze/08-sweep';
+export {
+  bisectGrip,
+  fruitMass,
+  liftRatio,
+  margin,
+  requiredHoldLoad,
+  type GripRule,
+} from './squeeze/grip';
+export { hertzComparison, type HertzComparison, type HertzFigures } from './squeeze/hertz';
 export {
   createPad,
   padLift,
@@ -17,50 +98,10 @@ export {
   type PadGeometry,
   type PadSpec,
 } from './squeeze/pad';
+export { recoverPressure, surfaceWeights, type SurfaceWeights } from './squeeze/pressure-recovery';
 export {
-  createContactSystem,
-  solveContact,
-  type ContactOptions,
-  type ContactSolution,
-  type ContactSystem,
-} from './solver/active-set';
-export { contactRadius, recoverPressure, surfaceWeights } from './squeeze/pressure-recovery';
-export {
-  bisectGrip,
-  fruitMass,
-  liftRatio,
-  margin,
-  requiredHoldLoad,
-  STANDARD_GRAVITY,
-  type GripRule,
-} from './squeeze/grip';
-export {
-  validateSqueezeInput,
-  MAX_TRAVEL_FRACTION,
-  type LiftInput,
-  type SqueezeCase,
-  type SqueezeInput,
-} from './squeeze/01-input';
-export {
-  describeState,
-  padForce,
-  prepareSqueeze,
-  solveAt,
-  type PreparedSqueeze,
-  type SqueezeState,
-} from './squeeze/03-contact';
-export { getShearField, maxShearUnder, type ShearField, type ShearPeak } from './squeeze/shear-field';
-export { hertzComparison, type HertzComparison, type HertzFigures } from './squeeze/hertz';
-export {
-  findLiftability,
-  runIncrements,
-  runSqueeze,
-  squeezeWarnings,
-  GRIP_TOLERANCE,
-  type GripPoint,
-  type IncrementTrack,
-  type Liftability,
-  type PressurePoint,
-  type SqueezeResult,
-} from './squeeze/07-run';
-export { sweepPadDiameters, type PadSweepPoint } from './squeeze/08-sweep';
+  getShearField,
+  maxShearUnder,
+  type ShearField,
+  type ShearPeak,
+} from './squeeze/shear-field';

@@ -1,10 +1,16 @@
 import type { Matrix } from 'ml-matrix';
 
+/** The mesh refinement levels of the squeeze model, coarsest first. */
+export const MESH_LEVELS = ['coarse', 'normal', 'fine'] as const;
+
 /** Mesh refinement level of the squeeze model. */
-export type MeshLevel = 'coarse' | 'normal' | 'fine';
+export type MeshLevel = (typeof MESH_LEVELS)[number];
+
+/** The finite-element idealisations: a body of revolution, or a plane-strain slice. */
+export const BODY_MODELS = ['axisymmetric', 'plane-strain'] as const;
 
 /** Which finite-element idealisation: a body of revolution, or a plane-strain slice per unit thickness. */
-export type BodyModel = 'axisymmetric' | 'plane-strain';
+export type BodyModel = (typeof BODY_MODELS)[number];
 
 /** Key of a cached unit body: geometry is scaled to equatorial radius 1 m and modulus 1 Pa. */
 export interface UnitBodyKey {
@@ -47,6 +53,7 @@ export interface CondensedBody {
   stresses(u: Float64Array): StressSample[];
 }
 
+/** Stress (Pa, tension positive) at a sampling point (r, z) in m of the meridional section. */
 export interface StressSample {
   r: number;
   z: number;

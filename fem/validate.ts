@@ -30,3 +30,12 @@ export function requirePoisson(field: string, value: number): number {
   }
   return value;
 }
+
+/** One of `choices`, or a FemInputError naming `field` and listing them ("a, b or c"). */
+export function requireOneOf<T extends string>(field: string, value: T, choices: readonly T[]): T {
+  if (!choices.includes(value)) {
+    const list = `${choices.slice(0, -1).join(', ')} or ${choices[choices.length - 1]}`;
+    throw new FemInputError(field, `${field} must be ${list}`);
+  }
+  return value;
+}

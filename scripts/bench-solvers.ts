@@ -2,11 +2,12 @@
 // one full solve, and the static condensation onto the contact DOFs. Run: npx tsx scripts/bench-solvers.ts
 import * as math from 'mathjs';
 import { assembleStiffness } from '../fem/body/assembly';
+import { symmetryConstraints } from '../fem/body/symmetry';
 import { condense } from '../fem/solver/condense';
 import { addEdgePressure } from '../tests/fem/support/edge-load';
-import { MESH_LEVELS } from '../fem/mesh/mesh-levels';
+import { MESH_LEVEL_PARAMS } from '../fem/mesh/mesh-levels';
 import { quarterEllipseMesh } from '../fem/mesh/quarter-ellipse';
-import { csrGet, type CsrMatrix } from '../fem/solver/csr';
+import { csrGet } from '../tests/fem/support/csr';
 import { solveSymmetric } from '../tests/fem/support/symmetric-solve';
 import { mathjsSubmatrix as toMathjs } from '../tests/fem/support/mathjs-sparse';
 
@@ -16,11 +17,9 @@ function time<T>(fn: () => T): [T, number] {
   return [out, performance.now() - t0];
 }
 
-const mesh = quarterEllipseMesh(1, MESH_LEVELS.normal);
+const mesh = quarterEllipseMesh(1, MESH_LEVEL_PARAMS.normal);
 const k = assembleStiffness(mesh, 'axisymmetric', 1, 0.35);
-const fixed = new Uint8Array(k.n);
-for (const v of mesh.axis) fixed[2 * v] = 1;
-for (const v of mesh.midplane) fixed[2 * v + 1] = 1;
+const fixed = symmetryConstraints(mesh);
 const f = new Float64Array(k.n);
 for (let i = 0; i < 5; i++) {
   addEdgePressure(f, mesh.nodeR, mesh.nodeZ, mesh.surface[i], mesh.surface[i + 1], 1, true);

@@ -1,11 +1,13 @@
 import { Matrix } from 'ml-matrix';
-import { assembleStiffness } from './assembly';
-import { condense } from '../solver/condense';
 import { centroidStresses } from '../elements/element-stresses';
 import { FemInputError } from '../errors';
-import { MESH_LEVELS } from '../mesh/mesh-levels';
+import { MESH_LEVEL_PARAMS } from '../mesh/mesh-levels';
+import type { QuarterSectionMesh } from '../mesh/quad-mesh';
 import { quarterEllipseMesh } from '../mesh/quarter-ellipse';
+import { condense } from '../solver/condense';
 import type { CondensedBody, StressSample, UnitBodyKey } from '../types';
+import { assembleStiffness } from './assembly';
+import { symmetryConstraints } from './symmetry';
 
 /** Candidate contact nodes are the surface nodes with r ≤ this (units of the equatorial radius). */
 export const CONTACT_REACH = 0.6;
@@ -24,13 +26,6 @@ export interface FemBody extends CondensedBody {
   /** mesh node index of each candidate contact node (same order as contactR / contactZ / K) */
   contactNodes: Int32Array;
   /**
-   * Area (m², unit body) each contact node carries, projected on the pad plane: the consistent
-   * nodal share ∫ N_i dA of the segments to its surface neighbours, so a uniform pressure p gives
-   * f_i = −p·area_i exactly (axisymmetric: ∫ N_i 2πr dr, the pole node gets πh²/3; plane strain:
-   * half of each neighbouring strip, per metre of thickness of the half slice). Pressure ≈ −f_i / area_i.
-   */
-  contactArea: Float64Array;
-  /**
    * Multiply the sum of the contact-node forces by this for the whole pad force: 1 for the
    * axisymmetric model (ring forces), 2 for plane strain (the model is the half slice x ≥ 0).
    */
@@ -39,68 +34,57 @@ export interface FemBody extends CondensedBody {
 
 /** Builds (uncached) the condensed unit body of a validated key: E = 1 Pa, equatorial radius 1 m. */
 export function buildCondensedBody(key: UnitBodyKey): FemBody {
-  const mesh = quarterEllipseMesh(key.aspect, MESH_LEVELS[key.level]);
-  const { nodeR, nodeZ, quads, surface, axis, midplane } = mesh;
-  const nNodes = nodeR.length;
+  const mesh = quarterEllipseMesh(key.aspect, MESH_LEVEL_PARAMS[key.level]);
   const k = assembleStiffness(mesh, key.model, 1, key.poisson);
-  const fixed = new Uint8Array(2 * nNodes);
-  for (const v of axis) fixed[2 * v] = 1;
-  for (const v of midplane) fixed[2 * v + 1] = 1;
-  let nc = 0;
-  while (nc < surface.length && nodeR[surface[nc]] <= CONTACT_REACH + 1e-9) nc++;
-  const contactNodes = surface.slice(0, nc);
+  const contactNodes = candidateContactNodes(mesh);
+  const nc = contactNodes.length;
   const keep = contactNodes.map((v) => 2 * v + 1);
   // RCM from the pole: its levels follow the rings, and the kept rows come right after them.
-  const sys = condense(k, keep, fixed, [keep[0]]);
-
-  const kMat = new Matrix(nc, nc);
-  for (let i = 0; i < nc; i++) {
-    for (let j = 0; j < nc; j++) {
-      kMat.set(i, j, 0.5 * (sys.kstar[i * nc + j] + sys.kstar[j * nc + i]));
-    }
-  }
-  const axi = key.model === 'axisymmetric';
-  const contactArea = new Float64Array(nc);
-  for (let i = 0; i < nc; i++) {
-    // Consistent share of a unit pressure on the projected segments either side (N_i r linear × linear).
-    const r0 = nodeR[surface[i]];
-    const rIn = i === 0 ? r0 : nodeR[surface[i - 1]];
-    const rOut = nodeR[surface[i + 1]];
-    contactArea[i] = axi
-      ? (Math.PI / 3) * ((r0 - rIn) * (rIn + 2 * r0) + (rOut - r0) * (2 * r0 + rOut))
-      : 0.5 * (rOut - rIn);
-  }
-  const dofs = 2 * nNodes;
+  const sys = condense(k, keep, symmetryConstraints(mesh), [keep[0]]);
+  const dofs = 2 * mesh.nodeR.length;
   return {
     key: { ...key },
-    nodes: nNodes,
+    nodes: mesh.nodeR.length,
     dofs,
-    contactR: Float64Array.from(contactNodes, (v) => nodeR[v]),
-    contactZ: Float64Array.from(contactNodes, (v) => nodeZ[v]),
-    K: kMat,
+    contactR: Float64Array.from(contactNodes, (v) => mesh.nodeR[v]),
+    contactZ: Float64Array.from(contactNodes, (v) => mesh.nodeZ[v]),
+    K: symmetricPart(sys.kstar, nc),
     recover(uc: Float64Array): Float64Array {
-      if (uc.length !== nc) {
-        throw new FemInputError('uc', `uc must hold ${nc} contact displacements`);
-      }
-      requireAllFinite('uc', uc);
+      requireAllFinite('uc', uc, nc, 'contact displacements');
       return sys.recover(uc);
     },
     stresses(u: Float64Array): StressSample[] {
-      if (u.length !== dofs) throw new FemInputError('u', `u must hold ${dofs} displacements`);
-      requireAllFinite('u', u);
+      requireAllFinite('u', u, dofs, 'displacements');
       return centroidStresses(mesh, key.model, 1, key.poisson, u);
     },
-    nodeR,
-    nodeZ,
-    quads,
-    surfaceNodes: surface,
+    nodeR: mesh.nodeR,
+    nodeZ: mesh.nodeZ,
+    quads: mesh.quads,
+    surfaceNodes: mesh.surface,
     contactNodes,
-    contactArea,
-    forceFactor: axi ? 1 : 2,
+    forceFactor: key.model === 'axisymmetric' ? 1 : 2,
   };
 }
 
-function requireAllFinite(field: string, v: Float64Array): void {
+/** The surface nodes from the pole out to r = CONTACT_REACH (1e-9 absorbs round-off of a node on it). */
+function candidateContactNodes(mesh: QuarterSectionMesh): Int32Array {
+  const { surface, nodeR } = mesh;
+  let nc = 0;
+  while (nc < surface.length && nodeR[surface[nc]] <= CONTACT_REACH + 1e-9) nc++;
+  return surface.slice(0, nc);
+}
+
+/** ½(A + Aᵀ) of a dense row-major n × n array, as a Matrix (removes round-off asymmetry). */
+function symmetricPart(a: Float64Array, n: number): Matrix {
+  const m = new Matrix(n, n);
+  for (let i = 0; i < n; i++) {
+    for (let j = 0; j < n; j++) m.set(i, j, 0.5 * (a[i * n + j] + a[j * n + i]));
+  }
+  return m;
+}
+
+function requireAllFinite(field: string, v: Float64Array, length: number, what: string): void {
+  if (v.length !== length) throw new FemInputError(field, `${field} must hold ${length} ${what}`);
   for (let i = 0; i < v.length; i++) {
     if (!Number.isFinite(v[i])) throw new FemInputError(field, `${field} must hold finite numbers`);
   }

@@ -1,16 +1,15 @@
-import { buildCondensedBody, type FemBody } from './build';
 import { FemInputError } from '../errors';
-import type { BodyModel, MeshLevel, UnitBodyKey } from '../types';
-import { requireFinite, requirePoisson } from '../validate';
+import { BODY_MODELS, MESH_LEVELS, type UnitBodyKey } from '../types';
+import { requireFinite, requireOneOf, requirePoisson } from '../validate';
+import { buildCondensedBody, type FemBody } from './build';
 
 export type { FemBody } from './build';
 
-/** Allowed range of the axial/equatorial radius ratio of the unit body. */
+/** Smallest allowed axial/equatorial radius ratio of the unit body. */
 export const ASPECT_MIN = 0.3;
+/** Largest allowed axial/equatorial radius ratio of the unit body. */
 export const ASPECT_MAX = 3;
 
-const MODELS: readonly BodyModel[] = ['axisymmetric', 'plane-strain'];
-const LEVELS: readonly MeshLevel[] = ['coarse', 'normal', 'fine'];
 /** Bodies kept, least recently used dropped first (a normal body holds ≈ 1.5 MB, a fine ≈ 6 MB). */
 export const CACHE_LIMIT = 32;
 const cache = new Map<string, FemBody>();
@@ -19,9 +18,9 @@ const cache = new Map<string, FemBody>();
  * The unit body (equatorial radius 1 m, E = 1 Pa) condensed onto the axial DOFs of its candidate
  * contact nodes (surface nodes from the pole out to r = 0.6), built once per
  * (model, aspect, poisson, level) and cached in memory (up to CACHE_LIMIT bodies, LRU).
- * Scale per the CondensedBody contract: axisymmetric K_real = E·R·K, plane strain K_real = E·K per metre of thickness (half slice,
- * see FemBody.forceFactor). Throws FemInputError naming the field for an invalid key.
- * The returned object is shared: do not mutate its arrays or K.
+ * Scale per the CondensedBody contract: axisymmetric K_real = E·R·K, plane strain K_real = E·K
+ * per metre of thickness (half slice, see FemBody.forceFactor). Throws FemInputError naming the
+ * field for an invalid key. The returned object is shared: do not mutate its arrays or K.
  */
 export function getCondensedBody(key: UnitBodyKey): FemBody {
   const valid = validateKey(key);
@@ -44,12 +43,8 @@ export function clearCondensedBodyCache(): void {
 }
 
 function validateKey(key: UnitBodyKey): UnitBodyKey {
-  if (!MODELS.includes(key.model)) {
-    throw new FemInputError('model', `model must be one of ${MODELS.join(', ')}`);
-  }
-  if (!LEVELS.includes(key.level)) {
-    throw new FemInputError('level', `level must be one of ${LEVELS.join(', ')}`);
-  }
+  requireOneOf('model', key.model, BODY_MODELS);
+  requireOneOf('level', key.level, MESH_LEVELS);
   requireFinite('aspect', key.aspect);
   if (key.aspect < ASPECT_MIN || key.aspect > ASPECT_MAX) {
     throw new FemInputError('aspect', `aspect must lie between ${ASPECT_MIN} and ${ASPECT_MAX}`);

@@ -1,8 +1,6 @@
+import { STANDARD_GRAVITY } from '../constants';
 import { requirePositive } from '../validate';
 import { requireFiniteResult } from './finite-result';
-
-/** Standard gravity, m/s² (CGPM 1901), used when `g` is omitted. */
-const STANDARD_GRAVITY = 9.80665;
 
 /**
  * Duration factor of an elastic Hertz impact, t = factor·δ* / V, from

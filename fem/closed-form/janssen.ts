@@ -1,8 +1,6 @@
+import { STANDARD_GRAVITY } from '../constants';
 import { requireNonNegative, requirePositive } from '../validate';
 import { requireFiniteResult } from './finite-result';
-
-/** Standard gravity, m/s² (CGPM 1901), used when `g` is omitted. */
-const STANDARD_GRAVITY = 9.80665;
 
 /** A bin of bulk solids (here: fruit) with friction on its walls. */
 export interface JanssenBin {

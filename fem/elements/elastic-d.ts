@@ -6,7 +6,7 @@ import type { BodyModel } from '../types';
  * Row-major. Lamé form, as in any elasticity text (e.g. Timoshenko & Goodier, Theory of Elasticity).
  */
 export function elasticD(model: BodyModel, modulus: number, poisson: number): Float64Array {
-  const lambda = (modulus * poisson) / ((1 + poisson) * (1 - 2 * poisson));
+  const lambda = lameLambda(modulus, poisson);
   const mu = modulus / (2 * (1 + poisson));
   const nN = model === 'axisymmetric' ? 3 : 2;
   const size = nN + 1;

@@ -1,4 +1,4 @@
-import type { QuadMesh } from '../mesh/quad-mesh';
+import { elementCorners, type QuadMesh } from '../mesh/quad-mesh';
 import type { BodyModel, StressSample } from '../types';
 import { elasticD, lameLambda } from './elastic-d';
 import { q4Stress } from './q4-stress';
@@ -18,16 +18,15 @@ export function centroidStresses(
   const d = elasticD(model, modulus, poisson);
   const lambda = lameLambda(modulus, poisson);
   const axi = model === 'axisymmetric';
-  const { nodeR, nodeZ, quads } = mesh;
+  const { quads } = mesh;
   const xr = new Float64Array(4);
   const xz = new Float64Array(4);
   const ue = new Float64Array(8);
   const out: StressSample[] = [];
   for (let e = 0; e < quads.length / 4; e++) {
+    elementCorners(mesh, e, xr, xz);
     for (let a = 0; a < 4; a++) {
       const v = quads[4 * e + a];
-      xr[a] = nodeR[v];
-      xz[a] = nodeZ[v];
       ue[2 * a] = u[2 * v];
       ue[2 * a + 1] = u[2 * v + 1];
     }

@@ -12,7 +12,7 @@ export interface MeshLevelParams {
 }
 
 /** Pole spacing 0.02 / 0.01 / 0.005, growing geometrically in rings out to r ≈ 0.66. */
-export const MESH_LEVELS: Record<MeshLevel, MeshLevelParams> = {
+export const MESH_LEVEL_PARAMS: Record<MeshLevel, MeshLevelParams> = {
   coarse: { half: 6, poleSpacing: 0.02, ringOuter: 0.7 },
   normal: { half: 12, poleSpacing: 0.01, ringOuter: 0.7 },
   fine: { half: 20, poleSpacing: 0.005, ringOuter: 0.7 },

@@ -20,6 +20,20 @@ export interface QuarterSectionMesh extends QuadMesh {
   midplane: Int32Array;
 }
 
+/** Copies the corner coordinates (m) of element `e` into `xr` and `xz` (4 entries, counter-clockwise). */
+export function elementCorners(
+  mesh: QuadMesh,
+  e: number,
+  xr: Float64Array,
+  xz: Float64Array,
+): void {
+  for (let a = 0; a < 4; a++) {
+    const v = mesh.quads[4 * e + a];
+    xr[a] = mesh.nodeR[v];
+    xz[a] = mesh.nodeZ[v];
+  }
+}
+
 /** Growable node and element store used while a mesh is being built. */
 export class MeshBuilder {
   private readonly r: number[] = [];

@@ -1,6 +1,7 @@
 import { requirePositive } from '../validate';
 import type { MeshLevelParams } from './mesh-levels';
-import { MeshBuilder, type QuarterSectionMesh } from './quad-mesh';
+import { DiscDrawing } from './disc-drawing';
+import type { QuarterSectionMesh } from './quad-mesh';
 import { gradedPositions } from './spacing';
 import { fillPatch } from './transfinite';
 
@@ -17,112 +18,102 @@ const CORE_CORNER = 0.72;
  */
 export function quarterEllipseMesh(aspect: number, p: MeshLevelParams): QuarterSectionMesh {
   requirePositive('aspect', aspect);
-  const mb = new MeshBuilder();
-  const m = p.half;
-  const k = Math.max(1, Math.round(0.6 * m));
-  const rhoMin = (p.poleSpacing * m) / CORE_SIDE;
-  // Polar point about the pole: ψ = 0 points down the axis; ψMax(ρ) is where the ring meets the surface.
-  const psiMax = (rho: number): number => Math.PI / 2 - Math.asin(rho / 2);
-  const polar = (rho: number, psi: number): number =>
-    mb.node(rho * Math.sin(psi), 1 - rho * Math.cos(psi));
-  const surf = (alpha: number): number => mb.node(Math.sin(alpha), Math.cos(alpha));
-  const alphaOf = (chord: number): number => 2 * Math.asin(chord / 2);
-  const line = (a: number, b: number, n: number, t?: Float64Array): number[] => {
-    const [ar, az] = mb.coords(a);
-    const [br, bz] = mb.coords(b);
-    const ids = [a];
-    for (let i = 1; i < n; i++) {
-      const s = t ? t[i] : i / n;
-      ids.push(mb.node(ar + s * (br - ar), az + s * (bz - az)));
-    }
-    ids.push(b);
-    return ids;
-  };
-  // Surface nodes strictly between existing end nodes `a` (at angle a0) and `b` (at a1).
-  const arc = (
-    a: number,
-    b: number,
-    a0: number,
-    a1: number,
-    n: number,
-    t?: Float64Array,
-  ): number[] => {
-    const ids = [a];
-    for (let i = 1; i < n; i++) ids.push(surf(a0 + (t ? t[i] : i / n) * (a1 - a0)));
-    ids.push(b);
-    return ids;
-  };
-  const ring = (rho: number): number[] => {
-    const ids: number[] = [];
-    for (let j = 0; j <= 2 * m; j++) ids.push(polar(rho, (j / (2 * m)) * psiMax(rho)));
-    return ids;
-  };
-
-  // Core around the pole.
-  const s = CORE_SIDE * rhoMin;
-  const pole = mb.node(0, 1);
-  const aS = mb.node(0, 1 - s);
-  const sS = surf(alphaOf(s));
-  const surf1 = arc(pole, sS, 0, alphaOf(s), m);
-  const rhoC = CORE_CORNER * rhoMin;
-  const c = polar(rhoC, psiMax(rhoC) / 2);
-  const axis1 = line(pole, aS, m);
-  const edgeAC = line(aS, c, m);
-  const edgeSC = line(sS, c, m);
-  fillPatch(mb, axis1, edgeSC, surf1, edgeAC);
-  const ring0 = ring(rhoMin);
-  const rMid = ring0[m];
-  const axis2 = line(aS, ring0[0], k);
-  const surf2 = arc(sS, ring0[2 * m], alphaOf(s), alphaOf(rhoMin), k);
-  const edgeCR = line(c, rMid, k);
-  fillPatch(mb, axis2, edgeCR, edgeAC, ring0.slice(0, m + 1));
-  fillPatch(mb, surf2, edgeCR, edgeSC, ring0.slice(m).reverse());
-
-  // Rings of geometrically growing radius.
-  const nRings = Math.max(
-    1,
-    Math.round(Math.log(p.ringOuter / rhoMin) / (psiMax(rhoMin) / (2 * m))),
-  );
-  const growth = Math.pow(p.ringOuter / rhoMin, 1 / nRings);
-  const axisNodes = [...axis1, ...axis2.slice(1)];
-  const surfaceNodes = [...surf1, ...surf2.slice(1)];
-  let inner = ring0;
-  for (let n = 1; n <= nRings; n++) {
-    const outer = ring(rhoMin * Math.pow(growth, n));
-    for (let j = 0; j < 2 * m; j++) mb.quad(inner[j], outer[j], outer[j + 1], inner[j + 1]);
-    axisNodes.push(outer[0]);
-    surfaceNodes.push(outer[2 * m]);
-    inner = outer;
-  }
-
-  // The rest: bottom = midplane, top = outermost ring, left = axis, right = surface.
-  const nB = Math.ceil(0.6 * 2 * m);
-  const lastStep = p.ringOuter * (1 - 1 / growth);
-  const origin = mb.node(0, 0);
-  const equator = mb.node(1, 0);
-  const alphaOuter = alphaOf(p.ringOuter);
-  const sideLen = Math.PI / 2 - alphaOuter;
-  const tRight = gradedPositions(nB, (growth * lastStep) / sideLen);
-  const right = arc(equator, inner[2 * m], Math.PI / 2, alphaOuter, nB, reverseGrading(tRight));
-  const left = line(
-    origin,
-    inner[0],
-    nB,
-    reverseGrading(gradedPositions(nB, (growth * lastStep) / (1 - p.ringOuter))),
-  );
-  const bottom = line(origin, equator, 2 * m);
-  fillPatch(mb, bottom, inner, left, right);
-  axisNodes.push(...left.slice(0, nB).reverse());
-  surfaceNodes.push(...right.slice(0, nB).reverse());
-
-  const mesh = mb.build();
+  const g = new DiscDrawing(p.half);
+  const rhoMin = (p.poleSpacing * p.half) / CORE_SIDE;
+  const core = poleCore(g, rhoMin);
+  const rings = growingRings(g, core.ring, rhoMin, p.ringOuter);
+  const rest = outerPatch(g, rings.outer, rings.growth, p.ringOuter);
+  const mesh = g.mb.build();
   for (let i = 0; i < mesh.nodeZ.length; i++) mesh.nodeZ[i] *= aspect;
   return {
     ...mesh,
     aspect,
-    surface: Int32Array.from(surfaceNodes),
-    axis: Int32Array.from(axisNodes),
-    midplane: Int32Array.from(bottom),
+    surface: Int32Array.from([...core.surface, ...rings.surface, ...rest.surface]),
+    axis: Int32Array.from([...core.axis, ...rings.axis, ...rest.axis]),
+    midplane: Int32Array.from(rest.midplane),
+  };
+}
+
+/** Boundary nodes a part of the mesh adds, listed outward from the pole. */
+interface Part {
+  axis: number[];
+  surface: number[];
+}
+
+/** The uniform core around the pole (three patches) up to the first ring, radius ρ_min. */
+function poleCore(g: DiscDrawing, rhoMin: number): Part & { ring: number[] } {
+  const { m, mb } = g;
+  const k = Math.max(1, Math.round(0.6 * m));
+  const s = CORE_SIDE * rhoMin;
+  const pole = mb.node(0, 1);
+  const aS = mb.node(0, 1 - s);
+  const sS = g.surf(g.alphaOf(s));
+  const surf1 = g.arc(pole, sS, 0, g.alphaOf(s), m);
+  const rhoC = CORE_CORNER * rhoMin;
+  const c = g.polar(rhoC, g.psiMax(rhoC) / 2);
+  const axis1 = g.line(pole, aS, m);
+  const edgeAC = g.line(aS, c, m);
+  const edgeSC = g.line(sS, c, m);
+  fillPatch(mb, axis1, edgeSC, surf1, edgeAC);
+  const ring = g.ring(rhoMin);
+  const axis2 = g.line(aS, ring[0], k);
+  const surf2 = g.arc(sS, ring[2 * m], g.alphaOf(s), g.alphaOf(rhoMin), k);
+  const edgeCR = g.line(c, ring[m], k);
+  fillPatch(mb, axis2, edgeCR, edgeAC, ring.slice(0, m + 1));
+  fillPatch(mb, surf2, edgeCR, edgeSC, ring.slice(m).reverse());
+  return { axis: [...axis1, ...axis2.slice(1)], surface: [...surf1, ...surf2.slice(1)], ring };
+}
+
+/** Rings of geometrically growing radius from ρ_min to `ringOuter`, about as wide as they are deep. */
+function growingRings(
+  g: DiscDrawing,
+  first: number[],
+  rhoMin: number,
+  ringOuter: number,
+): Part & { outer: number[]; growth: number } {
+  const m = g.m;
+  const nRings = Math.max(
+    1,
+    Math.round(Math.log(ringOuter / rhoMin) / (g.psiMax(rhoMin) / (2 * m))),
+  );
+  const growth = Math.pow(ringOuter / rhoMin, 1 / nRings);
+  const axis: number[] = [];
+  const surface: number[] = [];
+  let inner = first;
+  for (let n = 1; n <= nRings; n++) {
+    const outer = g.ring(rhoMin * Math.pow(growth, n));
+    for (let j = 0; j < 2 * m; j++) g.mb.quad(inner[j], outer[j], outer[j + 1], inner[j + 1]);
+    axis.push(outer[0]);
+    surface.push(outer[2 * m]);
+    inner = outer;
+  }
+  return { axis, surface, outer: inner, growth };
+}
+
+/** The rest: bottom = midplane, top = outermost ring, left = axis, right = surface. */
+function outerPatch(
+  g: DiscDrawing,
+  inner: number[],
+  growth: number,
+  ringOuter: number,
+): Part & { midplane: number[] } {
+  const m = g.m;
+  const nB = Math.ceil(0.6 * 2 * m);
+  const lastStep = ringOuter * (1 - 1 / growth);
+  const origin = g.mb.node(0, 0);
+  const equator = g.mb.node(1, 0);
+  const alphaOuter = g.alphaOf(ringOuter);
+  const sideLen = Math.PI / 2 - alphaOuter;
+  const tRight = gradedPositions(nB, (growth * lastStep) / sideLen);
+  const right = g.arc(equator, inner[2 * m], Math.PI / 2, alphaOuter, nB, reverseGrading(tRight));
+  const tLeft = gradedPositions(nB, (growth * lastStep) / (1 - ringOuter));
+  const left = g.line(origin, inner[0], nB, reverseGrading(tLeft));
+  const bottom = g.line(origin, equator, 2 * m);
+  fillPatch(g.mb, bottom, inner, left, right);
+  return {
+    axis: left.slice(0, nB).reverse(),
+    surface: right.slice(0, nB).reverse(),
+    midplane: bottom,
   };
 }
 

@@ -1,14 +1,6 @@
 import { CholeskyDecomposition, Matrix } from 'ml-matrix';
 import { FemConvergenceError, FemInputError } from '../errors';
-
-/** A condensed contact system held as its compliance (flexibility) C = K⁻¹. */
-export interface ContactSystem {
-  size: number;
-  /** C = K⁻¹ (m/N for a real body), symmetric positive definite */
-  compliance: Matrix;
-  /** the same, row-major, for fast products */
-  flat: Float64Array;
-}
+import type { ContactSystem } from './compliance';
 
 /** Options of one contact solve. */
 export interface ContactOptions {
@@ -38,39 +30,6 @@ export interface ContactSolution {
   released: number;
 }
 
-/** Builds the contact system from a condensed stiffness K (SPD); throws FemInputError otherwise. */
-export function createContactSystem(stiffness: Matrix): ContactSystem {
-  const n = stiffness.rows;
-  if (!stiffness.isSquare()) throw new FemInputError('stiffness', 'stiffness must be square');
-  const scale = Math.max(stiffness.max(), -stiffness.min());
-  const sym = new Matrix(n, n);
-  for (let i = 0; i < n; i++) {
-    for (let j = 0; j < n; j++) {
-      const a = stiffness.get(i, j);
-      const b = stiffness.get(j, i);
-      if (!(Math.abs(a - b) <= 1e-8 * scale)) {
-        throw new FemInputError('stiffness', 'stiffness must be symmetric');
-      }
-      sym.set(i, j, (a + b) / 2);
-    }
-  }
-  const chol = new CholeskyDecomposition(sym);
-  if (!chol.isPositiveDefinite()) {
-    throw new FemInputError('stiffness', 'stiffness must be positive definite');
-  }
-  const inv = chol.solve(Matrix.eye(n));
-  const compliance = new Matrix(n, n);
-  const flat = new Float64Array(n * n);
-  for (let i = 0; i < n; i++) {
-    for (let j = 0; j < n; j++) {
-      const c = (inv.get(i, j) + inv.get(j, i)) / 2;
-      compliance.set(i, j, c);
-      flat[i * n + j] = c;
-    }
-  }
-  return { size: n, compliance, flat };
-}
-
 /**
  * Unilateral frictionless contact by an active set, as the complementarity problem
  * s = (g − d) + (C + D_f) p, s ≥ 0, p ≥ 0, s·p = 0 (D_f: facing compliance in series).
@@ -81,17 +40,12 @@ export function createContactSystem(stiffness: Matrix): ContactSystem {
  */
 export function solveContact(system: ContactSystem, options: ContactOptions): ContactSolution {
   const n = system.size;
-  const C = system.flat;
   const { gap, travel } = options;
   if (gap.length !== n) throw new FemInputError('gap', 'gap must have one entry per contact node');
   const facing = options.facingCompliance ?? new Float64Array(n);
   const q = gap.map((g) => g - travel);
   const reachable = q.map((v) => (Number.isFinite(v) ? 1 : 0));
-  const active = new Uint8Array(n);
-  for (let i = 0; i < n; i++) {
-    const start = options.initialActive ? options.initialActive[i] === 1 : q[i] < 0;
-    active[i] = start && reachable[i] ? 1 : 0;
-  }
+  const active = startingSet(q, reachable, options.initialActive);
   const tolS = 1e-10 * Math.max(...q.filter(Number.isFinite).map(Math.abs), travel);
   const maxIterations = options.maxIterations ?? 2 * n + 20;
   const seen = new Set<string>();
@@ -100,26 +54,10 @@ export function solveContact(system: ContactSystem, options: ContactOptions): Co
   let released = 0;
   for (let iteration = 1; iteration <= maxIterations; iteration++) {
     const p = solveActive(system.compliance, facing, q, active);
-    const s = new Float64Array(n);
-    for (let i = 0; i < n; i++) {
-      let v = q[i] + facing[i] * p[i];
-      for (let j = 0; j < n; j++) if (p[j] !== 0) v += C[i * n + j] * p[j];
-      s[i] = v;
-    }
-    const tolP = 1e-10 * Math.max(...p.map(Math.abs));
-    const flips: number[] = [];
-    for (let i = 0; i < n; i++) {
-      if (active[i] && p[i] < -tolP) flips.push(i);
-      else if (!active[i] && reachable[i] && s[i] < -tolS) flips.push(i);
-    }
+    const s = gapsUnder(system, facing, q, p);
+    const flips = violations(active, reachable, p, s, tolS);
     if (flips.length === 0) {
-      const displacement = new Float64Array(n);
-      for (let i = 0; i < n; i++) {
-        let v = 0;
-        for (let j = 0; j < n; j++) if (p[j] !== 0) v -= C[i * n + j] * p[j];
-        displacement[i] = v;
-        if (active[i]) s[i] = 0;
-      }
+      const displacement = closeActive(system, p, s, active);
       return { active, force: p, displacement, gap: s, iterations: iteration, added, released };
     }
     for (const i of murty ? flips.slice(0, 1) : flips) {
@@ -134,6 +72,70 @@ export function solveContact(system: ContactSystem, options: ContactOptions): Co
   throw new FemConvergenceError(
     `contact active set did not settle within ${maxIterations} iterations (travel ${travel} m)`,
   );
+}
+
+/** The warm-start set if given, else the nodes the travel would make penetrate; never unreachable ones. */
+function startingSet(q: Float64Array, reachable: Float64Array, warm?: Uint8Array): Uint8Array {
+  const active = new Uint8Array(q.length);
+  for (let i = 0; i < q.length; i++) {
+    const start = warm ? warm[i] === 1 : q[i] < 0;
+    active[i] = start && reachable[i] ? 1 : 0;
+  }
+  return active;
+}
+
+/** Gaps s = q + (C + D_f) p under the forces p (zero forces skipped: most nodes are free). */
+function gapsUnder(
+  system: ContactSystem,
+  facing: Float64Array,
+  q: Float64Array,
+  p: Float64Array,
+): Float64Array {
+  const n = system.size;
+  const C = system.flat;
+  const s = new Float64Array(n);
+  for (let i = 0; i < n; i++) {
+    let v = q[i] + facing[i] * p[i];
+    for (let j = 0; j < n; j++) if (p[j] !== 0) v += C[i * n + j] * p[j];
+    s[i] = v;
+  }
+  return s;
+}
+
+/** Active nodes pulling on the pad and reachable free nodes penetrating it, in index order. */
+function violations(
+  active: Uint8Array,
+  reachable: Float64Array,
+  p: Float64Array,
+  s: Float64Array,
+  tolS: number,
+): number[] {
+  const tolP = 1e-10 * Math.max(...p.map(Math.abs));
+  const flips: number[] = [];
+  for (let i = 0; i < active.length; i++) {
+    if (active[i] && p[i] < -tolP) flips.push(i);
+    else if (!active[i] && reachable[i] && s[i] < -tolS) flips.push(i);
+  }
+  return flips;
+}
+
+/** Displacements u = −C p of the converged state; the active gaps are set to exactly zero. */
+function closeActive(
+  system: ContactSystem,
+  p: Float64Array,
+  s: Float64Array,
+  active: Uint8Array,
+): Float64Array {
+  const n = system.size;
+  const C = system.flat;
+  const displacement = new Float64Array(n);
+  for (let i = 0; i < n; i++) {
+    let v = 0;
+    for (let j = 0; j < n; j++) if (p[j] !== 0) v -= C[i * n + j] * p[j];
+    displacement[i] = v;
+    if (active[i]) s[i] = 0;
+  }
+  return displacement;
 }
 
 /** Forces on the active set with every active gap closed: (C + D_f)_AA p_A = −q_A. */

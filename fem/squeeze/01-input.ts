@@ -1,8 +1,14 @@
 import { ASPECT_MAX, ASPECT_MIN } from '../body/cache';
 import { FemInputError } from '../errors';
+import { BODY_MODELS, MESH_LEVELS, type BodyModel, type MeshLevel } from '../types';
+import {
+  requireFinite,
+  requireNonNegative,
+  requireOneOf,
+  requirePoisson,
+  requirePositive,
+} from '../validate';
 import { createPad, type PadGeometry } from './pad';
-import type { BodyModel, MeshLevel } from '../types';
-import { requireFinite, requireNonNegative, requirePoisson, requirePositive } from '../validate';
 
 /**
  * Inputs of a squeeze check, SI units (m, Pa, kg/m³). Two identical pads squeeze the fruit along
@@ -47,7 +53,7 @@ export interface SqueezeInput {
   failureShear?: number;
 }
 
-/** Validated input with defaults filled in. */
+/** Validated input with defaults filled in (SI); `aspect` = axialRadius / equatorialRadius. */
 export interface SqueezeCase {
   model: BodyModel;
   equatorialRadius: number;
@@ -64,7 +70,7 @@ export interface SqueezeCase {
   lift: LiftInput | null;
 }
 
-/** Liftability inputs, validated. */
+/** Liftability inputs, validated (see SqueezeInput for units). */
 export interface LiftInput {
   density: number;
   friction: number;
@@ -76,8 +82,6 @@ export interface LiftInput {
 
 /** Largest travel per pad as a fraction of the axial radius (see validateSqueezeInput). */
 export const MAX_TRAVEL_FRACTION = 0.15;
-const MESH_LEVELS: readonly MeshLevel[] = ['coarse', 'normal', 'fine'];
-const MODELS: readonly BodyModel[] = ['axisymmetric', 'plane-strain'];
 
 /**
  * Checks every input and fills defaults; throws FemInputError naming the field. Travel is capped
@@ -86,12 +90,8 @@ const MODELS: readonly BodyModel[] = ['axisymmetric', 'plane-strain'];
  * graded contact zone), so larger squeezes would return confident-looking nonsense.
  */
 export function validateSqueezeInput(input: SqueezeInput): SqueezeCase {
-  const model = input.model ?? 'axisymmetric';
-  if (!MODELS.includes(model))
-    throw new FemInputError('model', 'model must be axisymmetric or plane-strain');
-  const mesh = input.mesh ?? 'normal';
-  if (!MESH_LEVELS.includes(mesh))
-    throw new FemInputError('mesh', 'mesh must be coarse, normal or fine');
+  const model = requireOneOf('model', input.model ?? 'axisymmetric', BODY_MODELS);
+  const mesh = requireOneOf('mesh', input.mesh ?? 'normal', MESH_LEVELS);
   const equatorialRadius = requirePositive('equatorialRadius', input.equatorialRadius);
   const axialRadius =
     input.axialRadius === undefined

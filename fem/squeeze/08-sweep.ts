@@ -1,7 +1,9 @@
+/**
+ * Stage 8 of the squeeze pipeline: margin versus pad size, one run of stage 7 per pad diameter.
+ */
 import { FemInputError } from '../errors';
-import { findLiftability, runIncrements, squeezeWarnings } from './07-run';
-import { validateSqueezeInput, type SqueezeInput } from './01-input';
-import { prepareSqueeze } from './03-contact';
+import type { SqueezeInput } from './01-input';
+import { runCase, squeezeWarnings } from './07-run';
 
 /** One pad size of a sweep, SI; margins > 1 are safe, null when not computable. */
 export interface PadSweepPoint {
@@ -36,10 +38,8 @@ export function sweepPadDiameters(
     throw new FemInputError('padDiameters', 'padDiameters must list 1 to 200 diameters');
   }
   return diameters.map((padDiameter) => {
-    const prep = prepareSqueeze(validateSqueezeInput({ ...input, padDiameter }));
-    const track = runIncrements(prep, false);
+    const { stage, track, liftability: lift } = runCase({ ...input, padDiameter }, false);
     const final = track[track.length - 1].state;
-    const lift = findLiftability(prep, track);
     const grip = lift?.grip ?? null;
     return {
       padDiameter,
@@ -51,7 +51,7 @@ export function sweepPadDiameters(
       bruiseMargin: grip?.bruiseMargin ?? null,
       shearMargin: grip?.shearMargin ?? null,
       reason: lift === null ? 'no liftability inputs (density and friction)' : lift.reason,
-      warnings: squeezeWarnings(prep, grip ?? final),
+      warnings: squeezeWarnings(stage, grip ?? final),
     };
   });
 }

@@ -1,8 +1,6 @@
+import { STANDARD_GRAVITY } from '../constants';
 import { FemConvergenceError } from '../errors';
 import type { BodyModel } from '../types';
-
-/** Standard gravity g, m/s² (CGPM 1901). */
-export const STANDARD_GRAVITY = 9.80665;
 
 /**
  * Fruit mass from density ρ (kg/m³) and radii (m): spheroid (4/3)π R_eq² R_ax in kg; for the
@@ -38,7 +36,7 @@ export function requiredHoldLoad(rule: GripRule): number {
 
 /**
  * Lift ratio of two opposed pads each pressing with normal force F (N): μ·2F / (SF·m·(g + a)),
- * from the grip rule 2μN ≥ SF·m(g + a) [practice]. ≥ 1 means the fruit can be lifted.
+ * from the grip rule 2μN ≥ SF·m(g + a) [common practice]. ≥ 1 means the fruit can be lifted.
  */
 export function liftRatio(padForce: number, rule: GripRule): number {
   return (rule.friction * 2 * padForce) / requiredHoldLoad(rule);

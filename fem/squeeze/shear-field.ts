@@ -1,6 +1,7 @@
 import type { FemBody } from '../body/cache';
 import { elasticD, lameLambda } from '../elements/elastic-d';
 import { q4Stress } from '../elements/q4-stress';
+import { elementCorners } from '../mesh/quad-mesh';
 
 /**
  * Stress influence of the contact nodes on the element centroids under the candidate contact
@@ -25,66 +26,90 @@ export function getShearField(body: FemBody): ShearField {
   const hit = cache.get(body);
   if (hit) return hit;
   const nc = body.contactR.length;
-  const reach = body.contactR[nc - 1];
-  const { nodeR, nodeZ, quads, key } = body;
-  const axi = key.model === 'axisymmetric';
-  const d = elasticD(key.model, 1, key.poisson);
-  const lambda = lameLambda(1, key.poisson);
+  // One full unit-body displacement field per contact node moved by 1 (unit body, m).
   const columns = Array.from({ length: nc }, (_, j) => {
     const uc = new Float64Array(nc);
     uc[j] = 1;
     return body.recover(uc);
   });
-  const zone: { e: number; r: number; z: number }[] = [];
-  for (let e = 0; e < quads.length / 4; e++) {
-    let r = 0;
-    let z = 0;
-    for (let a = 0; a < 4; a++) {
-      r += nodeR[quads[4 * e + a]] / 4;
-      z += nodeZ[quads[4 * e + a]] / 4;
-    }
-    if (r <= reach) zone.push({ e, r, z });
-  }
-  zone.sort((x, y) => x.r - y.r);
-  const ns = zone.length;
-  const r = new Float64Array(ns);
-  const depth = new Float64Array(ns);
-  const influence = new Float64Array(ns * 4 * nc);
-  const xr = new Float64Array(4);
-  const xz = new Float64Array(4);
-  const ue = new Float64Array(8);
-  const se = new Float64Array(32); // [component][local dof]
+  const zone = elementsUnder(body, body.contactR[nc - 1]);
+  const r = new Float64Array(zone.length);
+  const depth = new Float64Array(zone.length);
+  const influence = new Float64Array(zone.length * 4 * nc);
+  const unit = new UnitStresses(body);
   zone.forEach(({ e, r: rc }, s) => {
-    for (let a = 0; a < 4; a++) {
-      xr[a] = nodeR[quads[4 * e + a]];
-      xz[a] = nodeZ[quads[4 * e + a]];
-    }
-    for (let c = 0; c < 8; c++) {
-      ue.fill(0);
-      ue[c] = 1;
-      const q = q4Stress(xr, xz, ue, d, axi, lambda, 0, 0);
-      if (c === 0) {
-        r[s] = q.r;
-        // Depth below the undeformed elliptical meridian z = aspect·√(1 − r²) of the unit body.
-        depth[s] = Math.max(key.aspect * Math.sqrt(Math.max(1 - rc * rc, 0)) - q.z, 0);
-      }
-      [q.srr, q.szz, q.stt, q.srz].forEach((v, k) => (se[k * 8 + c] = v));
-    }
+    const at = unit.evaluate(e);
+    r[s] = at.r;
+    // Depth below the undeformed elliptical meridian z = aspect·√(1 − r²) of the unit body.
+    depth[s] = Math.max(body.key.aspect * Math.sqrt(Math.max(1 - rc * rc, 0)) - at.z, 0);
     for (let j = 0; j < nc; j++) {
-      const u = columns[j];
-      for (let k = 0; k < 4; k++) {
-        let v = 0;
-        for (let a = 0; a < 4; a++) {
-          const node = quads[4 * e + a];
-          v += se[k * 8 + 2 * a] * u[2 * node] + se[k * 8 + 2 * a + 1] * u[2 * node + 1];
-        }
-        influence[(s * 4 + k) * nc + j] = v;
-      }
+      for (let k = 0; k < 4; k++) influence[(s * 4 + k) * nc + j] = unit.apply(e, k, columns[j]);
     }
   });
   const field = { r, depth, influence, nodes: nc };
   cache.set(body, field);
   return field;
+}
+
+/** Elements whose centroid lies at r ≤ `reach` (unit body), sorted by centroid radius. */
+function elementsUnder(body: FemBody, reach: number): { e: number; r: number }[] {
+  const xr = new Float64Array(4);
+  const xz = new Float64Array(4);
+  const zone: { e: number; r: number }[] = [];
+  for (let e = 0; e < body.quads.length / 4; e++) {
+    elementCorners(body, e, xr, xz);
+    let r = 0;
+    for (let a = 0; a < 4; a++) r += xr[a] / 4;
+    if (r <= reach) zone.push({ e, r });
+  }
+  return zone.sort((x, y) => x.r - y.r);
+}
+
+/**
+ * Centroid stresses of one element of the unit body (E = 1 Pa) for each of its 8 DOFs moved by 1,
+ * kept as the 4 × 8 matrix `se` [component srr, szz, stt, srz][local DOF].
+ */
+class UnitStresses {
+  private readonly xr = new Float64Array(4);
+  private readonly xz = new Float64Array(4);
+  private readonly ue = new Float64Array(8);
+  private readonly se = new Float64Array(32);
+  private readonly d: Float64Array;
+  private readonly lambda: number;
+  private readonly axi: boolean;
+
+  constructor(private readonly body: FemBody) {
+    this.d = elasticD(body.key.model, 1, body.key.poisson);
+    this.lambda = lameLambda(1, body.key.poisson);
+    this.axi = body.key.model === 'axisymmetric';
+  }
+
+  /** Fills the matrix for element `e`; returns the centroid (r, z) in m. */
+  evaluate(e: number): { r: number; z: number } {
+    const { xr, xz, ue, se } = this;
+    elementCorners(this.body, e, xr, xz);
+    let centroid = { r: 0, z: 0 };
+    for (let c = 0; c < 8; c++) {
+      ue.fill(0);
+      ue[c] = 1;
+      const q = q4Stress(xr, xz, ue, this.d, this.axi, this.lambda, 0, 0);
+      if (c === 0) centroid = { r: q.r, z: q.z };
+      [q.srr, q.szz, q.stt, q.srz].forEach((v, k) => (se[k * 8 + c] = v));
+    }
+    return centroid;
+  }
+
+  /** Stress component `k` of the last evaluated element `e` under the full displacement `u`. */
+  apply(e: number, k: number, u: Float64Array): number {
+    const { se } = this;
+    const quads = this.body.quads;
+    let v = 0;
+    for (let a = 0; a < 4; a++) {
+      const node = quads[4 * e + a];
+      v += se[k * 8 + 2 * a] * u[2 * node] + se[k * 8 + 2 * a + 1] * u[2 * node + 1];
+    }
+    return v;
+  }
 }
 
 /** Largest Tresca shear and where it sits, unit-body units (multiply stress by E, lengths by R). */

@@ -8,7 +8,7 @@ import { centroidStresses } from '../../../fem/elements/element-stresses';
 import { q4Stress } from '../../../fem/elements/q4-stress';
 import { GAUSS_2 } from '../../../fem/elements/quad4';
 import type { QuadMesh } from '../../../fem/mesh/quad-mesh';
-import { csrMultiply } from '../../../fem/solver/csr';
+import { csrMultiply } from '../support/csr';
 import { solveSymmetric } from '../support/symmetric-solve';
 
 // A distorted (non-parallelogram) quad away from the axis, counter-clockwise; invented inputs.

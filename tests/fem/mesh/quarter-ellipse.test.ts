@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { MESH_LEVELS } from '../../../fem/mesh/mesh-levels';
+import { MESH_LEVEL_PARAMS } from '../../../fem/mesh/mesh-levels';
 import { meshQuality } from '../support/mesh-quality';
 import { quarterEllipseMesh } from '../../../fem/mesh/quarter-ellipse';
 import type { MeshLevel } from '../../../fem/types';
@@ -21,7 +21,7 @@ describe('quarter-ellipse mesh', () => {
   for (const level of LEVELS) {
     for (const aspect of [0.5, 1, 2, 0.3, 3]) {
       it(`${level}, aspect ${aspect}: valid elements that tile the section`, () => {
-        const mesh = quarterEllipseMesh(aspect, MESH_LEVELS[level]);
+        const mesh = quarterEllipseMesh(aspect, MESH_LEVEL_PARAMS[level]);
         const q = meshQuality(mesh);
         // Bilinear map is one-to-one iff det J > 0 at the corners (then everywhere inside);
         // Gauss points are checked too (Cook et al. 2002, isoparametric elements [memory]).
@@ -54,7 +54,7 @@ describe('quarter-ellipse mesh', () => {
 
   it('puts boundary nodes on the boundary, the surface ordered from the pole', () => {
     const aspect = 1.7;
-    const m = quarterEllipseMesh(aspect, MESH_LEVELS.normal);
+    const m = quarterEllipseMesh(aspect, MESH_LEVEL_PARAMS.normal);
     for (const v of m.axis) expect(m.nodeR[v]).toBe(0);
     for (const v of m.midplane) expect(m.nodeZ[v]).toBe(0);
     expect(m.nodeZ[m.surface[0]]).toBeCloseTo(aspect, 14);
@@ -68,7 +68,7 @@ describe('quarter-ellipse mesh', () => {
 
   for (const level of LEVELS) {
     it(`${level}: fine near the pole, spacing growing with distance, to r ≥ 0.6`, () => {
-      const p = MESH_LEVELS[level];
+      const p = MESH_LEVEL_PARAMS[level];
       const m = quarterEllipseMesh(1, p);
       const r = Array.from(m.surface, (v) => m.nodeR[v]);
       // Brief's spacing at the pole (0.02 / 0.01 / 0.005 of the radius); 1 % for the arc/chord.

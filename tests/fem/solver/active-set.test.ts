@@ -1,7 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { Matrix } from 'ml-matrix';
 import { lusolve, matrix, type Matrix as MathMatrix } from 'mathjs';
-import { createContactSystem, solveContact } from '../../../fem/solver/active-set';
+import { solveContact } from '../../../fem/solver/active-set';
+import { createContactSystem } from '../../../fem/solver/compliance';
 import { FemConvergenceError } from '../../../fem/errors';
 
 // Synthetic SPD system (inputs invented): a chain of nodes joined by springs kc, each tied to

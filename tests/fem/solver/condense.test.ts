@@ -1,9 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import { assembleStiffness } from '../../../fem/body/assembly';
+import { symmetryConstraints } from '../../../fem/body/symmetry';
 import { condense } from '../../../fem/solver/condense';
-import { MESH_LEVELS } from '../../../fem/mesh/mesh-levels';
+import { MESH_LEVEL_PARAMS } from '../../../fem/mesh/mesh-levels';
 import { quarterEllipseMesh } from '../../../fem/mesh/quarter-ellipse';
-import { csrFromDense, csrMultiply } from '../../../fem/solver/csr';
+import { csrFromDense, csrMultiply } from '../support/csr';
 import { solveSymmetric } from '../support/symmetric-solve';
 
 const maxAbs = (v: ArrayLike<number>): number =>
@@ -43,11 +44,9 @@ describe('static condensation', () => {
       // Source: Cook et al. 2002, static condensation is exact for statics [memory]. Reference:
       // the full system with u_c prescribed (moved to the right-hand side), solved by the full
       // skyline factorisation, itself checked against mathjs's sparse LU in solver.test.ts.
-      const mesh = quarterEllipseMesh(0.7, MESH_LEVELS.coarse);
+      const mesh = quarterEllipseMesh(0.7, MESH_LEVEL_PARAMS.coarse);
       const k = assembleStiffness(mesh, model, 1, 0.3);
-      const fixed = new Uint8Array(k.n);
-      for (const v of mesh.axis) fixed[2 * v] = 1;
-      for (const v of mesh.midplane) fixed[2 * v + 1] = 1;
+      const fixed = symmetryConstraints(mesh);
       const contact = Array.from(mesh.surface).filter((v) => mesh.nodeR[v] <= 0.6);
       const keep = contact.map((v) => 2 * v + 1);
       const sys = condense(k, keep, fixed, [keep[0]]);
@@ -77,7 +76,7 @@ describe('static condensation', () => {
       // Dimensional analysis [computed]: K ∝ ∫BᵀDB dV with B ∝ 1/R, D ∝ E, dV ∝ R³ (ring,
       // 2π r dA) or R² (per metre of thickness), so K_real = E·R·K_unit or E·K_unit.
       // Tolerance 1e-10 relative: the same arithmetic on scaled numbers.
-      const unit = quarterEllipseMesh(0.9, MESH_LEVELS.coarse);
+      const unit = quarterEllipseMesh(0.9, MESH_LEVEL_PARAMS.coarse);
       const radius = 0.04;
       const modulus = 3e6;
       const real = {
@@ -85,9 +84,7 @@ describe('static condensation', () => {
         nodeR: unit.nodeR.map((r) => r * radius),
         nodeZ: unit.nodeZ.map((z) => z * radius),
       };
-      const fixed = new Uint8Array(2 * unit.nodeR.length);
-      for (const v of unit.axis) fixed[2 * v] = 1;
-      for (const v of unit.midplane) fixed[2 * v + 1] = 1;
+      const fixed = symmetryConstraints(unit);
       const keep = Array.from(unit.surface.subarray(0, 12), (v) => 2 * v + 1);
       const kUnit = condense(assembleStiffness(unit, model, 1, 0.4), keep, fixed).kstar;
       const kReal = condense(assembleStiffness(real, model, modulus, 0.4), keep, fixed).kstar;

@@ -1,9 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import { assembleStiffness } from '../../../fem/body/assembly';
+import { symmetryConstraints } from '../../../fem/body/symmetry';
 import { addEdgePressure } from '../support/edge-load';
-import { MESH_LEVELS } from '../../../fem/mesh/mesh-levels';
+import { MESH_LEVEL_PARAMS } from '../../../fem/mesh/mesh-levels';
 import { quarterEllipseMesh } from '../../../fem/mesh/quarter-ellipse';
-import { csrGet, csrMultiply } from '../../../fem/solver/csr';
+import { csrGet, csrMultiply } from '../support/csr';
 import { solveSymmetric } from '../support/symmetric-solve';
 import { mathjsSolve } from '../support/mathjs-reference';
 
@@ -12,11 +13,9 @@ const maxAbs = (v: ArrayLike<number>): number =>
 
 /** Coarse quarter-section problem with a pressure patch at the pole; inputs are invented. */
 function problem(model: 'axisymmetric' | 'plane-strain') {
-  const mesh = quarterEllipseMesh(1.3, MESH_LEVELS.coarse);
+  const mesh = quarterEllipseMesh(1.3, MESH_LEVEL_PARAMS.coarse);
   const k = assembleStiffness(mesh, model, 1, 0.35);
-  const fixed = new Uint8Array(k.n);
-  for (const v of mesh.axis) fixed[2 * v] = 1;
-  for (const v of mesh.midplane) fixed[2 * v + 1] = 1;
+  const fixed = symmetryConstraints(mesh);
   const f = new Float64Array(k.n);
   for (let i = 0; i < 6; i++) {
     addEdgePressure(

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { describeState, prepareSqueeze, solveAt, validateSqueezeInput } from '../../../fem';
+import { prepareShear, solveAt, stateAt } from '../../../fem';
 
 // Consistency [computed]: the cached stress influence used per increment must give the same
 // largest shear as the body's own recover() + stresses() on the same contact displacements.
@@ -7,7 +7,7 @@ describe('subsurface shear from the stress influence', () => {
   it.each(['axisymmetric', 'plane-strain'] as const)('matches recover + stresses (%s)', (model) => {
     const E = 3e6;
     const R = 0.04;
-    const c = validateSqueezeInput({
+    const stage = prepareShear({
       model,
       equatorialRadius: R,
       modulus: E,
@@ -15,12 +15,11 @@ describe('subsurface shear from the stress influence', () => {
       travel: 0.001,
       mesh: 'coarse',
     });
-    const prep = prepareSqueeze(c);
-    const sol = solveAt(prep, 0.001);
-    const { state } = describeState(prep, sol, 0.001, true);
-    const u = prep.body.recover(sol.displacement.map((x) => x / R));
+    const { state } = stateAt(stage, 0.001, undefined, true);
+    const sol = solveAt(stage, 0.001);
+    const u = stage.body.recover(sol.displacement.map((x) => x / R));
     let best = 0;
-    for (const s of prep.body.stresses(u)) {
+    for (const s of stage.body.stresses(u)) {
       if (s.r > state.contactRadius / R) continue;
       const centre = (s.srr + s.szz) / 2;
       const rad = Math.hypot((s.srr - s.szz) / 2, s.srz);

@@ -1,8 +1,9 @@
 // Test helper: a quarter-section mesh with its symmetry constraints and a solve under surface pressure.
 import { assembleStiffness } from '../../../fem/body/assembly';
+import { symmetryConstraints } from '../../../fem/body/symmetry';
 import { addEdgePressure } from './edge-load';
 import { centroidStresses } from '../../../fem/elements/element-stresses';
-import { MESH_LEVELS } from '../../../fem/mesh/mesh-levels';
+import { MESH_LEVEL_PARAMS } from '../../../fem/mesh/mesh-levels';
 import { quarterEllipseMesh } from '../../../fem/mesh/quarter-ellipse';
 import { solveSymmetric } from './symmetric-solve';
 import type { BodyModel, MeshLevel, StressSample } from '../../../fem/types';
@@ -23,11 +24,9 @@ export function solvePressureCase(c: PressureCase): {
   f: Float64Array;
   stresses: StressSample[];
 } {
-  const mesh = quarterEllipseMesh(c.aspect, MESH_LEVELS[c.level]);
+  const mesh = quarterEllipseMesh(c.aspect, MESH_LEVEL_PARAMS[c.level]);
   const k = assembleStiffness(mesh, c.model, 1, c.poisson);
-  const fixed = new Uint8Array(k.n);
-  for (const v of mesh.axis) fixed[2 * v] = 1;
-  for (const v of mesh.midplane) fixed[2 * v + 1] = 1;
+  const fixed = symmetryConstraints(mesh);
   const f = new Float64Array(k.n);
   const axi = c.model === 'axisymmetric';
   const edges = c.edges === 'all' ? mesh.surface.length - 1 : c.edges;
