@@ -1,33 +1,44 @@
 /**
- * CLI for the numerical core: `npm run --silent fem -- squeeze [options] [--json]`.
- * A thin I/O layer: display units in (mm, MPa, kPa, g), SI to fem, display units out.
- * Bad options print one line to stderr and exit 2.
+ * CLI for the numerical core: `tenderline squeeze [options] [--json]` (built by
+ * `npm run build:cli` into dist/tenderline.mjs; `npm run --silent fem -- squeeze …` runs the source).
+ * A thin I/O layer: display units in (mm, MPa, kPa), SI to fem, display units out.
+ * Bad options print one line to stderr, naming the option as typed, and exit 2.
  */
 import { parseArgs } from 'node:util';
 import { FemConvergenceError, FemInputError, runSqueeze } from '../fem';
-import type { SqueezeInput, SqueezeResult, SqueezeState } from '../fem';
+import type { HertzFigures, MeshLevel, SqueezeInput, SqueezeResult, SqueezeState } from '../fem';
+
+type NumberField = Exclude<
+  keyof SqueezeInput,
+  'model' | 'mesh' | 'equatorialRadius' | 'axialRadius'
+>;
+
+/** Numeric options: the SqueezeInput field each one sets and its factor to SI. */
+const NUMBERS: Record<string, [NumberField, number]> = {
+  'modulus-mpa': ['modulus', 1e6],
+  poisson: ['poisson', 1],
+  'travel-mm': ['travel', 1e-3],
+  steps: ['steps', 1],
+  'pad-diameter-mm': ['padDiameter', 1e-3],
+  'edge-radius-mm': ['edgeRadius', 1e-3],
+  'facing-modulus-mpa': ['facingModulus', 1e6],
+  'facing-thickness-mm': ['facingThickness', 1e-3],
+  density: ['density', 1],
+  friction: ['friction', 1],
+  'safety-factor': ['safetyFactor', 1],
+  'accel-g': ['accelG', 1],
+  'threshold-kpa': ['bruiseThreshold', 1e3],
+  'failure-shear-kpa': ['failureShear', 1e3],
+};
+const NUMBER_FIELDS = Object.values(NUMBERS).map(([field]) => field);
+const REQUIRED = ['modulus-mpa', 'poisson', 'travel-mm'];
+const SIZE_OPTIONS = ['diameter-mm', 'axial-mm', 'equatorial-mm', ...Object.keys(NUMBERS)];
 
 const OPTIONS = {
   json: { type: 'boolean' },
-  'diameter-mm': { type: 'string' },
-  'axial-mm': { type: 'string' },
-  'equatorial-mm': { type: 'string' },
-  'modulus-mpa': { type: 'string' },
-  poisson: { type: 'string' },
-  'travel-mm': { type: 'string' },
-  steps: { type: 'string' },
-  'pad-diameter-mm': { type: 'string' },
-  'edge-radius-mm': { type: 'string' },
-  'facing-modulus-mpa': { type: 'string' },
-  'facing-thickness-mm': { type: 'string' },
   mesh: { type: 'string' },
   model: { type: 'string' },
-  density: { type: 'string' },
-  friction: { type: 'string' },
-  'safety-factor': { type: 'string' },
-  'accel-g': { type: 'string' },
-  'threshold-kpa': { type: 'string' },
-  'failure-shear-kpa': { type: 'string' },
+  ...Object.fromEntries(SIZE_OPTIONS.map((name) => [name, { type: 'string' as const }])),
 } as const;
 
 class UsageError extends Error {}
@@ -42,119 +53,126 @@ function num(values: Values, name: string, factor = 1): number | undefined {
   return v * factor;
 }
 
-function required(values: Values, name: string, factor = 1): number {
-  const v = num(values, name, factor);
-  if (v === undefined) throw new UsageError(`--${name} is required`);
-  return v;
-}
-
-function toInput(values: Values): SqueezeInput {
-  const mm = 1e-3;
-  const diameter = num(values, 'diameter-mm', mm);
-  const axial = num(values, 'axial-mm', mm);
-  const equatorial = num(values, 'equatorial-mm', mm);
+/** Equatorial and axial radius (m) from --diameter-mm, or from --equatorial-mm and --axial-mm. */
+function radii(values: Values): Pick<SqueezeInput, 'equatorialRadius' | 'axialRadius'> {
+  const diameter = num(values, 'diameter-mm', 1e-3);
+  const axial = num(values, 'axial-mm', 1e-3);
+  const equatorial = num(values, 'equatorial-mm', 1e-3);
   if (diameter !== undefined && (axial !== undefined || equatorial !== undefined)) {
     throw new UsageError('give --diameter-mm (sphere) or --axial-mm and --equatorial-mm, not both');
   }
-  if (diameter === undefined && (axial === undefined || equatorial === undefined)) {
+  if (diameter !== undefined) return { equatorialRadius: diameter / 2, axialRadius: diameter / 2 };
+  if (axial === undefined || equatorial === undefined) {
     throw new UsageError('give --diameter-mm, or both --axial-mm and --equatorial-mm');
   }
-  const mesh = values.mesh;
-  if (mesh !== undefined && mesh !== 'coarse' && mesh !== 'normal' && mesh !== 'fine') {
-    throw new UsageError(`--mesh must be coarse, normal or fine, got '${mesh}'`);
+  return { equatorialRadius: equatorial / 2, axialRadius: axial / 2 };
+}
+
+function toInput(values: Values): SqueezeInput {
+  for (const name of REQUIRED) {
+    if (values[name] === undefined) throw new UsageError(`--${name} is required`);
   }
-  const model = values.model;
-  if (model !== undefined && model !== 'axisymmetric' && model !== 'plane-strain') {
-    throw new UsageError(`--model must be axisymmetric or plane-strain, got '${model}'`);
+  const input: Partial<Record<NumberField, number>> = {};
+  for (const [name, [field, factor]] of Object.entries(NUMBERS)) {
+    input[field] = num(values, name, factor);
   }
-  return {
-    model,
-    equatorialRadius: diameter !== undefined ? diameter / 2 : (equatorial as number) / 2,
-    axialRadius: diameter !== undefined ? diameter / 2 : (axial as number) / 2,
-    modulus: required(values, 'modulus-mpa', 1e6),
-    poisson: required(values, 'poisson'),
-    travel: required(values, 'travel-mm', mm),
-    steps: num(values, 'steps'),
-    mesh,
-    padDiameter: num(values, 'pad-diameter-mm', mm),
-    edgeRadius: num(values, 'edge-radius-mm', mm),
-    facingModulus: num(values, 'facing-modulus-mpa', 1e6),
-    facingThickness: num(values, 'facing-thickness-mm', mm),
-    density: num(values, 'density'),
-    friction: num(values, 'friction'),
-    safetyFactor: num(values, 'safety-factor'),
-    accelG: num(values, 'accel-g'),
-    bruiseThreshold: num(values, 'threshold-kpa', 1e3),
-    failureShear: num(values, 'failure-shear-kpa', 1e3),
-  };
+  // fem checks the mesh and model names (and names the option in its error, see flagged()).
+  const { mesh, model } = values as { mesh?: MeshLevel; model?: SqueezeInput['model'] };
+  return { ...(input as Omit<SqueezeInput, 'model' | 'mesh'>), ...radii(values), mesh, model };
+}
+
+/** The option that set each SqueezeInput field, for error messages. */
+function optionOf(field: string, values: Values): string {
+  if (field === 'equatorialRadius' || field === 'axialRadius') {
+    if (values['diameter-mm'] !== undefined) return '--diameter-mm';
+    return field === 'axialRadius' ? '--axial-mm' : '--equatorial-mm';
+  }
+  const name = Object.keys(NUMBERS).find((n) => NUMBERS[n][0] === field);
+  return `--${name ?? field}`;
+}
+
+/** A FemInputError's message with the input fields it names replaced by the options. */
+function flagged(err: FemInputError, values: Values): string {
+  // Any numeric field anywhere ("density is needed with friction"); mesh and model only where the
+  // message opens with them, since "model" is also a plain word ("small-strain model").
+  const numeric = new Set<string>(['equatorialRadius', 'axialRadius', ...NUMBER_FIELDS]);
+  return err.message.replace(/\b[a-zA-Z]+\b/g, (w, at: number) =>
+    numeric.has(w) || (at === 0 && w === err.field) ? optionOf(w, values) : w,
+  );
 }
 
 // Display rounding only; the core keeps full precision.
 const round = (v: number | null, digits = 4): number | null =>
   v === null ? null : Number(v.toPrecision(digits));
+const kpa = (pa: number | null) => round(pa === null ? null : pa / 1e3);
+const mm = (m: number | null) => round(m === null ? null : m * 1e3);
 
 function stepJson(s: SqueezeState, withLift: boolean) {
   return {
-    travel_mm: round(s.travel * 1e3),
+    travel_mm: mm(s.travel),
     force_n: round(s.force),
-    contact_radius_mm: round(s.contactRadius * 1e3),
-    peak_pressure_kpa: round(s.peakPressure / 1e3),
-    mean_pressure_kpa: round(s.meanPressure / 1e3),
-    max_shear_kpa: round(s.maxShear === null ? null : s.maxShear / 1e3),
-    max_shear_depth_mm: round(s.maxShearDepth === null ? null : s.maxShearDepth * 1e3),
+    contact_radius_mm: mm(s.contactRadius),
+    peak_pressure_kpa: kpa(s.peakPressure),
+    mean_pressure_kpa: kpa(s.meanPressure),
+    max_shear_kpa: kpa(s.maxShear),
+    max_shear_depth_mm: mm(s.maxShearDepth),
     ...(withLift ? { lift_ratio: round(s.liftRatio) } : {}),
+  };
+}
+
+function hertzJson(h: HertzFigures | null) {
+  return (
+    h && {
+      force_n: round(h.force),
+      contact_radius_mm: mm(h.contactRadius),
+      peak_pressure_kpa: kpa(h.peakPressure),
+      mean_pressure_kpa: kpa(h.meanPressure),
+      approach_mm: mm(h.approach),
+      max_shear_kpa: kpa(h.maxShear),
+      max_shear_depth_mm: mm(h.maxShearDepth),
+    }
+  );
+}
+
+function liftJson(lift: NonNullable<SqueezeResult['liftability']>) {
+  const grip = lift.grip;
+  return {
+    grip: grip && {
+      travel_mm: mm(grip.travel),
+      force_n: round(grip.force),
+      peak_pressure_kpa: kpa(grip.peakPressure),
+      margin: round(grip.bruiseMargin, 3),
+      shear_margin: round(grip.shearMargin, 3),
+      lift_ratio: round(grip.liftRatio),
+    },
+    grip_reason: lift.reason,
+    mass_kg: round(lift.mass),
+    required_force_n: round(lift.requiredForce),
   };
 }
 
 function toJson(values: Values, result: SqueezeResult) {
   const lift = result.liftability;
-  const withLift = lift !== null;
-  const hertz = (h: SqueezeResult['hertz']['atForce'] | null) =>
-    h && {
-      force_n: round(h.force),
-      contact_radius_mm: round(h.contactRadius * 1e3),
-      peak_pressure_kpa: round(h.peakPressure / 1e3),
-      mean_pressure_kpa: round(h.meanPressure / 1e3),
-      approach_mm: round(h.approach === null ? null : h.approach * 1e3),
-      max_shear_kpa: round(h.maxShear === null ? null : h.maxShear / 1e3),
-      max_shear_depth_mm: round(h.maxShearDepth === null ? null : h.maxShearDepth * 1e3),
-    };
-  const { json: _json, ...input } = values;
+  const { json: _json, ...options } = values;
   void _json;
+  const { model, mesh, steps } = result.input;
   return {
-    input: {
-      ...input,
-      model: result.input.model,
-      mesh: result.input.mesh,
-      steps: result.input.steps,
+    input: { ...options, model, mesh, steps },
+    units: { force: model === 'axisymmetric' ? 'N' : 'N/m' },
+    steps: result.steps.map((s) => stepJson(s, lift !== null)),
+    final: stepJson(result.final, lift !== null),
+    profile: result.profile.map((p) => ({ r_mm: mm(p.r), pressure_kpa: kpa(p.pressure) })),
+    ...(lift !== null ? liftJson(lift) : {}),
+    hertz: {
+      at_travel: hertzJson(result.hertz.atTravel),
+      at_force: hertzJson(result.hertz.atForce),
     },
-    units: { force: result.input.model === 'axisymmetric' ? 'N' : 'N/m' },
-    steps: result.steps.map((s) => stepJson(s, withLift)),
-    final: stepJson(result.final, withLift),
-    profile: result.profile.map((p) => ({
-      r_mm: round(p.r * 1e3),
-      pressure_kpa: round(p.pressure / 1e3),
-    })),
-    ...(withLift
-      ? {
-          grip: lift.grip && {
-            travel_mm: round(lift.grip.travel * 1e3),
-            force_n: round(lift.grip.force),
-            peak_pressure_kpa: round(lift.grip.peakPressure / 1e3),
-            margin: round(lift.grip.bruiseMargin, 3),
-            shear_margin: round(lift.grip.shearMargin, 3),
-            lift_ratio: round(lift.grip.liftRatio),
-          },
-          grip_reason: lift.reason,
-          mass_kg: round(lift.mass),
-          required_force_n: round(lift.requiredForce),
-        }
-      : {}),
-    hertz: { at_travel: hertz(result.hertz.atTravel), at_force: hertz(result.hertz.atForce) },
     mesh: { level: result.mesh.level, nodes: result.mesh.nodes, dofs: result.mesh.dofs },
     warnings: result.warnings,
   };
 }
+
+const fmt = (v: number | null, width: number) => (v === null ? '—' : String(v)).padStart(width);
 
 function pretty(data: ReturnType<typeof toJson>): string {
   const f = data.final;
@@ -186,8 +204,6 @@ function pretty(data: ReturnType<typeof toJson>): string {
   return lines.join('\n');
 }
 
-const fmt = (v: number | null, width: number) => (v === null ? '—' : String(v)).padStart(width);
-
 /** `--x -3` → `--x=-3`, so a negative number reaches validation and gets its specific message. */
 const joinNegatives = (argv: string[]) =>
   argv.flatMap((arg, i) =>
@@ -199,15 +215,17 @@ const joinNegatives = (argv: string[]) =>
   );
 
 function main(argv: string[]): number {
+  let values: Values = {};
   try {
-    const { values, positionals } = parseArgs({
+    const parsed = parseArgs({
       args: joinNegatives(argv),
       options: OPTIONS,
       strict: true,
       allowPositionals: true,
     });
-    if (positionals.length !== 1 || positionals[0] !== 'squeeze') {
-      throw new UsageError('usage: fem squeeze [options] [--json]');
+    values = parsed.values;
+    if (parsed.positionals.length !== 1 || parsed.positionals[0] !== 'squeeze') {
+      throw new UsageError('usage: tenderline squeeze [options] [--json]');
     }
     const data = toJson(values, runSqueeze(toInput(values)));
     process.stdout.write((values.json ? JSON.stringify(data, null, 2) : pretty(data)) + '\n');
@@ -217,7 +235,8 @@ function main(argv: string[]): number {
     const parseError = typeof code === 'string' && code.startsWith('ERR_PARSE_ARGS');
     const known = err instanceof UsageError || err instanceof FemInputError || parseError;
     if (known || err instanceof FemConvergenceError) {
-      process.stderr.write(`fem: ${(err as Error).message.split('\n')[0]}\n`);
+      const message = err instanceof FemInputError ? flagged(err, values) : (err as Error).message;
+      process.stderr.write(`tenderline: ${message.split('\n')[0]}\n`);
       return known ? 2 : 1;
     }
     throw err;

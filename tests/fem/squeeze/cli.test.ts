@@ -71,4 +71,33 @@ describe('fem CLI (scripts/fem.ts)', () => {
     },
     30_000,
   );
+
+  const shape = ['--modulus-mpa', '3', '--poisson', '0.35', '--travel-mm', '1'];
+  it.each([
+    [
+      ['--axial-mm', '80', '--equatorial-mm', '10'],
+      '--axial-mm must lie between 0.3 and 3 times the --equatorial-mm',
+    ],
+    [['--axial-mm', '80', '--equatorial-mm', '0'], '--equatorial-mm must be greater than zero'],
+    [['--diameter-mm', '0'], '--diameter-mm must be greater than zero'],
+    [
+      ['--diameter-mm', '80', '--facing-thickness-mm', '3'],
+      '--facing-modulus-mpa is needed with --facing-thickness-mm',
+    ],
+    [['--diameter-mm', '80', '--friction', '0.4'], '--density is needed with --friction'],
+    [['--diameter-mm', '80', '--mesh', 'medium'], '--mesh must be coarse, normal or fine'],
+  ])(
+    'names the option the user typed, not the internal field (%j)',
+    async (size, message) => {
+      const err = await cli([...size, ...shape]).then(
+        () => null,
+        (e: { code: number; stderr: string }) => e,
+      );
+      expect(err?.code).toBe(2);
+      expect(err?.stderr).toContain(message);
+      // No internal camelCase field name (equatorialRadius, facingThickness, …) leaks through.
+      expect(err?.stderr).not.toMatch(/\b[a-z]+[A-Z]\w*/);
+    },
+    30_000,
+  );
 });
