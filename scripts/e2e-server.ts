@@ -7,6 +7,7 @@ import knex from 'knex';
 const file = path.resolve('data/e2e.sqlite');
 fs.mkdirSync(path.dirname(file), { recursive: true });
 fs.rmSync(file, { force: true });
+fs.rmSync('data/e2e-s3', { recursive: true, force: true });
 process.env.KNEX_ENV = 'development';
 process.env.DATABASE_FILE = file;
 
@@ -21,6 +22,7 @@ const port = Number(process.env.E2E_PORT ?? 3100);
 await serve({
   appUrl: `http://127.0.0.1:${port}`,
   smtpPort: 0,
+  bucket: { port: 0, directory: 'data/e2e-s3' },
   env: {
     KNEX_ENV: 'development',
     DATABASE_FILE: file,

@@ -5,10 +5,13 @@ import { randomBytes } from 'node:crypto';
 import knex from 'knex';
 import { config, knexEnvironment } from '../knexfile';
 import { startMailCatcher } from '../lib/mail/catcher';
+import { startLocalBucket } from './local-bucket';
 
 export async function serve(options: {
   appUrl: string;
   smtpPort: number;
+  /** The local bucket's port (0: any free one) and folder, unless S3_ENDPOINT names a real one. */
+  bucket: { port: number; directory: string };
   env?: Record<string, string>;
 }) {
   const url = new URL(options.appUrl);
@@ -16,6 +19,11 @@ export async function serve(options: {
   const credentials = { user: 'tenderline-app', pass: randomBytes(24).toString('base64url') };
   const catcher = await startMailCatcher(db, options.smtpPort, '127.0.0.1', credentials);
   console.log(`mail catcher listening on 127.0.0.1:${catcher.port}`);
+  const bucketName = process.env.S3_BUCKET ?? 'tenderline-uploads';
+  const bucket = process.env.S3_ENDPOINT
+    ? null
+    : await startLocalBucket({ ...options.bucket, bucket: bucketName });
+  if (bucket) console.log(`local bucket ${bucketName} on 127.0.0.1:${bucket.port}`);
   const app = spawn(process.execPath, ['scripts/server.mjs'], {
     stdio: 'inherit',
     env: {
@@ -30,11 +38,13 @@ export async function serve(options: {
       SMTP_PORT: String(catcher.port),
       SMTP_USER: credentials.user,
       SMTP_PASS: credentials.pass,
+      ...(bucket && { S3_ENDPOINT: `http://127.0.0.1:${bucket.port}`, S3_BUCKET: bucketName }),
     },
   });
   const stop = async () => {
     app.kill('SIGTERM');
     await catcher.close();
+    await bucket?.close();
     await db.destroy();
   };
   process.on('SIGINT', () => void stop().then(() => process.exit(0)));
