@@ -8,7 +8,7 @@ const TABS = [
 
 export function AdminTabs({ current }: { current: string }) {
   return (
-    <nav aria-label="Admin" className="mb-6 flex gap-2 text-sm">
+    <nav aria-label="Admin" className="mb-6 flex flex-wrap gap-2 text-sm">
       {TABS.map((t) => (
         <Link
           key={t.href}

@@ -2,8 +2,9 @@ import { AdminTabs } from '@/components/admin/admin-tabs';
 import { PageTitle } from '@/components/ui/page-title';
 import { requirePageActor } from '@/lib/auth/session';
 import { listOutbox } from '@/lib/data/outbox';
+import { titleFor } from '@/lib/page-title';
 
-export const metadata = { title: 'Mail outbox' };
+export const generateMetadata = titleFor('outbox:read', 'Mail outbox');
 
 export default async function OutboxPage() {
   const actor = await requirePageActor('outbox:read');
@@ -24,16 +25,16 @@ export default async function OutboxPage() {
             data-testid="outbox-message"
           >
             <div className="flex flex-wrap justify-between gap-2 text-sm">
-              <span className="font-medium">{m.subject}</span>
+              <span className="font-medium wrap-anywhere">{m.subject}</span>
               <span className="num text-xs text-stone-500">
                 {m.receivedAt.replace('T', ' ').slice(0, 19)} UTC
               </span>
             </div>
-            <p className="text-xs text-stone-500">
+            <p className="text-xs text-stone-500 wrap-anywhere">
               from {m.from} to {m.to}
             </p>
             <pre
-              className="mt-2 whitespace-pre-wrap break-all text-sm text-stone-800"
+              className="mt-2 whitespace-pre-wrap wrap-anywhere text-sm text-stone-800"
               data-testid="outbox-body"
             >
               {m.text}
