@@ -1,16 +1,30 @@
-import Link from 'next/link';
+import { NotFoundNotice } from '@/components/shell/not-found-notice';
+import { SiteFooter } from '@/components/shell/site-footer';
+import { SiteHeader } from '@/components/shell/site-header';
+import { getCurrentActor } from '@/lib/auth/session';
 
-export default function NotFound() {
+export const metadata = { title: 'Page not found' };
+
+/**
+ * An unknown address renders here, outside the (app) layout, so a signed-in user gets the
+ * header added and keeps their navigation. notFound() inside the app has app/(app)/not-found.tsx.
+ */
+export default async function NotFound() {
+  const actor = await getCurrentActor();
+  if (!actor) {
+    return (
+      <main className="flex min-h-screen flex-col">
+        <NotFoundNotice />
+      </main>
+    );
+  }
   return (
-    <main className="mx-auto max-w-lg px-4 py-24 text-center">
-      <p className="num text-sm text-stone-500">404</p>
-      <h1 className="mt-2 text-2xl font-semibold">No page here</h1>
-      <p className="mt-2 text-sm text-stone-600">
-        The address may be mistyped, or the page has moved.
-      </p>
-      <Link href="/" className="mt-6 inline-block text-sm font-medium text-leaf-700 underline">
-        Back to Tenderline
-      </Link>
-    </main>
+    <div className="flex min-h-screen flex-col">
+      <SiteHeader actor={actor} />
+      <main className="flex flex-1 flex-col">
+        <NotFoundNotice />
+      </main>
+      <SiteFooter />
+    </div>
   );
 }

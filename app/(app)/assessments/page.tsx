@@ -1,7 +1,8 @@
 import { AreaPlaceholder } from '@/components/shell/area-placeholder';
 import { requirePageActor } from '@/lib/auth/session';
+import { titleFor } from '@/lib/page-title';
 
-export const metadata = { title: 'Assessments' };
+export const generateMetadata = titleFor('assessments:manage-own', 'Assessments');
 
 export default async function AssessmentsPage() {
   const actor = await requirePageActor('assessments:manage-own');

@@ -1,7 +1,8 @@
 import { AreaPlaceholder } from '@/components/shell/area-placeholder';
 import { requirePageActor } from '@/lib/auth/session';
+import { titleFor } from '@/lib/page-title';
 
-export const metadata = { title: 'Checks' };
+export const generateMetadata = titleFor('checks:run', 'Checks');
 
 export default async function ChecksPage() {
   const actor = await requirePageActor('checks:run');

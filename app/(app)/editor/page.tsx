@@ -4,8 +4,9 @@ import { AreaPlaceholder } from '@/components/shell/area-placeholder';
 import { can, invitableRoles } from '@/lib/auth/roles';
 import { requirePageActor } from '@/lib/auth/session';
 import { listOpenInvitations } from '@/lib/data/invitation-admin';
+import { titleFor } from '@/lib/page-title';
 
-export const metadata = { title: 'Editor' };
+export const generateMetadata = titleFor('editor:use', 'Editor');
 
 export default async function EditorPage() {
   const actor = await requirePageActor('editor:use');

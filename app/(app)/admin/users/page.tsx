@@ -8,8 +8,9 @@ import { invitableRoles } from '@/lib/auth/roles';
 import { requirePageActor } from '@/lib/auth/session';
 import { listOpenInvitations } from '@/lib/data/invitation-admin';
 import { listUsers } from '@/lib/data/users';
+import { titleFor } from '@/lib/page-title';
 
-export const metadata = { title: 'Users' };
+export const generateMetadata = titleFor('users:manage', 'Users');
 
 export default async function UsersPage() {
   const actor = await requirePageActor('users:manage');
