@@ -1,12 +1,21 @@
 import { execFile } from 'node:child_process';
+import { mkdtemp, rm } from 'node:fs/promises';
+import os from 'node:os';
 import path from 'node:path';
 import { promisify } from 'node:util';
-import { describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { buildCli } from '../../../scripts/build-cli';
 
 const run = promisify(execFile);
-const root = path.resolve(import.meta.dirname, '../../..');
-const tsx = path.join(root, 'node_modules/.bin/tsx');
-const cli = (args: string[]) => run(tsx, ['scripts/fem.ts', 'squeeze', ...args], { cwd: root });
+let outdir = '';
+let built = '';
+// The CLI as shipped: built from the current source with the package's own build, run by node.
+beforeAll(async () => {
+  outdir = await mkdtemp(path.join(os.tmpdir(), 'tenderline-cli-'));
+  built = await buildCli(outdir);
+});
+afterAll(() => rm(outdir, { recursive: true, force: true }));
+const cli = (args: string[]) => run(process.execPath, [built, 'squeeze', ...args]);
 
 const valid = [
   '--diameter-mm',
@@ -33,7 +42,7 @@ const valid = [
   '150',
 ];
 
-describe('fem CLI (scripts/fem.ts)', () => {
+describe('tenderline CLI (scripts/fem.ts, built to dist/tenderline.mjs)', () => {
   it('prints one JSON object for a valid run', async () => {
     const { stdout } = await cli([...valid, '--json']);
     const out = JSON.parse(stdout);
