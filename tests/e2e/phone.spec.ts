@@ -37,6 +37,21 @@ test('accept-invitation page fits, and keeps the typed name after a password err
   await page.screenshot({ path: shot('accept-invitation'), fullPage: true });
 });
 
+test('an ended invitation link answers 410 with a page that fits', async ({ page, context }) => {
+  const email = `replaced.on.a.phone.${Date.now()}@kiwi-buyer.example`;
+  await signIn(page, ACCOUNTS.admin);
+  await inviteByApi(page, email);
+  const old = await latestLinkTo(page, email);
+  await inviteByApi(page, email);
+  await context.clearCookies();
+  const response = await page.goto(old);
+  expect(response?.status()).toBe(410);
+  await expectWithinWidth(page, page.getByTestId('invitation-problem'));
+  await expect(page.getByTestId('invitation-problem')).toContainText('replaced by a newer one');
+  await expectNoSidewaysScroll(page);
+  await page.screenshot({ path: shot('invitation-replaced'), fullPage: true });
+});
+
 test('admin users: every column, the pending invitations and their buttons fit', async ({
   page,
 }) => {
