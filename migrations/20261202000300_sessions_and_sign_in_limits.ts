@@ -18,7 +18,13 @@ export async function up(knex: Knex): Promise<void> {
   });
 }
 
+// SQLite drops a column by rebuilding the table, which foreign keys from other tables would
+// refuse: the rollback runs outside a transaction with their checks paused.
+export const config = { transaction: false };
+
 export async function down(knex: Knex): Promise<void> {
+  const sqlite = String(knex.client.config.client).includes('sqlite');
+  if (sqlite) await knex.raw('PRAGMA foreign_keys = OFF');
   await knex.schema.dropTable('sign_in_limits');
   await knex.schema.createTable('sign_in_throttle', (t) => {
     t.string('key', 300).primary();
@@ -29,4 +35,5 @@ export async function down(knex: Knex): Promise<void> {
   await knex.schema.alterTable('users', (t) => {
     t.dropColumn('session_generation');
   });
+  if (sqlite) await knex.raw('PRAGMA foreign_keys = ON');
 }

@@ -66,6 +66,8 @@ export const userUpdateSchema = z
     message: 'Give a role or a disabled flag to change.',
   });
 
+export const userIdFormSchema = z.object({ userId: idSchema });
+
 /** The admin users table's row form: the same change, with the id and flag as form strings. */
 export const userUpdateFormSchema = z
   .object({

@@ -69,6 +69,20 @@ test('wrong passwords from 127.0.0.2 lock that address, not the owner at 127.0.0
   expect((await postSignIn(ACCOUNTS.editor, PASSWORD, '127.0.0.2')).status).toBe(429);
   await signIn(page, ACCOUNTS.editor); // the browser connects from 127.0.0.1
   await expect(page.getByTestId('account-link')).toContainText('editor');
+  await page.getByRole('button', { name: 'Sign out' }).click();
+
+  // An admin sees the lock and clears it; the locked address may try again.
+  await signIn(page, ACCOUNTS.admin);
+  await page.goto('/admin/users');
+  const locks = page.getByTestId('sign-in-locks');
+  await expect(locks).toContainText(ACCOUNTS.editor);
+  await expect(locks).toContainText('127.0.0.2');
+  await page.screenshot({ path: 'tests/artifacts/admin-sign-in-locks.png', fullPage: true });
+  await locks.getByRole('button', { name: `Clear the sign-in lock of ${ACCOUNTS.editor}` }).click();
+  await expect(locks).toContainText('Sign-in lock cleared');
+  const after = await postSignIn(ACCOUNTS.editor, PASSWORD, '127.0.0.2');
+  expect(after.status).toBe(200);
+  expect(JSON.parse(after.body).url).not.toContain('error=');
 });
 
 test('odd requests get a 4xx with a plain message, never a 500', async ({ page }) => {

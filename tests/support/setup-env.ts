@@ -1,4 +1,10 @@
-// Every unit test process uses the throw-away test database and a fixed secret.
-process.env.KNEX_ENV = 'test';
+// Every unit test process uses a throw-away database and a fixed secret: SQLite in memory, or the
+// PostgreSQL database named by TEST_DATABASE_URL (the PostgreSQL leg of the test run).
+if (process.env.TEST_DATABASE_URL) {
+  process.env.KNEX_ENV = 'production';
+  process.env.DATABASE_URL = process.env.TEST_DATABASE_URL;
+} else {
+  process.env.KNEX_ENV = 'test';
+}
 process.env.NEXTAUTH_SECRET ??= 'unit-test-secret';
 process.env.APP_URL = 'http://tenderline.test';

@@ -1,4 +1,5 @@
 import { AdminTabs } from '@/components/admin/admin-tabs';
+import { SignInLocks } from '@/components/admin/sign-in-locks';
 import { USER_COLUMNS } from '@/components/admin/user-columns';
 import { UserRowForm } from '@/components/admin/user-row-form';
 import { InviteForm } from '@/components/invitations/invite-form';
@@ -7,14 +8,18 @@ import { PageTitle } from '@/components/ui/page-title';
 import { invitableRoles } from '@/lib/auth/roles';
 import { requirePageActor } from '@/lib/auth/session';
 import { listOpenInvitations } from '@/lib/data/invitation-admin';
-import { listUsers } from '@/lib/data/users';
+import { listSignInLocks, listUsers } from '@/lib/data/users';
 import { titleFor } from '@/lib/page-title';
 
 export const generateMetadata = titleFor('users:manage', 'Users');
 
 export default async function UsersPage() {
   const actor = await requirePageActor('users:manage');
-  const [users, invitations] = await Promise.all([listUsers(actor), listOpenInvitations(actor)]);
+  const [users, invitations, locks] = await Promise.all([
+    listUsers(actor),
+    listOpenInvitations(actor),
+    listSignInLocks(actor),
+  ]);
   return (
     <section>
       <PageTitle title="Admin">
@@ -35,6 +40,10 @@ export default async function UsersPage() {
           ))}
         </ul>
       </div>
+      <h2 className="mb-3 mt-8 font-semibold">Sign-in locks</h2>
+      <SignInLocks
+        locks={locks.map((l) => ({ ...l, untilIso: new Date(l.untilMs).toISOString() }))}
+      />
       <h2 className="mb-3 mt-8 font-semibold">Pending invitations</h2>
       <PendingInvitations invitations={invitations} />
       <h2 className="mb-3 mt-8 font-semibold">Invite by e-mail</h2>
