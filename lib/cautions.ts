@@ -1,4 +1,4 @@
-/** The standing caution of DESIGN.md, shown wherever a result is shown and in the footer. */
+/** The standing caution of the product, shown wherever a result is shown and in the footer. */
 export const STANDING_CAUTION =
   'Estimates are screening figures from linear-elastic models and published averages, not a substitute ' +
   'for bruise tests on the actual fruit, line and season; values vary with cultivar, maturity, ' +
