@@ -2,7 +2,8 @@ import fs from 'node:fs';
 import path from 'node:path';
 import { describe, expect, it } from 'vitest';
 
-// DESIGN.md, "Computation": fem/ is pure TypeScript with no framework, database or I/O imports.
+// Product rule: fem/ is pure TypeScript with no framework, database or I/O imports, so the
+// numerical core runs the same in the web app, the CLI and the tests.
 const ALLOWED = new Set(['ml-matrix']);
 
 function files(dir: string): string[] {

@@ -70,7 +70,7 @@ describe('getCondensedBody', () => {
 
   for (const model of ['axisymmetric', 'plane-strain'] as const) {
     it(`returns a symmetric positive definite K on the contact nodes (${model})`, () => {
-      // Source: Cook et al. 2002 [memory]: the Schur complement of an SPD matrix is SPD.
+      // Source: Cook et al. 2002 [from memory]: the Schur complement of an SPD matrix is SPD.
       const b = getCondensedBody({ ...KEY, model });
       const n = b.contactR.length;
       expect(b.K.rows).toBe(n);

@@ -22,7 +22,7 @@ function centreRatios(level: MeshLevel, edges: number): { sx: number; sy: number
   const d = 2;
   // The centre is the mesh corner r = z = 0: read the element that owns it (its centroid is
   // within 0.03 R of the centre at the normal level). By symmetry the stress gradient vanishes
-  // at the centre, and the diameter formulas of Timoshenko & Goodier [memory] give a change of
+  // at the centre, and the diameter formulas of Timoshenko & Goodier [from memory] give a change of
   // under 0.2 % that close to it, well inside the tolerance.
   const origin = mesh.midplane[0];
   const e = Array.from({ length: mesh.quads.length / 4 }, (_, i) => i).find((i) =>
@@ -38,17 +38,20 @@ function centreRatios(level: MeshLevel, edges: number): { sx: number; sy: number
 }
 
 describe('plane-strain Brazilian disc', () => {
-  // Source: Timoshenko & Goodier, Theory of Elasticity [memory]: centre stresses of a disc in
+  // Source: Timoshenko & Goodier, Theory of Elasticity [from memory]: centre stresses of a disc in
   // diametral compression σ_x = 2P/(πDt) (tension), σ_y = −6P/(πDt); the test is standardised
-  // in ASTM D3967 and ISRM suggested methods 1978 [read]. In-plane stresses of this traction
+  // in ASTM D3967, Standard Test Method for Splitting Tensile Strength of Intact Rock Core
+  // Specimens, and in the ISRM suggested methods of 1978 [from memory]. In-plane stresses of this traction
   // problem do not depend on E or ν. Loading over a short arc (2α ≈ 0.08 rad) instead of a
   // point changes the centre values by O(α²) ≈ 0.2 %.
-  it('gives the centre stresses within 2 % (normal mesh)', () => {
+  it('gives the centre stresses within 1 % (normal mesh)', () => {
     const r = centreRatios('normal', 4);
     expect(r.alpha).toBeLessThan(0.05);
-    // Tolerance 2 % (the brief's acceptance band for a point-load formula read from a FE model).
-    expect(Math.abs(r.sx - 1)).toBeLessThan(0.02);
-    expect(Math.abs(r.sy - 1)).toBeLessThan(0.02);
+    // Observed on the normal mesh: σ_x 0.35 % and σ_y 0.23 % below the closed form, of which the
+    // arc load's O(α²) accounts for about 0.2 %. Tolerance 1 %, about 3× the observed error:
+    // a regression in the element, the loads or the assembly shows well above it.
+    expect(Math.abs(r.sx - 1)).toBeLessThan(0.01);
+    expect(Math.abs(r.sy - 1)).toBeLessThan(0.01);
   });
 
   it('converges toward the closed form as the mesh is refined (same arc)', () => {
@@ -63,7 +66,7 @@ describe('plane-strain Brazilian disc', () => {
 });
 
 describe('uniform external pressure', () => {
-  // Source: Timoshenko & Goodier, Theory of Elasticity [memory]: a body of any shape under
+  // Source: Timoshenko & Goodier, Theory of Elasticity [from memory]: a body of any shape under
   // uniform external pressure p is in uniform hydrostatic stress σ = −p (the displacement is
   // linear, u = −p x / (3K)). The meshed body is the polygonal spheroid; its exact solution is
   // the same linear field, which bilinear elements contain, and the consistent loads and the
@@ -90,7 +93,7 @@ describe('uniform external pressure', () => {
   }
 
   it('plane-strain elliptical slice: σ_xx = σ_yy = −p, σ_zz = −2νp, τ = 0', () => {
-    // Plane strain (ε_zz = 0) adds σ_zz = ν(σ_xx + σ_yy) = −2νp (Hooke's law [memory]).
+    // Plane strain (ε_zz = 0) adds σ_zz = ν(σ_xx + σ_yy) = −2νp (Hooke's law [from memory]).
     const nu = 0.3;
     const { stresses } = solvePressureCase({
       model: 'plane-strain',

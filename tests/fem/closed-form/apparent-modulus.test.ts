@@ -33,9 +33,11 @@ function mulberry32(seed: number): () => number {
 
 describe('apparentModulusFromCompression', () => {
   it('matches the S368-basis sphere formula E = 3F(1 − ν²)/(d^½D^(3/2)) on a Hertz curve', () => {
-    // REFERENCES.md apparent-modulus section [computed from Johnson 1985, ch. 4 Hertz relations]:
-    // the formula evaluated by hand at each point, and the fit of the whole curve, must both
-    // return E. Round-off only: 1e-12.
+    // The ASAE/ASABE S368 basis, Compression Test of Food Materials of Convex Shape [from
+    // memory]: a Hertz sphere between two plates, F = (4/3)E*R^½(d/2)^(3/2) per contact
+    // (K. L. Johnson, Contact Mechanics, Cambridge University Press 1985, §4.2 [from memory]),
+    // solved for E. The formula evaluated at each point, and the fit of the whole curve, must
+    // both return E. Round-off only: 1e-12.
     for (const travel of TRAVEL) {
       const byFormula =
         (3 * hertzPlateForce(travel) * (1 - NU * NU)) / (Math.sqrt(D) * travel ** 1.5);
@@ -53,9 +55,10 @@ describe('apparentModulusFromCompression', () => {
   });
 
   it('agrees with the ASABE general form for a sphere, K = 1.3514', () => {
-    // ASABE S368 general form [memory]: E = 0.338 K^(3/2) F(1 − ν²)/D^(3/2) ·
-    // [2(4/d)^(1/3)]^(3/2) for a sphere, K = 1.3514 (REFERENCES.md [memory]). Tolerance 0.5 %:
-    // 0.338 is given to 3 significant figures.
+    // ASAE/ASABE S368, Compression Test of Food Materials of Convex Shape, general form [from
+    // memory]: E = 0.338 K^(3/2) F(1 − ν²)/D^(3/2) · [2(4/d)^(1/3)]^(3/2) for a sphere, with the
+    // standard's K = 1.3514 for equal principal radii [from memory]. Tolerance 0.5 %: 0.338 is
+    // given to 3 significant figures.
     const travel = 2e-3;
     const force = hertzPlateForce(travel);
     const asabe =
@@ -71,8 +74,11 @@ describe('apparentModulusFromCompression', () => {
   });
 
   it('recovers E within 2 % from a Hertz curve with seeded noise', () => {
-    // Synthetic Hertz curve (Johnson 1985, ch. 4) with ±3 % multiplicative and ±0.05 N additive
-    // uniform noise; 2 % is the brief's tolerance, several seeds so no lucky draw passes alone.
+    // Synthetic Hertz curve (Johnson 1985, §4.2) with ±3 % multiplicative and ±0.05 N additive
+    // uniform noise. The multiplicative part alone has a standard deviation of 3 %/√3 ≈ 1.7 %
+    // per point, ≈ 0.3 % on E over 40 points; 2 % is about seven such standard errors, so a
+    // correct fit does not fail it while a wrong factor such as (1 − ν²) ≈ 12 % does. Several
+    // seeds, so no lucky draw passes alone.
     for (const seed of [1, 7, 42, 2024, 99991]) {
       const random = mulberry32(seed);
       const force = TRAVEL.map(

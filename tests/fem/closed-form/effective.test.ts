@@ -4,8 +4,8 @@ import { expectFieldError, expectRelative } from './expect-close';
 
 describe('effectiveModulus', () => {
   it('gives the worked-example E* = 3.42 MPa for E = 3 MPa, ν = 0.35 on a rigid flat', () => {
-    // REFERENCES.md worked examples [computed] from Johnson, Contact Mechanics, 1985, ch. 4.
-    // Tolerance 0.5 %: the table is rounded to 3 significant figures.
+    // Worked example, computed from 1/E* = (1 − ν₁²)/E₁ + (1 − ν₂²)/E₂ (K. L. Johnson, Contact Mechanics, Cambridge University Press 1985,
+    // §4.2 [from memory]): 3 MPa / (1 − 0.35²) = 3.42 MPa. Tolerance 0.5 %: rounded to 3 figures.
     expectRelative(effectiveModulus(3e6, 0.35), 3.42e6, 0.005);
     expectRelative(effectiveModulus(3e6, 0.35, Infinity, 0.2), 3.42e6, 0.005);
   });

@@ -4,9 +4,10 @@ import { expectFieldError, expectRelative } from './expect-close';
 
 describe('hertzCylinderPerLength', () => {
   it('reproduces the worked example: cylinder on a rigid flat', () => {
-    // REFERENCES.md worked examples [computed], Johnson, Contact Mechanics, 1985, ch. 4:
+    // Worked example, computed from the line-contact relations b² = 4P′R/(πE*), p₀ = 2P′/(πb)
+    // (K. L. Johnson, Contact Mechanics, Cambridge University Press 1985, §4.3 [section recalled from memory]):
     // E = 3 MPa, ν = 0.35, R = 20 mm, P′ = 200 N/m → b = 1.22 mm, p₀ = 104 kPa.
-    // Tolerance 0.5 %: the table is rounded to 3 significant figures.
+    // Tolerance 0.5 %: the values are rounded to 3 significant figures.
     const s = hertzCylinderPerLength({
       forcePerLength: 200,
       radius: 0.02,

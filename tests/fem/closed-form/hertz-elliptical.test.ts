@@ -13,7 +13,7 @@ function quarterPeriod(f: (theta: number) => number, n = 20_000): number {
 
 /**
  * Surface deflection (times E*) at (x0, y0) under p₀√(1 − x²/a² − y²/b²) by Boussinesq,
- * u = (1/(πE*))∬p/r dA (Johnson, Contact Mechanics, 1985, ch. 3 [memory]); the radial integral
+ * u = (1/(πE*))∬p/r dA (Johnson, Contact Mechanics, 1985, ch. 3 [from memory]); the radial integral
  * about (x0, y0) is done in closed form, the angular one by the trapezoid rule.
  */
 function deflection(p0: number, a: number, b: number, x0: number, y0: number): number {
@@ -35,7 +35,7 @@ function deflection(p0: number, a: number, b: number, x0: number, y0: number): n
 describe('ellipticKAndDeficit', () => {
   it('matches quadrature of K(e) and E(e)', () => {
     // K = ∫dθ/√(1 − e²sin²θ), E = ∫√(1 − e²sin²θ)dθ over [0, π/2] (Abramowitz & Stegun 1964,
-    // 17.3 [memory]). Tolerance 1e-10: both sides are converged far beyond it.
+    // 17.3 [from memory]). Tolerance 1e-10: both sides are converged far beyond it.
     for (const q of [1, 0.9, 0.5, 0.1, 0.01]) {
       const m = 1 - q * q;
       const k = quarterPeriod((t) => 1 / Math.sqrt(1 - m * Math.sin(t) ** 2));
@@ -67,7 +67,7 @@ describe('hertzEllipticalAtApproach', () => {
   it('produces a pressure whose Boussinesq deflection fits both bodies exactly', () => {
     // Independent check of the whole solution: the ellipsoidal pressure must deflect the surface
     // by δ at the centre and by δ − x²/(2R′) − y²/(2R″) inside the contact (Johnson 1985, ch. 3–4
-    // [memory]). Quadrature [computed], spectrally convergent; tolerance 1e-9 relative.
+    // [from memory]). The quadrature is done here, spectrally convergent; tolerance 1e-9 relative.
     for (const radii of [
       [0.03, 0.06],
       [0.2, 0.02],
@@ -87,7 +87,7 @@ describe('hertzEllipticalAtApproach', () => {
   });
 
   it("agrees with Johnson's approximations for contact size and approach", () => {
-    // Johnson 1985 §4.2 [memory]: with R_e = √(R′R″), c = √(ab) = (3FR_e/(4E*))^(1/3)·F₁ and
+    // Johnson 1985 §4.2 [from memory]: with R_e = √(R′R″), c = √(ab) = (3FR_e/(4E*))^(1/3)·F₁ and
     // δ = (9F²/(16E*²R_e))^(1/3)·F₂, F₁ = 1 − ((R″/R′)^0.0602 − 1)^1.456,
     // F₂ = 1 − ((R″/R′)^0.0684 − 1)^1.531. They are curve fits; we allow 1 %.
     for (const ratio of [1.5, 2, 4, 10, 20, 50]) {

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { effectiveModulus, hertzImpact, hertzImpactMaxDropHeight } from '../../../fem/closed-form';
 import { expectFieldError, expectRelative } from './expect-close';
 
-const E_STAR = effectiveModulus(3e6, 0.35); // REFERENCES.md illustrative inputs, not data
+const E_STAR = effectiveModulus(3e6, 0.35); // invented illustrative inputs, not data
 const BODY = { mass: 0.2, radius: 0.04, effectiveModulus: E_STAR };
 
 /** RK4 of m·ẍ = −(4/3)E*R^½ x^(3/2) from x = 0, ẋ = V until the body leaves the flat. */
@@ -28,8 +28,9 @@ function integrateImpact(mass: number, radius: number, modulus: number, velocity
 
 describe('hertzImpact', () => {
   it('reproduces the worked example: impact on a rigid flat', () => {
-    // REFERENCES.md worked examples [computed], Johnson, Contact Mechanics, 1985, §11.4 [memory]:
-    // m = 0.2 kg, R = 40 mm, h = 100 mm → V = 1.40 m/s, δ* = 3.11 mm, F* = 158 N, p₀* = 607 kPa,
+    // Worked example, computed from the quasi-static Hertz impact relations V = √(2gh),
+    // δ* = (15mV²/(16E*R^½))^(2/5), F* = (4/3)E*R^½δ*^(3/2) (K. L. Johnson, Contact Mechanics, Cambridge University Press 1985, §11.4
+    // [section recalled from memory]): m = 0.2 kg, R = 40 mm, h = 100 mm → V = 1.40 m/s, δ* = 3.11 mm, F* = 158 N, p₀* = 607 kPa,
     // t ≈ 6.5 ms. Tolerance 0.5 % for the 3-figure entries, 1 % for the 2-figure contact time.
     const s = hertzImpact({ ...BODY, dropHeight: 0.1 });
     expectRelative(s.velocity, 1.4, 0.005);
@@ -43,7 +44,7 @@ describe('hertzImpact', () => {
 
   it('agrees with a direct integration of the Hertz equation of motion', () => {
     // Newton's second law with the Hertz force law F = (4/3)E*R^½δ^(3/2) (Johnson 1985, ch. 4,
-    // quasi-static impact §11.4) integrated by RK4 [computed]. Tolerance 1e-6: the integration
+    // quasi-static impact §11.4) integrated here by RK4. Tolerance 1e-6: the integration
     // and the interpolated exit time are good to ≈ 1e-7; the quoted 2.94 alone would miss by 1e-3.
     for (const [mass, radius, modulus, dropHeight] of [
       [0.2, 0.04, E_STAR, 0.1],
@@ -86,7 +87,7 @@ describe('hertzImpactMaxDropHeight', () => {
   });
 
   it('keeps the peak pressure at or below the limit, and just above it exceeds the limit', () => {
-    // p₀* rises monotonically with h (∝ h^(1/5), Johnson 1985 §11.4 [memory]), so 1 % less
+    // p₀* rises monotonically with h (∝ h^(1/5), Johnson 1985 §11.4 [from memory]), so 1 % less
     // height must stay below the limit and 1 % more must exceed it.
     const limit = 0.29e6; // apple flesh failure stress, Food & Machinery 31(5) [read, abstract]
     const h = hertzImpactMaxDropHeight({ ...BODY, pressureLimit: limit });

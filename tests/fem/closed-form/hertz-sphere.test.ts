@@ -8,15 +8,16 @@ import {
 } from '../../../fem/closed-form';
 import { expectFieldError, expectRelative } from './expect-close';
 
-// Illustrative inputs of the REFERENCES.md worked examples (not data): E = 3 MPa, ν = 0.35.
+// Illustrative inputs of the worked examples (invented, not data): E = 3 MPa, ν = 0.35.
 const E = 3e6;
 const NU = 0.35;
-// Worked examples are given to 3 significant figures: 0.5 % relative covers the rounding.
+// The worked-example values are rounded to 3 significant figures: 0.5 % relative covers that.
 const TABLE = 0.005;
 
 describe('hertzSphereAtForce', () => {
   it('reproduces the worked example: sphere on a rigid flat', () => {
-    // REFERENCES.md worked examples [computed], Johnson, Contact Mechanics, 1985, ch. 4:
+    // Worked example, computed from the Hertz point-contact relations a = (3FR/4E*)^(1/3),
+    // p₀ = 3F/(2πa²), δ = a²/R (K. L. Johnson, Contact Mechanics, Cambridge University Press 1985, §4.2 [section recalled from memory]):
     // R = 40 mm, F = 20 N → a = 5.60 mm, p₀ = 305 kPa, δ = 0.784 mm.
     const s = hertzSphereAtForce({
       force: 20,
@@ -31,8 +32,9 @@ describe('hertzSphereAtForce', () => {
   });
 
   it('reproduces the worked example: two identical deformable spheres', () => {
-    // REFERENCES.md [computed]: R₁ = R₂ = 40 mm, F = 20 N → a = 5.60 mm, p₀ = 305 kPa,
-    // δ = 1.57 mm (twice the flat case: R and E* both halve).
+    // Worked example, computed from the same relations with 1/R = 1/R₁ + 1/R₂ and
+    // 1/E* = Σ(1 − ν²)/E (Johnson 1985, §4.2 [from memory]): R₁ = R₂ = 40 mm, F = 20 N →
+    // a = 5.60 mm, p₀ = 305 kPa, δ = 1.57 mm (twice the flat case: R and E* both halve).
     const s = hertzSphereAtForce({
       force: 20,
       radius: effectiveRadius(0.04, 0.04),
@@ -43,11 +45,11 @@ describe('hertzSphereAtForce', () => {
     expectRelative(s.approach, 1.57e-3, TABLE);
   });
 
-  it('steel ball on steel: the REFERENCES row matches E = 200 GPa, not the 210 GPa it states', () => {
-    // REFERENCES.md sanity case [computed]: D = 50 mm, F = 500 N, ν = 0.3 → a = 0.440 mm,
-    // p₀ ≈ 1.23 GPa. These figures follow from E = 200 GPa; with the stated 210 GPa Hertz gives
-    // a ≈ 0.434 mm, p₀ ≈ 1.27 GPa. We check the row at 200 GPa (0.5 %: 3 figures) and the
-    // E*^(−1/3), E*^(2/3) scaling to 210 GPa (Johnson 1985, ch. 4; round-off only).
+  it('steel ball on a steel flat: a = 0.440 mm, p₀ = 1.23 GPa at E = 200 GPa; scales to 210 GPa', () => {
+    // Worked example, computed from the Hertz relations (Johnson 1985, §4.2 [from memory]):
+    // D = 50 mm, F = 500 N, E = 200 GPa, ν = 0.3 → a = 0.440 mm, p₀ ≈ 1.23 GPa (0.5 %: three
+    // figures). At 210 GPa a ∝ E*^(−1/3) and p₀ ∝ E*^(2/3) give a ≈ 0.434 mm, p₀ ≈ 1.27 GPa
+    // (round-off only, 1e-12).
     const at = (modulus: number) =>
       hertzSphereAtForce({
         force: 500,
@@ -111,7 +113,7 @@ describe('hertzSphereAtApproach', () => {
 
 describe('hertzSubsurfaceShear', () => {
   it('finds ≈ 0.31 p₀ at ≈ 0.48 a for ν = 0.3', () => {
-    // Johnson, Contact Mechanics, 1985, §3.4 [memory]: max shear 0.31 p₀ at depth 0.48 a.
+    // Johnson, Contact Mechanics, 1985, §3.4 [from memory]: max shear 0.31 p₀ at depth 0.48 a.
     // Tolerance ±0.005 (absolute, in units of p₀ and a): half a unit of the two recalled figures.
     const p0 = 305e3;
     const a = 5.6e-3;
@@ -121,7 +123,7 @@ describe('hertzSubsurfaceShear', () => {
   });
 
   it('is the maximum of a brute-force scan of the axis stresses', () => {
-    // Independent dense scan of Johnson 1985 eq. 3.45 [memory] over 0 < z/a ≤ 3 (step 1e-5):
+    // Independent dense scan of Johnson 1985 eq. 3.45 [from memory] over 0 < z/a ≤ 3 (step 1e-5):
     // the optimiser must not be beaten by more than the scan's own resolution (1e-9 of p₀).
     for (const nu of [0.05, 0.2, 0.3, 0.45]) {
       let best = 0;

@@ -20,7 +20,8 @@ const decayLength = (b: JanssenBin) => b.hydraulicRadius / (b.wallFriction * b.l
 
 describe('janssenVerticalPressure', () => {
   it('tends to ρ_b g z near the top', () => {
-    // Janssen 1895 [memory], REFERENCES.md property: σ_v → ρ_b g z as z → 0. At z = 1e-4 of the
+    // H. A. Janssen, Versuche über Getreidedruck in Silozellen, Z. Ver. Dtsch. Ing. 39, 1895
+    // [from memory]: σ_v = ρ_b g L (1 − e^(−z/L)), L = R_h/(μ_w K), so σ_v → ρ_b g z as z → 0. At z = 1e-4 of the
     // decay length R_h/(μK) the first neglected term is z/(2L) = 5e-5; tolerance 1e-4.
     for (const bin of BINS) {
       const depth = 1e-4 * decayLength(bin);
@@ -30,7 +31,7 @@ describe('janssenVerticalPressure', () => {
   });
 
   it('tends to ρ_b g R_h/(μ_w K) deep down, from below', () => {
-    // Janssen 1895 [memory], REFERENCES.md property. At 40 decay lengths e^(−40) ≈ 4e-18, so the
+    // Janssen 1895 [from memory]: σ_v → ρ_b g L from below as z → ∞. At 40 decay lengths e^(−40) ≈ 4e-18, so the
     // pressure equals the limit to round-off (1e-12) and never exceeds it at any depth.
     for (const bin of BINS) {
       const limit = bin.bulkDensity * (bin.g ?? G) * decayLength(bin);
@@ -48,7 +49,7 @@ describe('janssenVerticalPressure', () => {
 
   it('satisfies the slice balance dσ/dz = ρ_b g − (μ_w K/R_h) σ', () => {
     // Equilibrium of a horizontal slice of the fill against wall friction, the equation Janssen
-    // solved (Janssen 1895 [memory]); central difference with step 1e-5 m: error ≈ 1e-10 relative,
+    // solved (Janssen 1895 [from memory]); central difference with step 1e-5 m: error ≈ 1e-10 relative,
     // tolerance 1e-6 for round-off in the difference.
     for (const bin of BINS) {
       for (const depth of [0.05, 0.4, 1.2]) {
@@ -121,7 +122,7 @@ describe('janssenMaxFillDepth', () => {
 
 describe('rectangularBinHydraulicRadius', () => {
   it('is area / perimeter: side/4 for a square, → width/2 for a long trough', () => {
-    // Geometry of R_h = A/P (REFERENCES.md, Janssen section). Round-off only: 1e-12; the long
+    // Hydraulic radius R_h = area / perimeter of the bin's cross-section (Janssen 1895). Round-off only: 1e-12; the long
     // trough at L/W = 1e9 differs from W/2 by 1e-9 relative.
     expectRelative(rectangularBinHydraulicRadius(1.2, 1.2), 0.3, 1e-12);
     expectRelative(rectangularBinHydraulicRadius(1.2, 1.0), (1.2 * 1.0) / 4.4, 1e-12);

@@ -5,6 +5,8 @@ import { quarterEllipseMesh } from '../../../fem/mesh/quarter-ellipse';
 import type { MeshLevel } from '../../../fem/types';
 
 const LEVELS: MeshLevel[] = ['coarse', 'normal', 'fine'];
+/** Surface node spacing at the pole per level, units of the equatorial radius (product spec). */
+const POLE_SPACING: Record<MeshLevel, number> = { coarse: 0.02, normal: 0.01, fine: 0.005 };
 
 /** Shoelace area of a closed polygon through the given nodes. */
 function polygonArea(r: Float64Array, z: Float64Array, loop: number[]): number {
@@ -24,9 +26,9 @@ describe('quarter-ellipse mesh', () => {
         const mesh = quarterEllipseMesh(aspect, MESH_LEVEL_PARAMS[level]);
         const q = meshQuality(mesh);
         // Bilinear map is one-to-one iff det J > 0 at the corners (then everywhere inside);
-        // Gauss points are checked too (Cook et al. 2002, isoparametric elements [memory]).
+        // Gauss points are checked too (Cook et al. 2002, isoparametric elements [from memory]).
         expect(q.minDetJ).toBeGreaterThan(0);
-        // Quality floor [practice]: no corner angle under ~15° (sine 0.25) even at aspect 0.3 / 3.
+        // Quality floor [common practice]: no corner angle under ~15° (sine 0.25) even at aspect 0.3 / 3.
         expect(q.minCornerSine).toBeGreaterThan(0.25);
 
         // Element areas sum to the area inside the boundary polygon (midplane, surface, axis):
@@ -68,18 +70,19 @@ describe('quarter-ellipse mesh', () => {
 
   for (const level of LEVELS) {
     it(`${level}: fine near the pole, spacing growing with distance, to r ≥ 0.6`, () => {
-      const p = MESH_LEVEL_PARAMS[level];
-      const m = quarterEllipseMesh(1, p);
+      const m = quarterEllipseMesh(1, MESH_LEVEL_PARAMS[level]);
+      const spacing = POLE_SPACING[level];
       const r = Array.from(m.surface, (v) => m.nodeR[v]);
-      // Brief's spacing at the pole (0.02 / 0.01 / 0.005 of the radius); 1 % for the arc/chord.
-      expect(Math.abs(r[1] - p.poleSpacing)).toBeLessThan(0.01 * p.poleSpacing);
+      // Product mesh specification: pole spacing 0.02 / 0.01 / 0.005 of the radius (written out
+      // here, not read from the code); 1 % for the difference between arc and chord.
+      expect(Math.abs(r[1] - spacing)).toBeLessThan(0.01 * spacing);
       const reach = r.findIndex((x) => x > 0.6);
       expect(reach).toBeGreaterThan(0);
       for (let i = 1; i <= reach; i++) {
         const h = r[i] - r[i - 1];
         // Surface step never above 1.5× the pole spacing or 15 % of the distance from the pole,
-        // so a contact of radius a ≥ 0.05 spans several nodes [practice].
-        expect(h).toBeLessThan(Math.max(1.5 * p.poleSpacing, 0.15 * r[i]));
+        // so a contact of radius a ≥ 0.05 spans several nodes [common practice].
+        expect(h).toBeLessThan(Math.max(1.5 * spacing, 0.15 * r[i]));
       }
     });
   }

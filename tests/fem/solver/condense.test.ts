@@ -11,10 +11,11 @@ const maxAbs = (v: ArrayLike<number>): number =>
   Array.from(v).reduce((m, x) => Math.max(m, Math.abs(x)), 0);
 
 describe('static condensation', () => {
-  it('reproduces the REFERENCES.md springs-in-series example', () => {
-    // Source: Guyan 1965, AIAA J. 3(2):380 [memory]; worked example in REFERENCES.md [computed]:
-    // springs 100, 200, 300 N/mm over nodes 0–3, keep 0 and 3 → K* = 54.5·[1 −1; −1 1] N/mm,
-    // and u = (0, 1) at the kept nodes moves the inner nodes 0.545 and 0.818.
+  it('condenses three springs in series to their series stiffness', () => {
+    // R. J. Guyan, Reduction of stiffness and mass matrices, AIAA Journal 3(2):380, 1965 [from
+    // memory]. Worked example, computed from K* = K_cc − K_cf K_ff⁻¹ K_fc: springs 100, 200,
+    // 300 N/mm over nodes 0–3, keep 0 and 3 → K* = 54.5·[1 −1; −1 1] N/mm, and u = (0, 1) at
+    // the kept nodes moves the inner nodes 0.545 and 0.818.
     // Exact: series stiffness 1/(1/100 + 1/200 + 1/300) = 600/11 = 54.545…; inner nodes 6/11, 9/11.
     const k = csrFromDense([
       [100, -100, 0, 0],
@@ -29,7 +30,7 @@ describe('static condensation', () => {
     expect(sys.kstar[1]).toBeCloseTo(-kser, 10);
     expect(sys.kstar[2]).toBeCloseTo(-kser, 10);
     expect(sys.kstar[3]).toBeCloseTo(kser, 10);
-    // The REFERENCES.md rounding: 54.5 to three figures (tolerance 0.05 N/mm = half the last digit).
+    // The worked example's rounding: 54.5 to three figures (tolerance 0.05 N/mm, half the last digit).
     expect(Math.abs(sys.kstar[0] - 54.5)).toBeLessThan(0.05);
     const u = sys.recover([0, 1]);
     expect(u[1]).toBeCloseTo(6 / 11, 12);
@@ -41,7 +42,7 @@ describe('static condensation', () => {
 
   for (const model of ['axisymmetric', 'plane-strain'] as const) {
     it(`matches a full solve with prescribed contact displacements (${model})`, () => {
-      // Source: Cook et al. 2002, static condensation is exact for statics [memory]. Reference:
+      // Source: Cook et al. 2002, static condensation is exact for statics [from memory]. Reference:
       // the full system with u_c prescribed (moved to the right-hand side), solved by the full
       // skyline factorisation, itself checked against mathjs's sparse LU in solver.test.ts.
       const mesh = quarterEllipseMesh(0.7, MESH_LEVEL_PARAMS.coarse);
@@ -73,7 +74,7 @@ describe('static condensation', () => {
 
   for (const model of ['axisymmetric', 'plane-strain'] as const) {
     it(`scales as the CondensedBody contract says (${model})`, () => {
-      // Dimensional analysis [computed]: K ∝ ∫BᵀDB dV with B ∝ 1/R, D ∝ E, dV ∝ R³ (ring,
+      // Dimensional analysis: K ∝ ∫BᵀDB dV with B ∝ 1/R, D ∝ E, dV ∝ R³ (ring,
       // 2π r dA) or R² (per metre of thickness), so K_real = E·R·K_unit or E·K_unit.
       // Tolerance 1e-10 relative: the same arithmetic on scaled numbers.
       const unit = quarterEllipseMesh(0.9, MESH_LEVEL_PARAMS.coarse);

@@ -34,7 +34,7 @@ function problem(model: 'axisymmetric' | 'plane-strain') {
 describe('assembled stiffness and skyline solver', () => {
   for (const model of ['axisymmetric', 'plane-strain'] as const) {
     it(`assembles a symmetric K (${model})`, () => {
-      // Source: Cook et al. 2002 [memory]: K = Σ kₑ of symmetric element matrices is symmetric.
+      // Source: Cook et al. 2002 [from memory]: K = Σ kₑ of symmetric element matrices is symmetric.
       const { k } = problem(model);
       let worst = 0;
       for (let i = 0; i < k.n; i++) {
@@ -47,7 +47,7 @@ describe('assembled stiffness and skyline solver', () => {
     });
 
     it(`agrees with mathjs sparse LU (${model})`, () => {
-      // Reference: mathjs slu + lusolve, an independent LU code [computed]. Tolerance 1e-9
+      // Reference: mathjs slu + lusolve, an independent LU code. Tolerance 1e-9
       // relative to the largest displacement: both are direct solves of a matrix with a
       // condition number near 1e4–1e5, so they agree to ~1e-11; 1e-9 leaves margin.
       const { k, fixed, f } = problem(model);

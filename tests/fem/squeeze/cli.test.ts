@@ -47,11 +47,13 @@ describe('tenderline CLI (scripts/fem.ts, built to dist/tenderline.mjs)', () => 
     const { stdout } = await cli([...valid, '--json']);
     const out = JSON.parse(stdout);
     expect(out.steps).toHaveLength(5);
+    // 1 mm printed to 4 significant figures is exactly 1: 1e-6 only absorbs the float parse.
     expect(out.final.travel_mm).toBeCloseTo(1, 6);
     expect(out.final.force_n).toBeGreaterThan(0);
     expect(out.steps[0]).toHaveProperty('lift_ratio');
     expect(out.grip.travel_mm).toBeGreaterThan(0);
-    // margin = threshold / peak at grip (DESIGN.md); 1e-3 relative: both printed to 3–4 figures.
+    // Product definition: bruise margin = threshold / peak pressure at the grip. Compared to
+    // 2 decimals (toBeCloseTo 2): both are printed to 3–4 significant figures.
     expect(out.grip.margin).toBeCloseTo(150 / out.grip.peak_pressure_kpa, 2);
     expect(out.hertz.at_travel.force_n).toBeGreaterThan(0);
     expect(out.mesh).toMatchObject({ level: 'coarse' });

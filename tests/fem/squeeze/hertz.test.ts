@@ -51,7 +51,7 @@ describe('squeeze of a sphere against Hertz (Johnson, Contact Mechanics, 1985, c
     // infinity), more so as the contact grows: the ratio falls as the travel shrinks.
     for (let i = 1; i < ratios.length; i++) expect(ratios[i]).toBeGreaterThan(ratios[i - 1]);
     expect(ratios[0]).toBeGreaterThan(1);
-    // The excess is of order a/R ∝ √d [computed, our reasoning]: a straight-line fit of the
+    // The excess is of order a/R ∝ √d (our estimate, not a published result): a straight-line fit of the
     // ratio against √d meets d = 0 near 1. Tolerance 2 %: the normal mesh's own stiffening.
     const x = travels.map(Math.sqrt);
     const n = x.length;
@@ -71,19 +71,19 @@ describe('squeeze of a sphere against Hertz (Johnson, Contact Mechanics, 1985, c
     const tau = res.final.maxShear as number;
     const depth = res.final.maxShearDepth as number;
     console.log(`max shear ${(tau / h.p0).toFixed(4)} p0 at ${(depth / h.a).toFixed(3)} a`);
-    // Johnson 1985 §3.4 [memory]: 0.31 p0 at 0.48 a. Tolerance 10 % on the shear (two-figure
+    // Johnson 1985 §3.4 [from memory]: 0.31 p0 at 0.48 a. Tolerance 10 % on the shear (two-figure
     // recall, element-centroid stresses); 15 % on the depth, because centroids sit half an
     // element apart in depth and the maximum is flat there.
     expect(Math.abs(tau / h.p0 / 0.31 - 1)).toBeLessThan(0.1);
     expect(Math.abs(depth / h.a / 0.48 - 1)).toBeLessThan(0.15);
-    // Same check against the axis formula of the closed-form module [computed from Johnson eq. 3.45].
+    // Same check against the axis formula of the closed-form module (Johnson 1985 eq. 3.45 [eq. number recalled from memory]).
     const cf = res.hertz.atForce;
     expect(Math.abs(tau / (cf.maxShear as number) - 1)).toBeLessThan(0.1);
   });
 
   it('a spheroid matches Hertz with the pole radius of curvature R_eq²/R_ax', () => {
     // Pole curvature of a spheroid with semi-axes b (equatorial), c (axial): b²/c in every
-    // meridian (standard differential geometry of the ellipse [memory]).
+    // meridian (standard differential geometry of the ellipse [from memory]).
     const res = runSqueeze({
       equatorialRadius: R,
       axialRadius: 0.05,

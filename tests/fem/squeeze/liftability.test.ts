@@ -1,10 +1,11 @@
 import { describe, expect, it } from 'vitest';
 import { GRIP_TOLERANCE, runSqueeze, type SqueezeInput } from '../../../fem';
 
-// Inputs invented: 70 mm apple-sized sphere, E = 3 MPa, ν = 0.35; density 840 kg/m³ within
-// Mohsenin 1986's 800–850 kg/m³ for apple flesh [memory]; friction 0.4 within the 0.36–0.51 of
-// apples on steel/plywood (CIGR Journal [read]).
-const g = 9.80665; // standard gravity (CGPM 1901)
+// Inputs invented: 70 mm apple-sized sphere, E = 3 MPa, ν = 0.35; density 840 kg/m³, within the
+// 800–850 kg/m³ for apple flesh in N. N. Mohsenin, Physical Properties of Plant and Animal
+// Materials, Gordon and Breach, 2nd ed. 1986 [from memory]; friction 0.4, a typical value for
+// fruit skin on steel or plastic [common practice].
+const g = 9.80665; // standard gravity g_n, m/s² (3rd CGPM, 1901)
 const base: SqueezeInput = {
   equatorialRadius: 0.035,
   modulus: 3e6,
@@ -20,7 +21,7 @@ const base: SqueezeInput = {
   failureShear: 100e3,
 };
 
-// Grip rule 2μN ≥ SF·m(g + a) [practice] (REFERENCES.md), mass of a sphere (4/3)πR³ρ.
+// Two-pad friction grip rule 2μN ≥ SF·m(g + a) [common practice]; mass of a sphere (4/3)πR³ρ.
 const mass = (4 / 3) * Math.PI * 0.035 ** 3 * 840;
 const ratioOf = (force: number) => (0.4 * 2 * force) / (2 * mass * g * 1.5);
 
@@ -39,7 +40,7 @@ describe('liftability of the two-pad grip', () => {
 
   it('the lift ratio follows the grip rule and never decreases with travel', () => {
     for (const s of res.steps) {
-      // 1e-12 relative: the same formula evaluated twice in double precision.
+      // 1e-10 (toBeCloseTo 10 on ratios of order 1): the same formula in double precision.
       expect(s.liftRatio as number).toBeCloseTo(ratioOf(s.force), 10);
     }
     for (let i = 1; i < res.steps.length; i++) {
@@ -47,6 +48,7 @@ describe('liftability of the two-pad grip', () => {
         res.steps[i - 1].liftRatio as number,
       );
     }
+    // Mass ≈ 0.15 kg from the same formula: 1e-12 kg is round-off.
     expect(lift.mass).toBeCloseTo(mass, 12);
   });
 
@@ -61,12 +63,15 @@ describe('liftability of the two-pad grip', () => {
     expect(ratioOf(below.force)).toBeLessThan(1);
     // The ratio changes by (dF/dd)·tol across the bracket; with F ~ d^1.5 that is < 1e-3 here.
     expect(ratioOf(at.force) - 1).toBeLessThan(1e-3);
+    // The grip's own solve at that travel warm-starts from the bracketing increment, the re-run
+    // starts cold; the active set is unique, so the forces (≈ 5.6 N) agree to far below 1e-6 N.
     expect(at.force).toBeCloseTo(grip.force, 6);
   });
 
   it('margins are threshold / peak at the grip point', () => {
     const grip = lift.grip!;
-    // Definition (DESIGN.md, squeeze check): bruise margin = threshold / peak pressure.
+    // Product definition: bruise margin = threshold / peak pressure, shear margin = failure
+    // shear / largest shear. Tolerance 1e-12 (toBeCloseTo 12 on margins ≈ 1): one division.
     expect(grip.bruiseMargin as number).toBeCloseTo(150e3 / grip.peakPressure, 12);
     expect(grip.shearMargin as number).toBeCloseTo(100e3 / (grip.maxShear as number), 12);
     expect(grip.profile.length).toBeGreaterThan(0);

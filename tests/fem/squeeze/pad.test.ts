@@ -2,7 +2,9 @@ import { describe, expect, it } from 'vitest';
 import { runSqueeze, type SqueezeInput } from '../../../fem';
 
 // Inputs invented: 80 mm sphere, E = 3 MPa, ν = 0.35, 1 mm travel per pad. The flat-plate
-// contact radius is then ≈ 6.5 mm (Hertz, Johnson, Contact Mechanics, 1985, ch. 4 [computed]).
+// contact radius is then ≈ 6.3 mm by Hertz (worked example, computed from a = √(Rδ), K. L.
+// Johnson, Contact Mechanics, Cambridge University Press 1985, §4.2 [from memory]), 6.5 mm in
+// the model.
 const base: SqueezeInput = {
   equatorialRadius: 0.04,
   modulus: 3e6,
@@ -25,7 +27,7 @@ describe('pad geometry', () => {
 
   it('a pad narrower than the contact shows the edge pressure rise', () => {
     // Flat punch with rounded corners: pressure peaks near the edge of the flat, not at the
-    // centre (Johnson 1985, §5.2–5.3 [memory]).
+    // centre (Johnson 1985, §5.2–5.3 [from memory]).
     const small = runSqueeze({ ...base, padDiameter: 0.008, edgeRadius: 0.0005 });
     const prof = small.profile;
     const centre = prof[0].pressure;

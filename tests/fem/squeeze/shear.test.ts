@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { prepareShear, solveAt, stateAt } from '../../../fem';
 
-// Consistency [computed]: the cached stress influence used per increment must give the same
+// Consistency check: the cached stress influence used per increment must give the same
 // largest shear as the body's own recover() + stresses() on the same contact displacements.
 describe('subsurface shear from the stress influence', () => {
   it.each(['axisymmetric', 'plane-strain'] as const)('matches recover + stresses (%s)', (model) => {
