@@ -22,6 +22,7 @@ export interface ApparentModulusInput {
   maxTravel?: number;
 }
 
+/** Result of the apparent-modulus fit, SI. */
 export interface ApparentModulusFit {
   /** apparent Young's modulus E, Pa */
   modulus: number;

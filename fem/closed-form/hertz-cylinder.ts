@@ -1,6 +1,7 @@
 import { requireNonNegative, requirePositive } from '../validate';
 import { requireFiniteResult } from './finite-result';
 
+/** Inputs of a Hertz line contact per unit length (SI). */
 export interface HertzCylinderInput {
   /** normal load per unit length of the line contact P′, N/m (≥ 0) */
   forcePerLength: number;

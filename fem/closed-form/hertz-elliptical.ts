@@ -45,6 +45,7 @@ function axisRatioFor(ratio: number): number {
   return Math.exp((lo + hi) / 2);
 }
 
+/** Inputs of a Hertz elliptical contact at a given approach (SI). */
 export interface HertzEllipticalInput {
   /**
    * principal radii of relative curvature at the contact, m, any order (> 0); for a convex body

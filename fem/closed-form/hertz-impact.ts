@@ -8,6 +8,7 @@ import { requireFiniteResult } from './finite-result';
  */
 const CONTACT_TIME_FACTOR = 2.943275;
 
+/** The impacting body and the flat, SI; `g` defaults to standard gravity. */
 export interface HertzImpactBodies {
   /** mass of the falling body, kg (> 0); for two free bodies use the reduced mass */
   mass: number;
@@ -19,6 +20,7 @@ export interface HertzImpactBodies {
   g?: number;
 }
 
+/** Inputs of an elastic Hertz impact from a drop height (SI). */
 export interface HertzImpactInput extends HertzImpactBodies {
   /** free-fall height above the point of first contact, m (> 0) */
   dropHeight: number;
@@ -82,6 +84,7 @@ export function hertzImpact(input: HertzImpactInput): HertzImpactState {
   return result;
 }
 
+/** Inputs of the largest drop height under a peak-pressure limit (SI). */
 export interface HertzImpactHeightInput extends HertzImpactBodies {
   /** largest allowed peak contact pressure p₀*, Pa (> 0) */
   pressureLimit: number;

@@ -9,11 +9,13 @@ export interface HertzSphereBodies {
   effectiveModulus: number;
 }
 
+/** Inputs of a Hertz point contact at a given force (SI). */
 export interface HertzSphereAtForceInput extends HertzSphereBodies {
   /** normal force F, N (≥ 0) */
   force: number;
 }
 
+/** Inputs of a Hertz point contact at a given approach (SI). */
 export interface HertzSphereAtApproachInput extends HertzSphereBodies {
   /** approach δ of distant points of the two bodies, m (≥ 0); between two plates travel = 2δ */
   approach: number;

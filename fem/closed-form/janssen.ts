@@ -16,11 +16,13 @@ export interface JanssenBin {
   g?: number;
 }
 
+/** A bin and a depth in its fill (SI). */
 export interface JanssenPressureInput extends JanssenBin {
   /** depth below the top surface of the fill, m (≥ 0) */
   depth: number;
 }
 
+/** A bin and the vertical pressure its fill must stay under (SI). */
 export interface JanssenDepthInput extends JanssenBin {
   /** vertical pressure that must not be exceeded, Pa (> 0) */
   pressureLimit: number;

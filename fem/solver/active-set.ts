@@ -84,22 +84,31 @@ function startingSet(q: Float64Array, reachable: Float64Array, warm?: Uint8Array
   return active;
 }
 
-/** Gaps s = q + (C + D_f) p under the forces p (zero forces skipped: most nodes are free). */
+/** Gaps s = q + (C + D_f) p under the forces p. */
 function gapsUnder(
   system: ContactSystem,
   facing: Float64Array,
   q: Float64Array,
   p: Float64Array,
 ): Float64Array {
+  return addCompliance(
+    system,
+    p,
+    q.map((qi, i) => qi + facing[i] * p[i]),
+  );
+}
+
+/** start_i + Σ_j C_ij p_j, summed in j order over the nonzero p_j (most nodes are free). */
+function addCompliance(system: ContactSystem, p: Float64Array, start: Float64Array): Float64Array {
   const n = system.size;
   const C = system.flat;
-  const s = new Float64Array(n);
+  const out = new Float64Array(n);
   for (let i = 0; i < n; i++) {
-    let v = q[i] + facing[i] * p[i];
+    let v = start[i];
     for (let j = 0; j < n; j++) if (p[j] !== 0) v += C[i * n + j] * p[j];
-    s[i] = v;
+    out[i] = v;
   }
-  return s;
+  return out;
 }
 
 /** Active nodes pulling on the pad and reachable free nodes penetrating it, in index order. */
@@ -126,16 +135,8 @@ function closeActive(
   s: Float64Array,
   active: Uint8Array,
 ): Float64Array {
-  const n = system.size;
-  const C = system.flat;
-  const displacement = new Float64Array(n);
-  for (let i = 0; i < n; i++) {
-    let v = 0;
-    for (let j = 0; j < n; j++) if (p[j] !== 0) v -= C[i * n + j] * p[j];
-    displacement[i] = v;
-    if (active[i]) s[i] = 0;
-  }
-  return displacement;
+  active.forEach((a, i) => a && (s[i] = 0));
+  return addCompliance(system, p, new Float64Array(p.length)).map((v) => 0 - v);
 }
 
 /** Forces on the active set with every active gap closed: (C + D_f)_AA p_A = −q_A. */
