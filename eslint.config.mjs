@@ -9,6 +9,7 @@ export default defineConfig([
     '.next/**',
     'node_modules/**',
     'data/**',
+    'dist/**',
     'next-env.d.ts',
     'test-results/**',
     'playwright-report/**',
