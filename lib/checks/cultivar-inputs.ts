@@ -1,0 +1,102 @@
+import 'server-only';
+import type { Actor } from '@/lib/auth/actor';
+import { getCultivar } from '@/lib/data/cultivars';
+import type { RevisionValue } from '@/lib/data/property-rows';
+import { ValidationError } from '@/lib/errors';
+import type { Quantity } from '@/lib/properties/quantities';
+
+/** A property a check used, with where it came from: a published value, or the user's own. */
+export interface UsedValue {
+  value: number;
+  unit: string;
+  origin: 'published' | 'entered' | 'typical default';
+  /** Citation of the published value's source, when it has one. */
+  source: string | null;
+  low: number | null;
+  high: number | null;
+  sd: number | null;
+}
+
+export interface PinnedCultivar {
+  slug: string;
+  name: string;
+  commodity: string;
+  revisionId: number;
+  revisionNumber: number;
+  values: RevisionValue[];
+}
+
+/** The published revision of a cultivar, or a 400 on the `cultivar` field. */
+export async function pinCultivar(actor: Actor, slug: string): Promise<PinnedCultivar> {
+  const record = await getCultivar(actor, slug).catch(() => null);
+  if (!record) {
+    throw new ValidationError('Unknown cultivar.', { cultivar: [`No cultivar "${slug}".`] });
+  }
+  if (!record.published) {
+    throw new ValidationError('No published data.', {
+      cultivar: [`${record.name} has no published revision yet; enter the values yourself.`],
+    });
+  }
+  return {
+    slug: record.slug,
+    name: record.name,
+    commodity: record.commodity.name,
+    revisionId: record.published.id,
+    revisionNumber: record.published.number,
+    values: record.values,
+  };
+}
+
+function citation(v: RevisionValue): string | null {
+  if (!v.source) return null;
+  const who = v.source.authors?.split(/[;,]/)[0]?.trim() ?? v.source.title;
+  return `${who}${v.source.year ? ` ${v.source.year}` : ''}`;
+}
+
+/** The first published value of a quantity (optionally of some variants, in preference order). */
+export function publishedValue(
+  pinned: PinnedCultivar | null,
+  quantity: Quantity,
+  variants?: string[],
+): UsedValue | null {
+  if (!pinned) return null;
+  const candidates = pinned.values.filter((v) => v.quantity === quantity);
+  const pick = variants
+    ? variants.map((want) => candidates.find((v) => v.variant === want)).find(Boolean)
+    : candidates[0];
+  if (!pick) return null;
+  return {
+    value: pick.value,
+    unit: pick.unit,
+    origin: pick.isTypicalDefault ? 'typical default' : 'published',
+    source: citation(pick),
+    low: pick.low,
+    high: pick.high,
+    sd: pick.sd,
+  };
+}
+
+/** What the user typed wins; else the published value; else a 400 naming the missing field. */
+export function chooseValue(
+  field: string,
+  label: string,
+  entered: number | undefined,
+  published: UsedValue | null,
+  unit: string,
+): UsedValue {
+  if (entered !== undefined) {
+    return {
+      value: entered,
+      unit,
+      origin: 'entered',
+      source: null,
+      low: null,
+      high: null,
+      sd: null,
+    };
+  }
+  if (published) return published;
+  throw new ValidationError(`${label} is needed.`, {
+    [field]: [`${label} has no published value for this cultivar: enter one (${unit}).`],
+  });
+}

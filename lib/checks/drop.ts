@@ -1,0 +1,194 @@
+import 'server-only';
+import type { Actor } from '@/lib/auth/actor';
+import type { RevisionValue } from '@/lib/data/property-rows';
+import { parseInput } from '@/lib/validation/parse';
+import { dropCheckSchema } from '@/lib/validation/checks';
+import {
+  heightForEnergy,
+  heightForPressure,
+  impactAt,
+  surfaceSI,
+  type FruitSI,
+} from './drop-model';
+import { resolveFruit, type ResolvedFruit } from './resolve-fruit';
+import { DROP_SURFACE_KEYS, DROP_SURFACES, type DropSurface } from './surfaces';
+import { verdictOf } from './verdict';
+
+const round = (x: number, digits = 4) => Number(x.toPrecision(digits));
+
+function fruitSI(f: ResolvedFruit): FruitSI {
+  return {
+    modulus: f.modulusMpa.value * 1e6,
+    poisson: f.poisson.value,
+    radius: f.diameterMm.value / 2000,
+    mass: f.massG.value / 1000,
+  };
+}
+
+/** The published dynamic thresholds of a surface as safe heights, m, each with its origin. */
+function dynamicLimits(f: ResolvedFruit, fruit: FruitSI, surface: DropSurface) {
+  const variants: readonly string[] = DROP_SURFACES[surface].thresholdVariants;
+  const onSurface = (v: RevisionValue) => variants.includes(v.variant);
+  return f.extra.filter(onSurface).flatMap((v) => {
+    const source = v.source
+      ? `${v.source.authors?.split(/[;,]/)[0] ?? v.source.title} ${v.source.year ?? ''}`.trim()
+      : null;
+    if (v.quantity === 'drop_threshold_height')
+      return [
+        {
+          heightM: v.value / 1000,
+          basis: `${v.value} mm drop onto ${v.variant}`,
+          source,
+          note: v.note,
+        },
+      ];
+    if (v.quantity === 'impact_threshold_energy')
+      return [
+        {
+          heightM: heightForEnergy(fruit, v.value),
+          basis: `${v.value} J onto ${v.variant}`,
+          source,
+          note: v.note,
+        },
+      ];
+    return [];
+  });
+}
+
+function safeHeights(
+  f: ResolvedFruit,
+  fruit: FruitSI,
+  pad: { modulusMpa: number; thicknessMm: number } | undefined,
+) {
+  return DROP_SURFACE_KEYS.filter((s) => s !== 'foam' || pad).map((surface) => {
+    const limits = dynamicLimits(f, fruit, surface).sort((a, b) => a.heightM - b.heightM);
+    const staticKpa = f.staticThresholdKpa?.value;
+    const staticM = staticKpa
+      ? heightForPressure(fruit, surfaceSI(surface, fruit, pad), staticKpa * 1000)
+      : null;
+    return {
+      surface,
+      label: DROP_SURFACES[surface].label,
+      dynamic_safe_height_mm: limits[0] ? round(limits[0].heightM * 1000) : null,
+      dynamic_basis: limits[0]?.basis ?? null,
+      dynamic_source: limits[0]?.source ?? null,
+      dynamic_note: limits[0]?.note ?? null,
+      static_safe_height_mm: staticM === null ? null : round(staticM * 1000),
+    };
+  });
+}
+
+/** Peak pressure and impact energy over a range of heights, for the chart. */
+function series(fruit: FruitSI, surface: ReturnType<typeof surfaceSI>, heightM: number) {
+  const top = Math.max(1, 2 * heightM);
+  return Array.from({ length: 40 }, (_, i) => {
+    const h = (top * (i + 1)) / 40;
+    const s = impactAt(fruit, surface, h);
+    return {
+      height_mm: round(h * 1000),
+      peak_pressure_kpa: round(s.peakPressure / 1000),
+      impact_energy_j: round(s.impactEnergy),
+    };
+  });
+}
+
+/** The drop check: elastic Hertz impact, judged against the cultivar's dynamic threshold. */
+export async function runDropCheck(actor: Actor, raw: unknown) {
+  const input = parseInput(dropCheckSchema, raw);
+  const f = await resolveFruit(actor, input);
+  const fruit = fruitSI(f);
+  const pad =
+    input.surface === 'foam'
+      ? { modulusMpa: input.padModulusMpa!, thicknessMm: input.padThicknessMm! }
+      : undefined;
+  const surface = surfaceSI(input.surface, fruit, pad);
+  const heightM = input.heightMm / 1000;
+  const impact = impactAt(fruit, surface, heightM);
+  const limits = dynamicLimits(f, fruit, input.surface).sort((a, b) => a.heightM - b.heightM);
+  const dynamicMargin = limits[0] ? limits[0].heightM / heightM : null;
+  const staticMargin = f.staticThresholdKpa
+    ? (f.staticThresholdKpa.value * 1000) / impact.peakPressure
+    : null;
+  const warnings: string[] = [];
+  if (surface.thickness !== undefined && surface.thickness < 3 * impact.contactRadius) {
+    warnings.push(
+      `The padding (${input.padThicknessMm} mm) is thin beside the contact (radius ${round(impact.contactRadius * 1000, 3)} mm): the base under it stiffens it, so the real peak pressure is higher than shown.`,
+    );
+  }
+  if (!limits.length) {
+    warnings.push(
+      `No published dynamic bruise threshold for a drop onto ${DROP_SURFACES[input.surface].label.toLowerCase()} for this fruit: the verdict below rests on the static threshold only, which is far stricter than drop tests.`,
+    );
+  }
+  const margin = dynamicMargin ?? staticMargin;
+  return {
+    check: 'drop' as const,
+    pinned: f.pinned && {
+      cultivar: f.pinned.slug,
+      name: f.pinned.name,
+      commodity: f.pinned.commodity,
+      revision_id: f.pinned.revisionId,
+      revision_number: f.pinned.revisionNumber,
+    },
+    inputs_used: {
+      modulus_mpa: f.modulusMpa,
+      poisson_ratio: f.poisson,
+      diameter_mm: f.diameterMm,
+      mass_g: f.massG,
+      static_bruise_threshold_kpa: f.staticThresholdKpa,
+      height_mm: input.heightMm,
+      surface: input.surface,
+      surface_basis: DROP_SURFACES[input.surface].basis,
+    },
+    impact: {
+      impact_velocity_m_s: round(impact.velocity),
+      impact_energy_j: round(impact.impactEnergy),
+      peak_force_n: round(impact.peakForce),
+      contact_radius_mm: round(impact.contactRadius * 1000),
+      peak_pressure_kpa: round(impact.peakPressure / 1000),
+      contact_time_ms: round(impact.contactTime * 1000),
+      max_approach_mm: round(impact.maxApproach * 1000),
+    },
+    margin:
+      margin === null
+        ? null
+        : {
+            value: round(margin, 3),
+            basis: dynamicMargin !== null ? 'dynamic' : 'static',
+            verdict: verdictOf(margin),
+          },
+    dynamic: limits[0]
+      ? {
+          safe_height_mm: round(limits[0].heightM * 1000),
+          margin: round(dynamicMargin!, 3),
+          basis: limits[0].basis,
+          source: limits[0].source,
+          note: limits[0].note,
+        }
+      : null,
+    static:
+      staticMargin === null
+        ? null
+        : {
+            margin: round(staticMargin, 3),
+            threshold_kpa: f.staticThresholdKpa!.value,
+            source: f.staticThresholdKpa!.source,
+          },
+    safe_heights: safeHeights(f, fruit, pad),
+    series: series(fruit, surface, heightM),
+    warnings,
+    units: {
+      impact_velocity_m_s: 'm/s',
+      impact_energy_j: 'J',
+      peak_force_n: 'N',
+      contact_radius_mm: 'mm',
+      peak_pressure_kpa: 'kPa',
+      contact_time_ms: 'ms',
+      max_approach_mm: 'mm',
+      safe_height_mm: 'mm',
+      margin: 'threshold ÷ load (–)',
+    },
+  };
+}
+
+export type DropCheckResult = Awaited<ReturnType<typeof runDropCheck>>;

@@ -1,0 +1,147 @@
+import 'server-only';
+import type { Actor } from '@/lib/auth/actor';
+import { parseInput } from '@/lib/validation/parse';
+import { stackCheckSchema } from '@/lib/validation/checks';
+import { publishedValue, type UsedValue } from './cultivar-inputs';
+import { resolveFruit } from './resolve-fruit';
+import { deepestSafeFill, stackAt, type StackSI } from './stack-model';
+import { verdictOf } from './verdict';
+
+const round = (x: number, digits = 4) => Number(x.toPrecision(digits));
+
+/** A default with no source behind it, used only when neither the user nor the data gives one. */
+const typical = (value: number, why: string): UsedValue => ({
+  value,
+  unit: '–',
+  origin: 'typical default',
+  source: why,
+  low: null,
+  high: null,
+  sd: null,
+});
+const entered = (value: number, unit: string): UsedValue => ({
+  value,
+  unit,
+  origin: 'entered',
+  source: null,
+  low: null,
+  high: null,
+  sd: null,
+});
+
+/** Random loose packing of like spheres fills about 60 % of a bin's volume [from memory]. */
+const PACKING_FRACTION = 0.6;
+
+/** The stack check: Janssen's wall-friction law down the bin, Hertz at the bottom contact. */
+export async function runStackCheck(actor: Actor, raw: unknown) {
+  const input = parseInput(stackCheckSchema, raw);
+  const f = await resolveFruit(actor, input);
+  const p = f.pinned;
+  const fruitDensity =
+    f.massG.value / 1000 / ((4 / 3) * Math.PI * (f.diameterMm.value / 2000) ** 3);
+  const bulk =
+    input.bulkDensityKgM3 !== undefined
+      ? entered(input.bulkDensityKgM3, 'kg/m³')
+      : (publishedValue(p, 'bulk_density') ?? {
+          ...typical(
+            round(PACKING_FRACTION * fruitDensity, 3),
+            `${PACKING_FRACTION * 100} % of the fruit's own density (random loose packing, from memory)`,
+          ),
+          unit: 'kg/m³',
+        });
+  const wall =
+    input.wallFriction !== undefined
+      ? entered(input.wallFriction, '–')
+      : (publishedValue(p, 'friction_coefficient', ['plywood', 'wood']) ??
+        typical(
+          0.4,
+          'Typical wall friction of fruit on a wooden bin; no published source for this fruit.',
+        ));
+  const ratio =
+    input.lateralRatio !== undefined
+      ? entered(input.lateralRatio, '–')
+      : (publishedValue(p, 'lateral_pressure_ratio') ??
+        typical(0.4, 'Typical Janssen ratio K for a bulk of round fruit; no published source.'));
+  const s: StackSI = {
+    length: input.binLengthMm / 1000,
+    width: input.binWidthMm / 1000,
+    bulkDensity: bulk.value,
+    wallFriction: wall.value,
+    lateralRatio: ratio.value,
+    fruitRadius: f.diameterMm.value / 2000,
+    modulus: f.modulusMpa.value * 1e6,
+    poisson: f.poisson.value,
+  };
+  const depth = input.fillDepthMm / 1000;
+  const bottom = stackAt(s, depth);
+  const threshold = f.staticThresholdKpa ? f.staticThresholdKpa.value * 1000 : null;
+  const margin = threshold === null ? null : threshold / bottom.peakPressure;
+  const safe = threshold === null ? undefined : deepestSafeFill(s, threshold);
+  const top = Math.max(1.5 * depth, safe ? 1.2 * safe : 0, 0.5);
+  const series = Array.from({ length: 40 }, (_, i) => {
+    const z = (top * (i + 1)) / 40;
+    const at = stackAt(s, z);
+    return {
+      depth_mm: round(z * 1000),
+      vertical_pressure_kpa: round(at.verticalPressure / 1000),
+      contact_pressure_kpa: round(at.peakPressure / 1000),
+      margin: threshold === null ? null : round(threshold / at.peakPressure, 3),
+    };
+  });
+  const warnings: string[] = [];
+  if (threshold === null)
+    warnings.push('No static bruise threshold: enter one to get a margin and a safe depth.');
+  for (const [name, v] of [
+    ['Bulk density', bulk],
+    ['Wall friction', wall],
+    ['Lateral pressure ratio', ratio],
+  ] as const) {
+    if (v.origin === 'typical default')
+      warnings.push(`${name} is a typical default (${v.value}), not a measured value: ${v.source}`);
+  }
+  return {
+    check: 'stack' as const,
+    pinned: p && {
+      cultivar: p.slug,
+      name: p.name,
+      commodity: p.commodity,
+      revision_id: p.revisionId,
+      revision_number: p.revisionNumber,
+    },
+    inputs_used: {
+      modulus_mpa: f.modulusMpa,
+      poisson_ratio: f.poisson,
+      diameter_mm: f.diameterMm,
+      mass_g: f.massG,
+      static_bruise_threshold_kpa: f.staticThresholdKpa,
+      bulk_density_kg_m3: bulk,
+      wall_friction: wall,
+      lateral_pressure_ratio: ratio,
+    },
+    bottom: {
+      vertical_pressure_kpa: round(bottom.verticalPressure / 1000),
+      contact_force_n: round(bottom.force),
+      contact_radius_mm: round(bottom.contactRadius * 1000),
+      contact_pressure_kpa: round(bottom.peakPressure / 1000),
+    },
+    margin:
+      margin === null
+        ? null
+        : { value: round(margin, 3), basis: 'static', verdict: verdictOf(margin) },
+    deepest_safe_fill_mm:
+      safe === undefined ? undefined : safe === null ? null : round(safe * 1000),
+    series,
+    warnings,
+    units: {
+      vertical_pressure_kpa: 'kPa',
+      contact_force_n: 'N',
+      contact_radius_mm: 'mm',
+      contact_pressure_kpa: 'kPa',
+      deepest_safe_fill_mm: 'mm (null: any depth)',
+      depth_mm: 'mm',
+      margin: 'threshold ÷ contact pressure (–)',
+    },
+  };
+}
+
+export type StackCheckResult = Awaited<ReturnType<typeof runStackCheck>>;
