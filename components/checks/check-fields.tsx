@@ -1,0 +1,95 @@
+'use client';
+
+import { useId } from 'react';
+
+/** A number input with its unit beside it and its error below, announced politely. */
+export function MeasureField({
+  label,
+  unit,
+  value,
+  onChange,
+  placeholder,
+  errors,
+  hint,
+}: {
+  label: string;
+  unit: string;
+  value: string;
+  onChange: (value: string) => void;
+  placeholder?: string;
+  errors?: string[];
+  hint?: string;
+}) {
+  const id = useId();
+  const describedBy = `${id}-note`;
+  return (
+    <div className="space-y-1">
+      <label htmlFor={id} className="block text-sm font-medium">
+        {label}
+      </label>
+      <div className="flex items-center gap-2">
+        <input
+          id={id}
+          inputMode="decimal"
+          value={value}
+          placeholder={placeholder}
+          onChange={(e) => onChange(e.target.value)}
+          aria-invalid={errors?.length ? true : undefined}
+          aria-describedby={describedBy}
+          className="num w-32 rounded-md border border-stone-300 bg-white px-2 py-1 text-sm aria-[invalid=true]:border-red-600"
+        />
+        <span className="text-sm text-stone-600">{unit}</span>
+      </div>
+      <p id={describedBy} aria-live="polite" className="text-xs">
+        {errors?.length ? (
+          <span className="text-red-700">{errors.join(' ')}</span>
+        ) : hint ? (
+          <span className="text-stone-500">{hint}</span>
+        ) : null}
+      </p>
+    </div>
+  );
+}
+
+export interface CultivarOption {
+  slug: string;
+  label: string;
+}
+
+export function CultivarSelect({
+  options,
+  value,
+  onChange,
+  errors,
+}: {
+  options: CultivarOption[];
+  value: string;
+  onChange: (slug: string) => void;
+  errors?: string[];
+}) {
+  const id = useId();
+  return (
+    <div className="space-y-1">
+      <label htmlFor={id} className="block text-sm font-medium">
+        Cultivar
+      </label>
+      <select
+        id={id}
+        value={value}
+        onChange={(e) => onChange(e.target.value)}
+        aria-describedby={`${id}-note`}
+        className="w-full max-w-xs rounded-md border border-stone-300 bg-white px-2 py-1.5 text-sm"
+      >
+        <option value="">Custom values (no cultivar)</option>
+        {options.map((o) => (
+          <option key={o.slug} value={o.slug}>
+            {o.label}
+          </option>
+        ))}
+      </select>
+      <p id={`${id}-note`} aria-live="polite" className="text-xs text-red-700">
+        {errors?.join(' ')}
+      </p>
+    </div>
+  );
+}

@@ -1,0 +1,89 @@
+'use client';
+
+import {
+  CartesianGrid,
+  Legend,
+  Line,
+  LineChart,
+  ReferenceLine,
+  ResponsiveContainer,
+  Tooltip,
+  XAxis,
+  YAxis,
+} from 'recharts';
+
+interface Point {
+  height_mm: number;
+  peak_pressure_kpa: number;
+  impact_energy_j: number;
+}
+
+/** Peak contact pressure and impact energy against drop height, the chosen height marked. */
+export function DropCharts({
+  series,
+  heightMm,
+  thresholdKpa,
+}: {
+  series: Point[];
+  heightMm: number;
+  thresholdKpa: number | null;
+}) {
+  return (
+    <div className="h-72 w-full" data-testid="drop-chart">
+      <ResponsiveContainer width="100%" height="100%">
+        <LineChart data={series} margin={{ top: 10, right: 20, bottom: 24, left: 10 }}>
+          <CartesianGrid stroke="#e7e5e4" />
+          <XAxis
+            dataKey="height_mm"
+            type="number"
+            domain={[0, 'dataMax']}
+            label={{ value: 'drop height (mm)', position: 'insideBottom', offset: -12 }}
+          />
+          <YAxis
+            yAxisId="p"
+            label={{ value: 'peak pressure (kPa)', angle: -90, position: 'insideLeft' }}
+          />
+          <YAxis
+            yAxisId="e"
+            orientation="right"
+            label={{ value: 'energy (J)', angle: 90, position: 'insideRight' }}
+          />
+          <Tooltip />
+          <Legend verticalAlign="top" />
+          <Line
+            yAxisId="p"
+            dataKey="peak_pressure_kpa"
+            name="peak pressure (kPa)"
+            stroke="#2f5f2c"
+            dot={false}
+            isAnimationActive={false}
+          />
+          <Line
+            yAxisId="e"
+            dataKey="impact_energy_j"
+            name="impact energy (J)"
+            stroke="#8a4b16"
+            dot={false}
+            isAnimationActive={false}
+          />
+          <ReferenceLine
+            yAxisId="p"
+            x={heightMm}
+            stroke="#57534e"
+            strokeDasharray="4 4"
+            label="this drop"
+          />
+          {thresholdKpa ? (
+            <ReferenceLine
+              yAxisId="p"
+              y={thresholdKpa}
+              stroke="#b91c1c"
+              strokeDasharray="2 2"
+              label="static threshold"
+            />
+          ) : null}
+        </LineChart>
+      </ResponsiveContainer>
+    </div>
+  );
+}

@@ -1,0 +1,233 @@
+'use client';
+
+import { useState } from 'react';
+import type { DropCheckResult } from '@/lib/checks/drop';
+import { DROP_SURFACE_KEYS, DROP_SURFACES, type DropSurface } from '@/lib/checks/surfaces';
+import { CultivarSelect, MeasureField, type CultivarOption } from './check-fields';
+import { DropCharts } from './drop-charts';
+import { MarginPanel } from './margin-panel';
+import { CheckWarnings, UsedValues } from './used-values';
+import { numberOrUndefined, useCheck } from './use-check';
+
+const FRUIT_FIELDS = [
+  ['modulusMpa', "Young's modulus", 'MPa'],
+  ['poisson', "Poisson's ratio", '–'],
+  ['diameterMm', 'Diameter', 'mm'],
+  ['massG', 'Mass', 'g'],
+  ['staticThresholdKpa', 'Static bruise threshold', 'kPa'],
+] as const;
+
+export function DropCheck({
+  cultivars,
+  initialCultivar,
+}: {
+  cultivars: CultivarOption[];
+  initialCultivar: string;
+}) {
+  const [cultivar, setCultivar] = useState(initialCultivar);
+  const [surface, setSurface] = useState<DropSurface>('steel');
+  const [text, setText] = useState<Record<string, string>>({
+    heightMm: '150',
+    padModulusMpa: '0.5',
+    padThicknessMm: '25',
+  });
+  const set = (key: string) => (value: string) => setText((t) => ({ ...t, [key]: value }));
+  const body: Record<string, unknown> = { surface, ...(cultivar && { cultivar }) };
+  for (const [key, value] of Object.entries(text)) {
+    if (!key.startsWith('pad') || surface === 'foam') body[key] = numberOrUndefined(value);
+  }
+  const { result, pending, message, fieldErrors } = useCheck<DropCheckResult>(
+    '/api/checks/drop',
+    body,
+  );
+  const used = result?.inputs_used;
+  return (
+    <div className="grid gap-6 lg:grid-cols-[minmax(0,20rem)_minmax(0,1fr)]">
+      <form className="space-y-3" onSubmit={(e) => e.preventDefault()} aria-label="Drop inputs">
+        <CultivarSelect
+          options={cultivars}
+          value={cultivar}
+          onChange={setCultivar}
+          errors={fieldErrors.cultivar}
+        />
+        <MeasureField
+          label="Drop height"
+          unit="mm"
+          value={text.heightMm ?? ''}
+          onChange={set('heightMm')}
+          errors={fieldErrors.heightMm}
+        />
+        <div className="space-y-1">
+          <label htmlFor="drop-surface" className="block text-sm font-medium">
+            Surface
+          </label>
+          <select
+            id="drop-surface"
+            value={surface}
+            onChange={(e) => setSurface(e.target.value as DropSurface)}
+            className="rounded-md border border-stone-300 bg-white px-2 py-1.5 text-sm"
+          >
+            {DROP_SURFACE_KEYS.map((s) => (
+              <option key={s} value={s}>
+                {DROP_SURFACES[s].label}
+              </option>
+            ))}
+          </select>
+          <p className="text-xs text-stone-500">{DROP_SURFACES[surface].basis}</p>
+        </div>
+        {surface === 'foam' ? (
+          <>
+            <MeasureField
+              label="Padding modulus"
+              unit="MPa"
+              value={text.padModulusMpa ?? ''}
+              onChange={set('padModulusMpa')}
+              errors={fieldErrors.padModulusMpa}
+            />
+            <MeasureField
+              label="Padding thickness"
+              unit="mm"
+              value={text.padThicknessMm ?? ''}
+              onChange={set('padThicknessMm')}
+              errors={fieldErrors.padThicknessMm}
+            />
+          </>
+        ) : null}
+        <fieldset className="space-y-3 rounded-md border border-stone-200 p-3">
+          <legend className="px-1 text-xs font-medium uppercase tracking-wide text-stone-600">
+            Fruit {cultivar ? '(leave empty to use the published value)' : ''}
+          </legend>
+          {FRUIT_FIELDS.map(([key, label, unit]) => (
+            <MeasureField
+              key={key}
+              label={label}
+              unit={unit}
+              value={text[key] ?? ''}
+              onChange={set(key)}
+              errors={fieldErrors[key]}
+              placeholder={cultivar ? 'published' : ''}
+            />
+          ))}
+        </fieldset>
+        {message ? (
+          <p
+            className="rounded-md bg-red-50 px-3 py-2 text-sm text-red-800"
+            data-testid="form-error"
+            aria-live="polite"
+          >
+            {message}
+          </p>
+        ) : null}
+      </form>
+      <div className="min-w-0 space-y-5">
+        <MarginPanel
+          margin={result?.margin ?? null}
+          pending={pending}
+          basis={
+            result?.margin?.basis === 'dynamic'
+              ? `Published dynamic threshold: ${result.dynamic?.basis} (${result.dynamic?.source ?? 'no source'}) ÷ this drop.`
+              : 'Static threshold ÷ elastic Hertz peak pressure — far stricter than drop tests (see below).'
+          }
+        />
+        {result ? (
+          <DropFigures result={result} />
+        ) : (
+          <p className="text-sm text-stone-600">Enter the inputs to see the result.</p>
+        )}
+        {used ? (
+          <UsedValues
+            rows={[
+              ["Young's modulus", used.modulus_mpa],
+              ["Poisson's ratio", used.poisson_ratio],
+              ['Diameter', used.diameter_mm],
+              ['Mass', used.mass_g],
+              ['Static bruise threshold', used.static_bruise_threshold_kpa],
+            ]}
+          />
+        ) : null}
+      </div>
+    </div>
+  );
+}
+
+function DropFigures({ result }: { result: DropCheckResult }) {
+  const i = result.impact;
+  return (
+    <>
+      <CheckWarnings warnings={result.warnings} />
+      <dl className="grid grid-cols-2 gap-3 text-sm sm:grid-cols-3" data-testid="drop-figures">
+        {[
+          ['Impact speed', `${i.impact_velocity_m_s} m/s`],
+          ['Impact energy', `${i.impact_energy_j} J`],
+          ['Peak force', `${i.peak_force_n} N`],
+          ['Contact radius', `${i.contact_radius_mm} mm`],
+          ['Peak pressure', `${i.peak_pressure_kpa} kPa`],
+          ['Contact time', `${i.contact_time_ms} ms`],
+        ].map(([k, v]) => (
+          <div key={k} className="rounded-md border border-stone-200 bg-white p-2">
+            <dt className="text-xs text-stone-600">{k}</dt>
+            <dd className="num">{v}</dd>
+          </div>
+        ))}
+      </dl>
+      {result.static ? (
+        <p className="text-sm text-stone-700">
+          Secondary, stricter figure: static threshold {result.static.threshold_kpa} kPa ÷ elastic
+          peak pressure = margin <span className="num">{result.static.margin}</span>. Elastic Hertz
+          with the tissue&apos;s static strength ignores that flesh is stiffer and stronger at
+          impact rates, that the skin spreads the load and that bruising starts below the surface;
+          measured drop thresholds are far higher, so this figure is a conservative bound, not the
+          verdict.
+        </p>
+      ) : null}
+      <DropCharts
+        series={result.series}
+        heightMm={result.inputs_used.height_mm}
+        thresholdKpa={result.static?.threshold_kpa ?? null}
+      />
+      <SafeHeights rows={result.safe_heights} />
+    </>
+  );
+}
+
+function SafeHeights({ rows }: { rows: DropCheckResult['safe_heights'] }) {
+  return (
+    <div className="overflow-x-auto">
+      <table className="w-full text-left text-sm" data-testid="safe-heights">
+        <caption className="mb-1 text-left text-xs font-medium uppercase tracking-wide text-stone-600">
+          Largest safe drop height per surface
+        </caption>
+        <thead className="text-xs text-stone-600">
+          <tr>
+            <th className="py-1 pr-2">Surface</th>
+            <th className="py-1 pr-2">From the published drop threshold</th>
+            <th className="py-1">From the static threshold (elastic, stricter)</th>
+          </tr>
+        </thead>
+        <tbody>
+          {rows.map((r) => (
+            <tr key={r.surface} className="border-t border-stone-200 align-top">
+              <td className="py-1 pr-2">{r.label}</td>
+              <td className="py-1 pr-2">
+                {r.dynamic_safe_height_mm === null ? (
+                  <span className="text-stone-500">no published value</span>
+                ) : (
+                  <>
+                    <span className="num">{r.dynamic_safe_height_mm} mm</span>
+                    <span className="block text-xs text-stone-500">
+                      {r.dynamic_basis}
+                      {r.dynamic_source ? ` — ${r.dynamic_source}` : ''}
+                    </span>
+                  </>
+                )}
+              </td>
+              <td className="num py-1">
+                {r.static_safe_height_mm === null ? '—' : `${r.static_safe_height_mm} mm`}
+              </td>
+            </tr>
+          ))}
+        </tbody>
+      </table>
+    </div>
+  );
+}

@@ -1,0 +1,105 @@
+'use client';
+
+import {
+  CartesianGrid,
+  Legend,
+  Line,
+  LineChart,
+  ReferenceLine,
+  ResponsiveContainer,
+  Tooltip,
+  XAxis,
+  YAxis,
+} from 'recharts';
+
+interface Point {
+  depth_mm: number;
+  vertical_pressure_kpa: number;
+  contact_pressure_kpa: number;
+  margin: number | null;
+}
+
+/** Bin pressure and bottom-contact pressure against fill depth; the margin on its own axis. */
+export function StackCharts({
+  series,
+  depthMm,
+  safeMm,
+}: {
+  series: Point[];
+  depthMm: number;
+  safeMm: number | null | undefined;
+}) {
+  return (
+    <div className="h-72 w-full" data-testid="stack-chart">
+      <ResponsiveContainer width="100%" height="100%">
+        <LineChart data={series} margin={{ top: 10, right: 20, bottom: 24, left: 10 }}>
+          <CartesianGrid stroke="#e7e5e4" />
+          <XAxis
+            dataKey="depth_mm"
+            type="number"
+            domain={[0, 'dataMax']}
+            label={{ value: 'fill depth (mm)', position: 'insideBottom', offset: -12 }}
+          />
+          <YAxis
+            yAxisId="p"
+            label={{ value: 'pressure (kPa)', angle: -90, position: 'insideLeft' }}
+          />
+          <YAxis
+            yAxisId="m"
+            orientation="right"
+            label={{ value: 'margin (–)', angle: 90, position: 'insideRight' }}
+          />
+          <Tooltip />
+          <Legend verticalAlign="top" />
+          <Line
+            yAxisId="p"
+            dataKey="vertical_pressure_kpa"
+            name="bin vertical pressure (kPa)"
+            stroke="#57534e"
+            dot={false}
+            isAnimationActive={false}
+          />
+          <Line
+            yAxisId="p"
+            dataKey="contact_pressure_kpa"
+            name="bottom contact pressure (kPa)"
+            stroke="#2f5f2c"
+            dot={false}
+            isAnimationActive={false}
+          />
+          <Line
+            yAxisId="m"
+            dataKey="margin"
+            name="margin"
+            stroke="#8a4b16"
+            dot={false}
+            isAnimationActive={false}
+          />
+          <ReferenceLine
+            yAxisId="m"
+            y={1}
+            stroke="#b91c1c"
+            strokeDasharray="2 2"
+            label="margin 1"
+          />
+          <ReferenceLine
+            yAxisId="p"
+            x={depthMm}
+            stroke="#57534e"
+            strokeDasharray="4 4"
+            label="this fill"
+          />
+          {safeMm ? (
+            <ReferenceLine
+              yAxisId="p"
+              x={safeMm}
+              stroke="#b91c1c"
+              strokeDasharray="4 4"
+              label="deepest safe"
+            />
+          ) : null}
+        </LineChart>
+      </ResponsiveContainer>
+    </div>
+  );
+}

@@ -1,0 +1,73 @@
+'use client';
+
+import { useEffect, useRef, useState } from 'react';
+
+export interface CheckState<R> {
+  result: R | null;
+  pending: boolean;
+  message: string | null;
+  fieldErrors: Record<string, string[]>;
+}
+
+/**
+ * Runs a check route as the inputs change: debounced, the previous result kept on screen while
+ * the next one computes, stale answers dropped (each request aborts the one before).
+ */
+export function useCheck<R>(endpoint: string, body: Record<string, unknown>, delayMs = 350) {
+  const [state, setState] = useState<CheckState<R>>({
+    result: null,
+    pending: false,
+    message: null,
+    fieldErrors: {},
+  });
+  const controller = useRef<AbortController | null>(null);
+  const key = JSON.stringify(body);
+
+  useEffect(() => {
+    const timer = setTimeout(async () => {
+      controller.current?.abort();
+      const mine = new AbortController();
+      controller.current = mine;
+      setState((s) => ({ ...s, pending: true }));
+      try {
+        const res = await fetch(endpoint, {
+          method: 'POST',
+          headers: { 'content-type': 'application/json' },
+          body: key,
+          signal: mine.signal,
+        });
+        const json = await res.json();
+        if (mine.signal.aborted) return;
+        setState((s) =>
+          res.ok
+            ? { result: json.result as R, pending: false, message: null, fieldErrors: {} }
+            : {
+                ...s,
+                pending: false,
+                message: json.message ?? 'The check failed.',
+                fieldErrors: json.fieldErrors ?? {},
+              },
+        );
+      } catch (error) {
+        if ((error as Error).name === 'AbortError') return;
+        setState((s) => ({
+          ...s,
+          pending: false,
+          message: 'The server could not be reached.',
+          fieldErrors: {},
+        }));
+      }
+    }, delayMs);
+    return () => clearTimeout(timer);
+  }, [endpoint, key, delayMs]);
+
+  return state;
+}
+
+/** Form text → the number the route expects; empty means "use the published value". */
+export function numberOrUndefined(text: string): number | undefined | string {
+  const trimmed = text.trim();
+  if (trimmed === '') return undefined;
+  const n = Number(trimmed);
+  return Number.isFinite(n) ? n : trimmed;
+}
