@@ -1,34 +1,7 @@
+import { OTHER_SOURCES } from './sources-other';
+import { TEMPERATE_SOURCES } from './sources-temperate';
 import type { SeedSource } from './types';
+import { WARM_SOURCES } from './sources-warm';
 
-/** Published sources behind the seeded values (see each `note` for how a value was read). */
-export const SOURCES: SeedSource[] = [
-  {
-    key: 'shahabasi-1979',
-    kind: 'thesis',
-    authors: 'Shahabasi, Y.',
-    year: 1979,
-    title:
-      'Experimental and numerical techniques related to the maximum allowable depth of apples in a bulk storage',
-    venue: 'PhD thesis, Michigan State University',
-    note: 'Read in the abstract.',
-  },
-  {
-    key: 'wang-2024-processes',
-    kind: 'paper',
-    authors: 'Wang, J.; Wang, C.; Wu, J.',
-    year: 2024,
-    title: 'Static bruising of apples measured with pressure-sensitive film',
-    venue: 'Processes 12(3)',
-    pages: '543',
-    note: 'Read in the abstract; title paraphrased from the abstract.',
-  },
-  {
-    key: 'du-2019-asabe',
-    kind: 'paper',
-    authors: 'Du, D.; Wang, J.; Wang, B.; Yao, F.',
-    year: 2019,
-    title: 'Mechanical properties of kiwifruit flesh during ripening',
-    venue: 'ASABE Annual International Meeting, paper 1900242',
-    note: 'Read in the abstract; title paraphrased from the abstract.',
-  },
-];
+/** Published sources behind the seeded values (each `note` says how its values were read). */
+export const SOURCES: SeedSource[] = [...TEMPERATE_SOURCES, ...WARM_SOURCES, ...OTHER_SOURCES];
