@@ -1,0 +1,197 @@
+import 'server-only';
+import { randomUUID } from 'node:crypto';
+import { db } from '@/lib/db';
+import { assertCan, type Actor } from '@/lib/auth/actor';
+import { NotFoundError, ValidationError, type FieldErrors } from '@/lib/errors';
+import { fitCompressionCurve, type CompressionFit, type SampleGeometry } from '@/lib/lab-tests/fit';
+import { parseCompressionCsv, type CurvePoint } from '@/lib/lab-tests/parse-curve';
+import { compressionUploadSchema, geometryOf } from '@/lib/lab-tests/upload-schema';
+import { fieldErrorsOf } from '@/lib/validation/parse';
+import { deleteObject, getObject, putObject } from '@/lib/storage/object-store';
+import { recordAudit } from './audit-trail';
+
+export interface CompressionTestRecord {
+  id: number;
+  cultivar: { id: number; slug: string; name: string; commodityName: string };
+  uploadedBy: { id: number; name: string };
+  fileName: string;
+  rows: number;
+  geometry: SampleGeometry;
+  poisson: number;
+  modulusMpa: number;
+  rSquared: number;
+  fitFromMm: number;
+  fitToMm: number;
+  isDemo: boolean;
+  draftRevisionId: number | null;
+  createdAt: string;
+}
+
+export interface CompressionTestWithData extends CompressionTestRecord {
+  /** the readings and the fit as recomputed from the stored file; null if it cannot be read */
+  points: CurvePoint[] | null;
+  fit: CompressionFit | null;
+}
+
+function testQuery() {
+  return db('compression_tests as t')
+    .join('cultivars as c', 'c.id', 't.cultivar_id')
+    .join('commodities as m', 'm.id', 'c.commodity_id')
+    .join('users as u', 'u.id', 't.uploaded_by')
+    .select('t.*', 'c.slug as c_slug', 'c.name as c_name', 'm.name as m_name', 'u.name as u_name');
+}
+
+function toRecord(r: Record<string, unknown>): CompressionTestRecord {
+  const geometry: SampleGeometry =
+    r.diameter_mm != null
+      ? { kind: 'sphere', diameterMm: Number(r.diameter_mm) }
+      : { kind: 'radii', radiiMm: [Number(r.radius1_mm), Number(r.radius2_mm)] };
+  return {
+    id: Number(r.id),
+    cultivar: {
+      id: Number(r.cultivar_id),
+      slug: String(r.c_slug),
+      name: String(r.c_name),
+      commodityName: String(r.m_name),
+    },
+    uploadedBy: { id: Number(r.uploaded_by), name: String(r.u_name) },
+    fileName: String(r.file_name),
+    rows: Number(r.rows),
+    geometry,
+    poisson: Number(r.poisson),
+    modulusMpa: Number(r.modulus_mpa),
+    rSquared: Number(r.r_squared),
+    fitFromMm: Number(r.fit_from_mm),
+    fitToMm: Number(r.fit_to_mm),
+    isDemo: Boolean(r.is_demo),
+    draftRevisionId: r.draft_revision_id == null ? null : Number(r.draft_revision_id),
+    createdAt: new Date(r.created_at as string).toISOString(),
+  };
+}
+
+/** Every cultivar a test may be uploaded for (published or not), by commodity and name. */
+export async function listCultivarChoices(actor: Actor) {
+  assertCan(actor, 'lab-tests:upload');
+  const rows = await db('cultivars as c')
+    .join('commodities as m', 'm.id', 'c.commodity_id')
+    .orderBy([{ column: 'm.name' }, { column: 'c.name' }])
+    .select('c.slug', 'c.name', 'm.name as commodity');
+  return rows.map((r) => ({ slug: String(r.slug), label: `${r.commodity} — ${r.name}` }));
+}
+
+/** Lab tests, newest first, optionally of one cultivar (404 if that cultivar is unknown). */
+export async function listCompressionTests(actor: Actor, filter: { cultivarSlug?: string } = {}) {
+  assertCan(actor, 'lab-tests:upload');
+  const query = testQuery().orderBy('t.id', 'desc').limit(500);
+  if (filter.cultivarSlug !== undefined) {
+    const cultivar = await db('cultivars').where({ slug: filter.cultivarSlug }).first();
+    if (!cultivar) throw new NotFoundError(`No cultivar "${filter.cultivarSlug.slice(0, 80)}".`);
+    query.where('t.cultivar_id', cultivar.id);
+  }
+  return (await query).map(toRecord);
+}
+
+/** One test with its readings read back from the bucket and the fit recomputed from them. */
+export async function getCompressionTest(
+  actor: Actor,
+  id: number,
+): Promise<CompressionTestWithData> {
+  assertCan(actor, 'lab-tests:upload');
+  const row = await testQuery().where('t.id', id).first();
+  if (!row) throw new NotFoundError('No such lab test.');
+  const record = toRecord(row);
+  try {
+    const object = await getObject(String(row.storage_key));
+    if (!object) return { ...record, points: null, fit: null };
+    const { points } = parseCompressionCsv(object.body);
+    return { ...record, points, fit: fitCompressionCurve(points, record.geometry, record.poisson) };
+  } catch (error) {
+    console.error(`lab test ${id}: the stored file could not be read`, error);
+    return { ...record, points: null, fit: null };
+  }
+}
+
+export interface CompressionUpload {
+  cultivarSlug: string;
+  fileName: string;
+  bytes: Uint8Array;
+  /** the form's text fields: diameterMm or radius1Mm/radius2Mm, poisson */
+  fields: unknown;
+}
+
+/** Field and file checks together, so one answer names every problem. */
+function validateUpload(upload: CompressionUpload) {
+  const errors: FieldErrors = {};
+  const fields = compressionUploadSchema.safeParse(upload.fields);
+  if (!fields.success) Object.assign(errors, fieldErrorsOf(fields.error));
+  let curve: ReturnType<typeof parseCompressionCsv> | null = null;
+  let fileMessage: string | null = null;
+  try {
+    curve = parseCompressionCsv(upload.bytes);
+  } catch (error) {
+    if (!(error instanceof ValidationError)) throw error;
+    fileMessage = error.message;
+    Object.assign(errors, error.fieldErrors);
+  }
+  if (!fields.success || !curve) {
+    throw new ValidationError(fileMessage ?? 'Some fields are not valid.', errors);
+  }
+  const geometry = geometryOf(fields.data);
+  const fit = fitCompressionCurve(curve.points, geometry, fields.data.poisson);
+  return { geometry, poisson: fields.data.poisson, rows: curve.rows, fit };
+}
+
+/**
+ * Validate, fit, store the file and record the test. Nothing is stored on any refusal: the
+ * object is written only after every check, and deleted again if the transaction fails.
+ */
+export async function createCompressionTest(actor: Actor, upload: CompressionUpload) {
+  assertCan(actor, 'lab-tests:upload');
+  const cultivar = await db('cultivars').where({ slug: upload.cultivarSlug }).first();
+  if (!cultivar) throw new NotFoundError(`No cultivar "${upload.cultivarSlug.slice(0, 80)}".`);
+  const { geometry, poisson, rows, fit } = validateUpload(upload);
+  const key = `lab-tests/${Number(cultivar.id)}/${randomUUID()}.csv`;
+  await putObject(key, Buffer.from(upload.bytes), 'text/csv; charset=utf-8');
+  try {
+    const id = await db.transaction(async (trx) => {
+      const [inserted] = await trx('compression_tests')
+        .insert({
+          cultivar_id: cultivar.id,
+          uploaded_by: actor.id,
+          storage_key: key,
+          file_name: upload.fileName,
+          rows,
+          diameter_mm: geometry.kind === 'sphere' ? geometry.diameterMm : null,
+          radius1_mm: geometry.kind === 'radii' ? geometry.radiiMm[0] : null,
+          radius2_mm: geometry.kind === 'radii' ? geometry.radiiMm[1] : null,
+          poisson,
+          modulus_mpa: fit.modulusMpa,
+          r_squared: fit.rSquared,
+          fit_from_mm: fit.fromMm,
+          fit_to_mm: fit.toMm,
+          is_demo: false,
+          created_at: new Date(),
+        })
+        .returning('id');
+      const testId = typeof inserted === 'object' ? Number(inserted.id) : Number(inserted);
+      await recordAudit(trx, {
+        actorId: actor.id,
+        action: 'compression-test.upload',
+        entity: 'compression_test',
+        entityId: testId,
+        detail: {
+          cultivar: upload.cultivarSlug,
+          file: upload.fileName,
+          rows,
+          modulusMpa: Number(fit.modulusMpa.toPrecision(4)),
+          rSquared: Number(fit.rSquared.toFixed(4)),
+        },
+      });
+      return testId;
+    });
+    return { id, modulusMpa: fit.modulusMpa, rSquared: fit.rSquared, fit };
+  } catch (error) {
+    await deleteObject(key).catch((e) => console.error(`could not delete ${key}`, e));
+    throw error;
+  }
+}

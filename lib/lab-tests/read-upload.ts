@@ -1,0 +1,45 @@
+import { PayloadTooLargeError, ValidationError } from '@/lib/errors';
+
+/**
+ * A multipart body read with a hard limit whatever Content-Length said (a chunked upload declares
+ * none), then handed to the platform's multipart parser.
+ */
+export async function readUploadForm(request: Request, limit: number): Promise<FormData> {
+  const chunks: Uint8Array[] = [];
+  let size = 0;
+  if (request.body) {
+    const reader = request.body.getReader();
+    for (;;) {
+      const { done, value } = await reader.read();
+      if (done) break;
+      size += value.byteLength;
+      if (size > limit) {
+        await reader.cancel();
+        throw new PayloadTooLargeError(limit);
+      }
+      chunks.push(value);
+    }
+  }
+  const type = request.headers.get('content-type') ?? '';
+  try {
+    return await new Response(Buffer.concat(chunks), {
+      headers: { 'content-type': type },
+    }).formData();
+  } catch {
+    const message = 'The upload is not a readable multipart form.';
+    throw new ValidationError(message, { _form: [message] });
+  }
+}
+
+/** The uploaded file part and its bytes, or a field error asking for one. */
+export async function uploadedFile(form: FormData, field = 'file') {
+  const file = form.get(field);
+  if (!(file instanceof Blob) || (file.size === 0 && !('name' in file && file.name))) {
+    const message = 'Choose a CSV file to upload.';
+    throw new ValidationError(message, { [field]: [message] });
+  }
+  const name = 'name' in file && typeof file.name === 'string' ? file.name : 'upload.csv';
+  // Control characters are dropped: the name is shown, never used as a storage key.
+  const fileName = name.replace(/[\u0000-\u001f\u007f]/g, '').slice(0, 200) || 'upload.csv';
+  return { fileName, bytes: new Uint8Array(await file.arrayBuffer()) };
+}
