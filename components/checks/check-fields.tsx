@@ -54,6 +54,15 @@ export function MeasureField({
 export interface CultivarOption {
   slug: string;
   label: string;
+  prefill: Record<string, number | undefined>;
+  complete: boolean;
+}
+
+/** The placeholder of a fruit field: the published figure it falls back to, or a prompt. */
+export function publishedHint(option: CultivarOption | undefined, key: string): string {
+  if (!option) return '';
+  const v = option.prefill[key];
+  return v === undefined ? 'none published' : `${Number(v.toPrecision(4))} (published)`;
 }
 
 export function CultivarSelect({

@@ -31,7 +31,7 @@ export function DropCharts({
   return (
     <div className="h-72 w-full" data-testid="drop-chart">
       <ResponsiveContainer width="100%" height="100%">
-        <LineChart data={series} margin={{ top: 10, right: 20, bottom: 24, left: 10 }}>
+        <LineChart data={series} margin={{ top: 10, right: 24, bottom: 24, left: 24 }}>
           <CartesianGrid stroke="#e7e5e4" />
           <XAxis
             dataKey="height_mm"

@@ -3,7 +3,7 @@
 import { useState } from 'react';
 import type { DropCheckResult } from '@/lib/checks/drop';
 import { DROP_SURFACE_KEYS, DROP_SURFACES, type DropSurface } from '@/lib/checks/surfaces';
-import { CultivarSelect, MeasureField, type CultivarOption } from './check-fields';
+import { CultivarSelect, MeasureField, publishedHint, type CultivarOption } from './check-fields';
 import { DropCharts } from './drop-charts';
 import { MarginPanel } from './margin-panel';
 import { CheckWarnings, UsedValues } from './used-values';
@@ -105,7 +105,10 @@ export function DropCheck({
               value={text[key] ?? ''}
               onChange={set(key)}
               errors={fieldErrors[key]}
-              placeholder={cultivar ? 'published' : ''}
+              placeholder={publishedHint(
+                cultivars.find((o) => o.slug === cultivar),
+                key,
+              )}
             />
           ))}
         </fieldset>
@@ -121,6 +124,7 @@ export function DropCheck({
       </form>
       <div className="min-w-0 space-y-5">
         <MarginPanel
+          hasResult={Boolean(result)}
           margin={result?.margin ?? null}
           pending={pending}
           basis={

@@ -11,10 +11,12 @@ export function MarginPanel({
   margin,
   basis,
   pending,
+  hasResult,
 }: {
   margin: { value: number; verdict: Verdict } | null;
   basis: string;
   pending: boolean;
+  hasResult: boolean;
 }) {
   return (
     <div
@@ -33,7 +35,11 @@ export function MarginPanel({
           </p>
         </>
       ) : (
-        <p className="mt-1 text-sm">No margin: a threshold is missing (see the notes).</p>
+        <p className="mt-1 text-sm">
+          {hasResult
+            ? 'No margin: a threshold is missing (see the notes).'
+            : 'Waiting for complete inputs.'}
+        </p>
       )}
       <p className="mt-2 text-xs">{basis}</p>
       <p className="mt-1 text-xs opacity-80">{VERDICT_RULE}</p>

@@ -2,7 +2,7 @@
 
 import { useState } from 'react';
 import type { StackCheckResult } from '@/lib/checks/stack';
-import { CultivarSelect, MeasureField, type CultivarOption } from './check-fields';
+import { CultivarSelect, MeasureField, publishedHint, type CultivarOption } from './check-fields';
 import { MarginPanel } from './margin-panel';
 import { StackCharts } from './stack-charts';
 import { CheckWarnings, UsedValues } from './used-values';
@@ -82,7 +82,10 @@ export function StackCheck({
               value={text[key] ?? ''}
               onChange={set(key)}
               errors={fieldErrors[key]}
-              placeholder={cultivar ? 'published' : ''}
+              placeholder={publishedHint(
+                cultivars.find((o) => o.slug === cultivar),
+                key,
+              )}
             />
           ))}
         </fieldset>
@@ -98,6 +101,7 @@ export function StackCheck({
       </form>
       <div className="min-w-0 space-y-5">
         <MarginPanel
+          hasResult={Boolean(result)}
           margin={result?.margin ?? null}
           pending={pending}
           basis="Static bruise threshold ÷ Hertz contact pressure between two bottom-layer fruit."

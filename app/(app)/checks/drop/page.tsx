@@ -15,7 +15,8 @@ export default async function DropCheckPage({
   const actor = await requirePageActor('checks:run');
   const options = await cultivarOptions(actor);
   const wanted = (await searchParams).cultivar;
-  const initial = options.find((o) => o.slug === wanted)?.slug ?? options[0]?.slug ?? '';
+  const initial =
+    options.find((o) => o.slug === wanted)?.slug ?? options.find((o) => o.complete)?.slug ?? '';
   return (
     <section className="space-y-6">
       <PageTitle title="Drop check">

@@ -1,0 +1,55 @@
+import { expect, test } from './fixtures';
+
+async function customFruit(page: import('@playwright/test').Page) {
+  await page.getByLabel('Cultivar').selectOption('');
+  await page.getByLabel("Young's modulus").fill('3');
+  await page.getByLabel("Poisson's ratio").fill('0.35');
+  await page.getByLabel('Diameter').fill('80');
+  await page.getByLabel('Mass').fill('200');
+  await page.getByLabel('Static bruise threshold').fill('100');
+}
+
+test('drop check: the margin follows the drop height, with figures in their units', async ({
+  page,
+  signInAs,
+}) => {
+  await signInAs('engineer');
+  await page.goto('/checks/drop');
+  await customFruit(page);
+  await page.getByLabel('Drop height').fill('100');
+  const figures = page.getByTestId('drop-figures');
+  // Worked example (Johnson 1985 §11.4, computed): 0.2 kg, R 40 mm, 100 mm onto steel → 607 kPa,
+  // given to three figures: within 0.5 %.
+  await expect(figures).toContainText('Peak pressure');
+  const peak = async () =>
+    Number((await figures.innerText()).match(/Peak pressure\s*([\d.]+) kPa/)![1]);
+  await expect.poll(async () => Math.abs((await peak()) - 607) / 607).toBeLessThan(0.005);
+  const first = await page.getByTestId('margin-value').innerText();
+  await page.getByLabel('Drop height').fill('400');
+  await expect.poll(peak).toBeGreaterThan(700);
+  await expect(page.getByTestId('margin-value')).not.toHaveText(first);
+  await expect(page.getByTestId('safe-heights')).toContainText('Conveyor belt rubber');
+  await page.screenshot({ path: 'tests/artifacts/check-drop.png', fullPage: true });
+  await page.getByLabel('Drop height').fill('-3');
+  await expect(page.getByText('Drop height must be above 0 mm.')).toBeVisible();
+});
+
+test('stack check: deepest safe fill and a chart of pressure with depth', async ({
+  page,
+  signInAs,
+}) => {
+  await signInAs('editor');
+  await page.goto('/checks/stack');
+  await customFruit(page);
+  await expect(page.getByTestId('deepest-safe')).toContainText('mm');
+  await expect(page.getByTestId('stack-chart')).toBeVisible();
+  await page.setViewportSize({ width: 390, height: 844 });
+  expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
+  await page.screenshot({ path: 'tests/artifacts/check-stack-phone.png', fullPage: true });
+});
+
+test('a buyer may not run checks', async ({ page, signInAs }) => {
+  await signInAs('buyer');
+  const response = await page.goto('/checks/drop');
+  expect(response?.status()).toBe(403);
+});
