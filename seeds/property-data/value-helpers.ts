@@ -25,15 +25,16 @@ export const TYPICAL_DEFAULT_NOTE =
 
 /**
  * Janssen's lateral pressure ratio for a bin check, where no source gives one for the fruit:
- * bin design practice commonly takes 0.3–0.6, and the middle is stored.
+ * bin design practice commonly takes 0.3–0.6; 0.4 is stored, the value the stack check assumes
+ * when a cultivar has none, so the two defaults agree.
  */
 export function typicalJanssenK(): SeedValue {
   return {
     quantity: 'lateral_pressure_ratio',
-    value: 0.45,
+    value: 0.4,
     low: 0.3,
     high: 0.6,
-    note: `${TYPICAL_DEFAULT_NOTE} Bin design practice commonly takes K between 0.3 and 0.6; the middle is stored.`,
+    note: `${TYPICAL_DEFAULT_NOTE} Bin design practice commonly takes K between 0.3 and 0.6; 0.4 is stored.`,
     isTypicalDefault: true,
     source: null,
   };
