@@ -18,6 +18,7 @@ const TABLE = {
   'properties:follow': ['admin', 'editor', 'engineer'],
   'checks:run': ['admin', 'editor', 'engineer'],
   'assessments:manage-own': ['admin', 'editor', 'engineer'],
+  'assessments:read-all': ['admin'],
   'editor:use': ['admin', 'editor'],
   'revisions:edit': ['admin', 'editor'],
   'revisions:review': ['admin', 'editor'],

@@ -13,7 +13,7 @@ import { areasFor } from '@/lib/navigation';
  * The whole capability table restated by hand, role by role, from the product's role table
  * (buyer: reads guidance and published summaries; engineer: reads everything published with its
  * history, follows cultivars, runs checks, keeps assessments; editor: all an engineer can plus
- * drafts, reviews, lab-test and photo uploads and inviting buyers; admin: all of that plus users, invitations, mail and the audit log).
+ * drafts, reviews, lab-test and photo uploads and inviting buyers; admin: all of that plus everyone's assessments, users, invitations, mail and the audit log).
  */
 const EXPECTED: Record<Role, Capability[]> = {
   buyer: ['account:manage-own', 'atlas:read', 'properties:read-published'],
@@ -49,6 +49,7 @@ const EXPECTED: Record<Role, Capability[]> = {
     'properties:follow',
     'checks:run',
     'assessments:manage-own',
+    'assessments:read-all',
     'editor:use',
     'revisions:edit',
     'revisions:review',

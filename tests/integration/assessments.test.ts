@@ -1,0 +1,161 @@
+import { beforeAll, describe, expect, it } from 'vitest';
+import { signInAs } from '../support/session';
+import { countRows, freshDatabase, userId } from '../support/db';
+import { ACCOUNTS } from '../support/accounts';
+import { db } from '@/lib/db';
+import type { Actor } from '@/lib/auth/actor';
+import { getActiveActor } from '@/lib/data/users';
+import { createDraft, publishRevision, submitDraft, updateDraft } from '@/lib/data/revisions';
+import * as list from '@/app/api/assessments/route';
+import * as one from '@/app/api/assessments/[id]/route';
+import * as rerun from '@/app/api/assessments/[id]/rerun/route';
+import * as curves from '@/app/api/assessments/[id]/curves/route';
+
+const req = (method: string, body?: unknown) =>
+  new Request('http://tenderline.test/api/assessments', {
+    method,
+    headers: { 'content-type': 'application/json' },
+    body: body === undefined ? undefined : JSON.stringify(body),
+  });
+const ctx = (id: number | string) => ({ params: Promise.resolve({ id: String(id) }) });
+
+let editor: Actor, admin: Actor;
+/** Publish a revision of the test cultivar with this drop threshold onto steel (illustrative). */
+async function publishThreshold(mm: number) {
+  const { id } = await createDraft(editor, 'test-pinned');
+  await updateDraft(editor, id, {
+    values: [
+      { quantity: 'youngs_modulus', variant: 'apparent', value: 3, sourceKey: 'shahabasi-1979' },
+      { quantity: 'poisson_ratio', value: 0.35, sourceKey: 'shahabasi-1979' },
+      { quantity: 'diameter', value: 80, sourceKey: 'shahabasi-1979' },
+      { quantity: 'mass', value: 200, sourceKey: 'shahabasi-1979' },
+      {
+        quantity: 'drop_threshold_height',
+        variant: 'steel',
+        value: mm,
+        sourceKey: 'shahabasi-1979',
+      },
+    ],
+  });
+  await submitDraft(editor, id);
+  await publishRevision(admin, id);
+  return id;
+}
+const SAVE = {
+  check: 'drop',
+  title: 'Transfer drop, line 2',
+  notes: 'Before the new chute',
+  inputs: { cultivar: 'test-pinned', heightMm: 150, surface: 'steel' },
+};
+
+describe('assessments pin their data', () => {
+  let first = 0;
+  let revision1 = 0;
+  beforeAll(async () => {
+    await freshDatabase();
+    const actor = async (e: string) => (await getActiveActor(await userId(e)))!;
+    editor = await actor(ACCOUNTS.editor);
+    admin = await actor(ACCOUNTS.admin);
+    const [commodity] = await db('commodities').select('id').limit(1);
+    await db('cultivars').insert({
+      commodity_id: commodity.id,
+      slug: 'test-pinned',
+      name: 'Test pinned',
+      is_type: false,
+    });
+    revision1 = await publishThreshold(300);
+  });
+
+  it('saves a check with the revision it used, computed on the server', async () => {
+    signInAs(await userId(ACCOUNTS.engineer));
+    const res = await list.POST(req('POST', { ...SAVE, inputs: { ...SAVE.inputs } }), {});
+    expect(res.status).toBe(201);
+    const { assessment } = await res.json();
+    first = assessment.id;
+    expect(assessment.revisionId).toBe(revision1);
+    // 300 mm allowed ÷ 150 mm = 2.
+    expect(assessment.results.margin.value).toBe(2);
+    expect(assessment.newerRevision).toBeNull();
+  });
+
+  it('after a newer revision it keeps its numbers, says so, and a re-run uses the new data', async () => {
+    const revision2 = await publishThreshold(450);
+    const before = (await (await one.GET(req('GET'), ctx(first))).json()).assessment;
+    expect(before.results.margin.value).toBe(2);
+    expect(before.revisionId).toBe(revision1);
+    expect(before.newerRevision.id).toBe(revision2);
+    const res = await rerun.POST(req('POST', {}), ctx(first));
+    expect(res.status).toBe(201);
+    const again = (await res.json()).assessment;
+    expect(again).toMatchObject({
+      version: 2,
+      parentId: first,
+      revisionId: revision2,
+      newerRevision: null,
+    });
+    expect(again.results.margin.value).toBe(3); // 450 ÷ 150
+    // The first is untouched.
+    expect(
+      (await (await one.GET(req('GET'), ctx(first))).json()).assessment.results.margin.value,
+    ).toBe(2);
+  });
+
+  it('exports the curves as CSV with units in the header', async () => {
+    const res = await curves.GET(req('GET'), ctx(first));
+    const lines = (await res.text()).trim().split('\r\n');
+    expect(lines[0]).toBe('height_mm,peak_pressure_kpa,impact_energy_j');
+    expect(lines).toHaveLength(41);
+  });
+
+  it('is private to its owner; an admin sees all; the others are refused', async () => {
+    signInAs(await userId('editor2@kestrelvale.example'));
+    expect((await one.GET(req('GET'), ctx(first))).status).toBe(404);
+    expect((await (await list.GET(req('GET'), {})).json()).assessments).toEqual([]);
+    signInAs(admin.id);
+    expect((await one.GET(req('GET'), ctx(first))).status).toBe(200);
+    signInAs(await userId(ACCOUNTS.buyer));
+    expect((await list.GET(req('GET'), {})).status).toBe(403);
+    signInAs(null);
+    expect((await list.GET(req('GET'), {})).status).toBe(401);
+  });
+
+  it('bad input: 400 with a field message and nothing stored', async () => {
+    signInAs(await userId(ACCOUNTS.engineer));
+    const before = await countRows('assessments');
+    for (const [body, field] of [
+      [{ ...SAVE, title: '' }, 'title'],
+      [{ ...SAVE, check: 'juggle' }, 'check'],
+      [{ ...SAVE, inputs: { ...SAVE.inputs, heightMm: -1 } }, 'heightMm'],
+      [{ ...SAVE, inputs: { cultivar: 'no-such', heightMm: 100, surface: 'steel' } }, 'cultivar'],
+    ] as const) {
+      const res = await list.POST(req('POST', body), {});
+      expect(res.status).toBe(400);
+      expect((await res.json()).fieldErrors[field]).toBeDefined();
+    }
+    expect((await one.GET(req('GET'), ctx('0x1'))).status).toBe(400);
+    expect(await countRows('assessments')).toBe(before);
+  });
+});
+
+describe('who may use assessments (written out)', () => {
+  const EXPECT = { 'signed-out': 401, admin: 201, editor: 201, engineer: 201, buyer: 403 } as const;
+  for (const [who, status] of Object.entries(EXPECT)) {
+    it(`POST /api/assessments as ${who} → ${status}`, async () => {
+      signInAs(who === 'signed-out' ? null : await userId(ACCOUNTS[who as keyof typeof ACCOUNTS]));
+      const body = {
+        check: 'stack',
+        title: 'Bin',
+        inputs: {
+          modulusMpa: 3,
+          poisson: 0.35,
+          diameterMm: 80,
+          massG: 200,
+          binLengthMm: 1000,
+          binWidthMm: 1000,
+          fillDepthMm: 500,
+        },
+      };
+      expect((await list.POST(req('POST', body), {})).status).toBe(status);
+    });
+  }
+});
