@@ -96,7 +96,7 @@ export const CITRUS: SeedCommodity[] = [
             'friction_coefficient',
             'mild steel',
             [0.2, 0.16, 0.19],
-            "Static coefficient. About a third of the 0.45 measured on mild steel for 'Phule Mosambi' (next value), and half of 'Thompson' on galvanised steel: the sources disagree.",
+            "Static coefficient. About a third of the 0.45 measured on mild steel for 'Phule Mosambi' (next value), and under half of 'Thompson' on galvanised steel (0.368): the sources disagree.",
           ),
           {
             quantity: 'friction_coefficient',
