@@ -17,7 +17,7 @@ export interface UnitBodyKey {
   model: BodyModel;
   /** axial radius / equatorial radius (1 = sphere or circular disc); axial = along the squeeze axis */
   aspect: number;
-  /** Poisson's ratio, strictly inside (0, 0.5) */
+  /** Poisson's ratio, in [0, 0.5) */
   poisson: number;
   level: MeshLevel;
 }

@@ -22,11 +22,14 @@ export function requireNonNegative(field: string, value: number): number {
   return value;
 }
 
-/** Poisson's ratio strictly inside (0, 0.5): 0.5 is incompressible and makes the element stiffness singular. */
+/**
+ * Poisson's ratio in [0, 0.5): 0 is a valid (fully compressible) material; 0.5 is incompressible,
+ * where the bulk modulus E/(3(1 − 2ν)) is infinite.
+ */
 export function requirePoisson(field: string, value: number): number {
   requireFinite(field, value);
-  if (value <= 0 || value >= 0.5) {
-    throw new FemInputError(field, `${field} must lie strictly between 0 and 0.5`);
+  if (value < 0 || value >= 0.5) {
+    throw new FemInputError(field, `${field} must be at least 0 and less than 0.5`);
   }
   return value;
 }

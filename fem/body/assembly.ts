@@ -1,4 +1,4 @@
-import { elasticD } from '../elements/elastic-d';
+import { elasticSplit } from '../elements/elastic-d';
 import { Q4Workspace, q4Stiffness } from '../elements/q4-stiffness';
 import { elementCorners, type QuadMesh } from '../mesh/quad-mesh';
 import type { CsrMatrix } from '../solver/csr';
@@ -9,6 +9,7 @@ import { nodeAdjacency, type NodeAdjacency } from './adjacency';
  * Global stiffness K (N/m) of a quad mesh, DOF layout [u_r0, u_z0, u_r1, u_z1, …], as a CSR
  * matrix with its full symmetric pattern (2×2 blocks for every pair of nodes sharing an element).
  * Axisymmetric forces are whole-ring totals (2π included); plane strain is per metre of thickness.
+ * Elements are mean-dilatation quads (see q4Stiffness), free of volumetric locking for ν < 0.5.
  * No constraints are applied here.
  */
 export function assembleStiffness(
@@ -19,15 +20,14 @@ export function assembleStiffness(
 ): CsrMatrix {
   const adj = nodeAdjacency(mesh.nodeR.length, mesh.quads);
   const k = blockPattern(adj);
-  const d = elasticD(model, modulus, poisson);
-  const axi = model === 'axisymmetric';
+  const material = elasticSplit(model, modulus, poisson);
   const ke = new Float64Array(64);
   const xr = new Float64Array(4);
   const xz = new Float64Array(4);
   const ws = new Q4Workspace();
   for (let e = 0; e < mesh.quads.length / 4; e++) {
     elementCorners(mesh, e, xr, xz);
-    q4Stiffness(xr, xz, d, axi, ke, ws);
+    q4Stiffness(xr, xz, material, ke, ws);
     addElement(k, adj, mesh.quads.subarray(4 * e, 4 * e + 4), ke);
   }
   return k;

@@ -9,7 +9,7 @@ export interface ApparentModulusInput {
   travel: readonly number[];
   /** plate force F at each travel, N (≥ 0); same length as `travel` */
   force: readonly number[];
-  /** Poisson's ratio assumed for the flesh, strictly inside (0, 0.5) */
+  /** Poisson's ratio assumed for the flesh, in [0, 0.5) */
   poisson: number;
   /** diameter d of a spherical body, m (> 0); give this or `principalRadii` */
   diameter?: number;

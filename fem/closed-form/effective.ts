@@ -6,7 +6,7 @@ import { requireFiniteResult } from './finite-result';
  * (Johnson, Contact Mechanics, 1985, ch. 4).
  *
  * @param modulus1 Young's modulus of body 1, Pa (> 0)
- * @param poisson1 Poisson's ratio of body 1, strictly inside (0, 0.5)
+ * @param poisson1 Poisson's ratio of body 1, in [0, 0.5)
  * @param modulus2 Young's modulus of body 2, Pa; omit or pass Infinity for a rigid counterface,
  *   which gives E* = E₁/(1 − ν₁²)
  * @param poisson2 Poisson's ratio of body 2; required when `modulus2` is finite, ignored when rigid

@@ -112,7 +112,7 @@ function axisShearOverP0(zeta: number, poisson: number): number {
  *
  * @param peakPressure p₀, Pa (> 0)
  * @param contactRadius a, m (> 0)
- * @param poisson Poisson's ratio of the body examined, strictly inside (0, 0.5)
+ * @param poisson Poisson's ratio of the body examined, in [0, 0.5)
  * @throws FemInputError naming 'peakPressure', 'contactRadius' or 'poisson'
  */
 export function hertzSubsurfaceShear(

@@ -1,6 +1,7 @@
 import { elementCorners, type QuadMesh } from '../mesh/quad-mesh';
 import type { BodyModel, StressSample } from '../types';
-import { elasticD, lameLambda } from './elastic-d';
+import { elasticSplit } from './elastic-d';
+import { Q4Workspace } from './q4-stiffness';
 import { q4Stress } from './q4-stress';
 
 /**
@@ -15,13 +16,12 @@ export function centroidStresses(
   poisson: number,
   u: ArrayLike<number>,
 ): StressSample[] {
-  const d = elasticD(model, modulus, poisson);
-  const lambda = lameLambda(modulus, poisson);
-  const axi = model === 'axisymmetric';
+  const material = elasticSplit(model, modulus, poisson);
   const { quads } = mesh;
   const xr = new Float64Array(4);
   const xz = new Float64Array(4);
   const ue = new Float64Array(8);
+  const ws = new Q4Workspace();
   const out: StressSample[] = [];
   for (let e = 0; e < quads.length / 4; e++) {
     elementCorners(mesh, e, xr, xz);
@@ -30,7 +30,7 @@ export function centroidStresses(
       ue[2 * a] = u[2 * v];
       ue[2 * a + 1] = u[2 * v + 1];
     }
-    out.push(q4Stress(xr, xz, ue, d, axi, lambda, 0, 0));
+    out.push(q4Stress(xr, xz, ue, material, 0, 0, ws));
   }
   return out;
 }

@@ -23,7 +23,7 @@ export interface SqueezeInput {
   axialRadius?: number;
   /** Young's modulus of the flesh, Pa */
   modulus: number;
-  /** Poisson's ratio, strictly inside (0, 0.5) */
+  /** Poisson's ratio, in [0, 0.5) */
   poisson: number;
   /** travel of each pad toward the centre, m (> 0, ≤ 15 % of R_ax) */
   travel: number;

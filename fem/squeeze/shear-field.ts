@@ -1,5 +1,6 @@
 import type { FemBody } from '../body/cache';
-import { elasticD, lameLambda } from '../elements/elastic-d';
+import { elasticSplit, type ElasticSplit } from '../elements/elastic-d';
+import { Q4Workspace } from '../elements/q4-stiffness';
 import { q4Stress } from '../elements/q4-stress';
 import { elementCorners } from '../mesh/quad-mesh';
 
@@ -74,14 +75,11 @@ class UnitStresses {
   private readonly xz = new Float64Array(4);
   private readonly ue = new Float64Array(8);
   private readonly se = new Float64Array(32);
-  private readonly d: Float64Array;
-  private readonly lambda: number;
-  private readonly axi: boolean;
+  private readonly ws = new Q4Workspace();
+  private readonly material: ElasticSplit;
 
   constructor(private readonly body: FemBody) {
-    this.d = elasticD(body.key.model, 1, body.key.poisson);
-    this.lambda = lameLambda(1, body.key.poisson);
-    this.axi = body.key.model === 'axisymmetric';
+    this.material = elasticSplit(body.key.model, 1, body.key.poisson);
   }
 
   /** Fills the matrix for element `e`; returns the centroid (r, z) in m. */
@@ -92,7 +90,7 @@ class UnitStresses {
     for (let c = 0; c < 8; c++) {
       ue.fill(0);
       ue[c] = 1;
-      const q = q4Stress(xr, xz, ue, this.d, this.axi, this.lambda, 0, 0);
+      const q = q4Stress(xr, xz, ue, this.material, 0, 0, this.ws);
       if (c === 0) centroid = { r: q.r, z: q.z };
       [q.srr, q.szz, q.stt, q.srz].forEach((v, k) => (se[k * 8 + c] = v));
     }

@@ -24,8 +24,8 @@ describe('squeeze input checks name the field', () => {
   const cases: [string, Partial<SqueezeInput>, RegExp][] = [
     ['E = 0', { modulus: 0 }, /^modulus: modulus must be greater than zero/],
     ['E < 0', { modulus: -1 }, /^modulus:/],
-    ['ν = 0', { poisson: 0 }, /^poisson: .*between 0 and 0.5/],
-    ['ν = 0.5', { poisson: 0.5 }, /^poisson:/],
+    ['ν < 0', { poisson: -0.1 }, /^poisson: poisson must be at least 0 and less than 0.5/],
+    ['ν = 0.5', { poisson: 0.5 }, /^poisson: poisson must be at least 0 and less than 0.5/],
     ['ν NaN', { poisson: NaN }, /^poisson: poisson must be a finite number/],
     ['radius Infinity', { equatorialRadius: Infinity }, /^equatorialRadius: .*finite/],
     ['axial radius ≤ 0', { axialRadius: 0 }, /^axialRadius:/],
@@ -56,6 +56,10 @@ describe('squeeze input checks name the field', () => {
   ];
   it.each(cases)('%s', (_name, patch, expected) => {
     expect(fieldOf(patch)).toMatch(expected);
+  });
+
+  it('accepts ν = 0, a valid fully compressible material', () => {
+    expect(runSqueeze({ ...base, poisson: 0 }).final.force).toBeGreaterThan(0);
   });
 
   it('sweep refuses an empty diameter list', () => {
