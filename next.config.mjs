@@ -9,6 +9,7 @@ const nextConfig = {
     'mailparser',
     'sharp',
     'rate-limiter-flexible',
+    '@react-pdf/renderer',
   ],
   // Enables forbidden() and app/forbidden.tsx for the 403 page.
   experimental: { authInterrupts: true },

@@ -6,6 +6,7 @@ import { DROP_SURFACE_KEYS, DROP_SURFACES, type DropSurface } from '@/lib/checks
 import { CultivarSelect, MeasureField, publishedHint, type CultivarOption } from './check-fields';
 import { DropCharts } from './drop-charts';
 import { MarginPanel } from './margin-panel';
+import { SaveAssessment } from './save-assessment';
 import { CheckWarnings, UsedValues } from './used-values';
 import { numberOrUndefined, useCheck } from './use-check';
 
@@ -149,6 +150,7 @@ export function DropCheck({
             ]}
           />
         ) : null}
+        <SaveAssessment check="drop" inputs={body} disabled={!result} />
       </div>
     </div>
   );

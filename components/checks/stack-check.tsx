@@ -4,6 +4,7 @@ import { useState } from 'react';
 import type { StackCheckResult } from '@/lib/checks/stack';
 import { CultivarSelect, MeasureField, publishedHint, type CultivarOption } from './check-fields';
 import { MarginPanel } from './margin-panel';
+import { SaveAssessment } from './save-assessment';
 import { StackCharts } from './stack-charts';
 import { CheckWarnings, UsedValues } from './used-values';
 import { numberOrUndefined, useCheck } from './use-check';
@@ -155,6 +156,7 @@ export function StackCheck({
             ]}
           />
         ) : null}
+        <SaveAssessment check="stack" inputs={body} disabled={!result} />
       </div>
     </div>
   );

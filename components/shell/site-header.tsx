@@ -1,12 +1,13 @@
 import Link from 'next/link';
 import type { Actor } from '@/lib/auth/actor';
 import { areasFor } from '@/lib/navigation';
+import { SearchBox } from '@/components/search/search-box';
 import { SignOutButton } from './sign-out-button';
 
 export function SiteHeader({ actor }: { actor: Actor }) {
   const areas = areasFor(actor.role);
   return (
-    <header className="bg-leaf-700 text-white">
+    <header className="bg-leaf-700 text-white print:hidden">
       <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-6 gap-y-2 px-4 py-3">
         <Link href="/" className="text-lg font-semibold tracking-tight">
           Tenderline
@@ -22,6 +23,7 @@ export function SiteHeader({ actor }: { actor: Actor }) {
             </Link>
           ))}
         </nav>
+        <SearchBox />
         <div className="ml-auto flex items-center gap-2 text-sm">
           <Link
             href="/account"

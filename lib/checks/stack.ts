@@ -117,6 +117,9 @@ export async function runStackCheck(actor: Actor, raw: unknown) {
       bulk_density_kg_m3: bulk,
       wall_friction: wall,
       lateral_pressure_ratio: ratio,
+      fill_depth_mm: input.fillDepthMm,
+      bin_length_mm: input.binLengthMm,
+      bin_width_mm: input.binWidthMm,
     },
     bottom: {
       vertical_pressure_kpa: round(bottom.verticalPressure / 1000),

@@ -10,6 +10,7 @@ import * as list from '@/app/api/assessments/route';
 import * as one from '@/app/api/assessments/[id]/route';
 import * as rerun from '@/app/api/assessments/[id]/rerun/route';
 import * as curves from '@/app/api/assessments/[id]/curves/route';
+import * as report from '@/app/api/assessments/[id]/report/route';
 
 const req = (method: string, body?: unknown) =>
   new Request('http://tenderline.test/api/assessments', {
@@ -105,6 +106,14 @@ describe('assessments pin their data', () => {
     const lines = (await res.text()).trim().split('\r\n');
     expect(lines[0]).toBe('height_mm,peak_pressure_kpa,impact_energy_j');
     expect(lines).toHaveLength(41);
+  });
+
+  it('renders the report as a PDF on the server', async () => {
+    const res = await report.GET(req('GET'), ctx(first));
+    expect(res.headers.get('content-type')).toBe('application/pdf');
+    const bytes = Buffer.from(await res.arrayBuffer());
+    expect(bytes.subarray(0, 5).toString()).toBe('%PDF-');
+    expect(bytes.length).toBeGreaterThan(2000);
   });
 
   it('is private to its owner; an admin sees all; the others are refused', async () => {

@@ -1,0 +1,94 @@
+import Link from 'next/link';
+import { notFound } from 'next/navigation';
+import { ReportActions } from '@/components/assessments/report-actions';
+import { ReportResults } from '@/components/assessments/report-results';
+import { MarginPanel } from '@/components/checks/margin-panel';
+import { CautionNote } from '@/components/shell/caution-note';
+import { PageTitle } from '@/components/ui/page-title';
+import { requirePageActor } from '@/lib/auth/session';
+import { ASSUMPTIONS } from '@/lib/checks/assumptions';
+import { getAssessment } from '@/lib/data/assessments';
+import { NotFoundError, ValidationError } from '@/lib/errors';
+import { titleFor } from '@/lib/page-title';
+import { parseId } from '@/lib/validation/id';
+
+export const generateMetadata = titleFor('assessments:manage-own', 'Assessment report');
+
+async function load(id: string) {
+  const actor = await requirePageActor('assessments:manage-own');
+  try {
+    return await getAssessment(actor, parseId(id));
+  } catch (error) {
+    if (error instanceof NotFoundError || error instanceof ValidationError) notFound();
+    throw error;
+  }
+}
+
+export default async function AssessmentReport({ params }: { params: Promise<{ id: string }> }) {
+  const a = await load((await params).id);
+  const margin =
+    (
+      a.results as {
+        margin?: {
+          value: number;
+          verdict: 'comfortable' | 'tight' | 'bruise risk';
+          basis: string;
+        } | null;
+      }
+    ).margin ?? null;
+  return (
+    <article className="space-y-6" data-testid="assessment-report">
+      <PageTitle title={a.title}>
+        {a.check} check · version {a.version} · saved {new Date(a.createdAt).toUTCString()} by{' '}
+        {a.ownerName}
+        {a.parentId ? (
+          <>
+            {' '}
+            · re-run of{' '}
+            <Link href={`/assessments/${a.parentId}`} className="underline">
+              assessment {a.parentId}
+            </Link>
+          </>
+        ) : null}
+      </PageTitle>
+      <div className="space-y-1 text-sm" data-testid="pinned-data">
+        {a.cultivarSlug ? (
+          <p>
+            Data:{' '}
+            <Link href={`/properties/${a.cultivarSlug}`} className="underline">
+              {a.cultivarName}
+            </Link>
+            , property revision <span className="num">{a.revisionNumber}</span> (id {a.revisionId}).
+          </p>
+        ) : (
+          <p>Data: values entered by hand (no cultivar).</p>
+        )}
+        {a.newerRevision ? (
+          <p className="rounded-md bg-amber-50 px-3 py-2 text-amber-900" data-testid="newer-data">
+            Revision {a.newerRevision.number} of this cultivar has been published since. These
+            figures are the ones computed with revision {a.revisionNumber}; re-run to see them with
+            the newer data (the re-run is saved beside this one).
+          </p>
+        ) : null}
+        {a.notes ? <p className="whitespace-pre-wrap text-stone-700">{a.notes}</p> : null}
+      </div>
+      <ReportActions id={a.id} canRerun={Boolean(a.newerRevision)} />
+      <MarginPanel
+        hasResult
+        margin={margin}
+        pending={false}
+        basis={
+          margin?.basis === 'dynamic'
+            ? 'Published dynamic threshold ÷ this drop.'
+            : 'Static bruise threshold ÷ contact pressure.'
+        }
+      />
+      <ReportResults check={a.check} results={a.results} />
+      <section className="space-y-1 text-sm text-stone-700">
+        <h2 className="font-semibold">Assumptions</h2>
+        <p>{ASSUMPTIONS[a.check]}</p>
+      </section>
+      <CautionNote machinery />
+    </article>
+  );
+}

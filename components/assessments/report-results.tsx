@@ -1,0 +1,98 @@
+import { DropCharts } from '@/components/checks/drop-charts';
+import { StackCharts } from '@/components/checks/stack-charts';
+import { CheckWarnings, UsedValues, type UsedValueView } from '@/components/checks/used-values';
+import type { DropCheckResult } from '@/lib/checks/drop';
+import type { StackCheckResult } from '@/lib/checks/stack';
+
+type Used = Record<string, UsedValueView | null | number | string>;
+const LABELS: Record<string, string> = {
+  modulus_mpa: "Young's modulus",
+  poisson_ratio: "Poisson's ratio",
+  diameter_mm: 'Diameter',
+  mass_g: 'Mass',
+  static_bruise_threshold_kpa: 'Static bruise threshold',
+  bulk_density_kg_m3: 'Bulk density',
+  wall_friction: 'Wall friction',
+  lateral_pressure_ratio: 'Lateral pressure ratio',
+};
+
+function usedRows(used: Used): [string, UsedValueView | null][] {
+  return Object.entries(LABELS)
+    .filter(([key]) => key in used)
+    .map(([key, label]) => [label, used[key] as UsedValueView | null]);
+}
+
+function Figures({ rows }: { rows: [string, string][] }) {
+  return (
+    <dl className="grid grid-cols-2 gap-3 text-sm sm:grid-cols-4">
+      {rows.map(([k, v]) => (
+        <div key={k} className="rounded-md border border-stone-200 bg-white p-2">
+          <dt className="text-xs text-stone-600">{k}</dt>
+          <dd className="num">{v}</dd>
+        </div>
+      ))}
+    </dl>
+  );
+}
+
+/** The saved results of a check exactly as they were computed, with their charts. */
+export function ReportResults({ check, results }: { check: string; results: unknown }) {
+  if (check === 'drop') {
+    const r = results as DropCheckResult;
+    const i = r.impact;
+    return (
+      <div className="space-y-4">
+        <CheckWarnings warnings={r.warnings} />
+        <Figures
+          rows={[
+            ['Drop height', `${r.inputs_used.height_mm} mm onto ${r.inputs_used.surface}`],
+            ['Impact energy', `${i.impact_energy_j} J`],
+            ['Peak force', `${i.peak_force_n} N`],
+            ['Peak pressure', `${i.peak_pressure_kpa} kPa`],
+            ['Contact radius', `${i.contact_radius_mm} mm`],
+            ['Contact time', `${i.contact_time_ms} ms`],
+            ['Impact speed', `${i.impact_velocity_m_s} m/s`],
+            ['Static margin (stricter)', r.static ? String(r.static.margin) : '—'],
+          ]}
+        />
+        <DropCharts
+          series={r.series}
+          heightMm={r.inputs_used.height_mm}
+          thresholdKpa={r.static?.threshold_kpa ?? null}
+        />
+        <UsedValues rows={usedRows(r.inputs_used as unknown as Used)} />
+      </div>
+    );
+  }
+  const r = results as StackCheckResult;
+  return (
+    <div className="space-y-4">
+      <CheckWarnings warnings={r.warnings} />
+      <Figures
+        rows={[
+          [
+            'Bin',
+            `${r.inputs_used.bin_length_mm} × ${r.inputs_used.bin_width_mm} mm, filled ${r.inputs_used.fill_depth_mm} mm`,
+          ],
+          ['Bin pressure at the bottom', `${r.bottom.vertical_pressure_kpa} kPa`],
+          ['Load on one contact', `${r.bottom.contact_force_n} N`],
+          ['Contact pressure', `${r.bottom.contact_pressure_kpa} kPa`],
+          [
+            'Deepest safe fill',
+            r.deepest_safe_fill_mm === null
+              ? 'any depth'
+              : r.deepest_safe_fill_mm === undefined
+                ? 'needs a threshold'
+                : `${r.deepest_safe_fill_mm} mm`,
+          ],
+        ]}
+      />
+      <StackCharts
+        series={r.series}
+        depthMm={r.inputs_used.fill_depth_mm}
+        safeMm={r.deepest_safe_fill_mm}
+      />
+      <UsedValues rows={usedRows(r.inputs_used as unknown as Used)} />
+    </div>
+  );
+}
