@@ -1,0 +1,36 @@
+import 'server-only';
+import type { Actor } from '@/lib/auth/actor';
+import { getCultivar, type CommodityRef } from '@/lib/data/cultivars';
+import type { SourceRef } from '@/lib/data/property-rows';
+import type { Article } from './articles';
+import { cardRows, type CardRow } from './card-rows';
+import { getAtlasArticle } from './entries';
+import { getSourcesByKeys } from './sources';
+
+export interface HandlingSheet {
+  article: Article;
+  commodity: CommodityRef;
+  cultivars: { slug: string; name: string; revision: number | null; rows: CardRow[] }[];
+  /** The article's sources, then those of the values shown, each once. */
+  sources: SourceRef[];
+}
+
+/** Everything the printable sheet and its PDF show, read fresh; null when there is no article. */
+export async function getHandlingSheet(actor: Actor, slug: string): Promise<HandlingSheet | null> {
+  const found = await getAtlasArticle(actor, slug);
+  if (!found) return null;
+  const records = await Promise.all(
+    found.article.frontmatter.keyCultivars.map((c) => getCultivar(actor, c)),
+  );
+  const cultivars = records.map((r) => ({
+    slug: r.slug,
+    name: r.name,
+    revision: r.published?.number ?? null,
+    rows: cardRows(r),
+  }));
+  const valueKeys = cultivars.flatMap((c) =>
+    c.rows.flatMap((r) => (r.sourceKey ? [r.sourceKey] : [])),
+  );
+  const keys = [...new Set([...found.article.sourceKeys, ...valueKeys])];
+  return { ...found, cultivars, sources: await getSourcesByKeys(actor, keys) };
+}
