@@ -10,6 +10,7 @@ const nextConfig = {
     'sharp',
     'rate-limiter-flexible',
     '@react-pdf/renderer',
+    'piscina',
   ],
   // Enables forbidden() and app/forbidden.tsx for the 403 page.
   experimental: { authInterrupts: true },
