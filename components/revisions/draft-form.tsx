@@ -11,6 +11,7 @@ import {
   type ValueField,
   type ValueFields,
 } from '@/lib/validation/revision-form';
+import { ErrorSummary } from './error-summary';
 import type { SourceChoice } from './source-select';
 import { ValueRow } from './value-row';
 
@@ -105,6 +106,7 @@ export function DraftForm({
         </p>
       </div>
       <FormMessage tone={state.ok ? 'success' : 'error'} message={state.message} />
+      <ErrorSummary errors={rowErrors} />
       <div className="flex flex-wrap gap-3">
         <Button type="submit" name="intent" value="save" disabled={pending}>
           {pending ? 'Saving…' : 'Save'}

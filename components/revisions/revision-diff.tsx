@@ -31,7 +31,7 @@ export function RevisionDiff({ rows, baseLabel }: { rows: DiffRow[]; baseLabel: 
       <p className="mb-2 text-sm text-stone-600">
         {changed === 0
           ? `No value differs from ${baseLabel}.`
-          : `${changed} of ${rows.length} ${rows.length === 1 ? 'slot differs' : 'slots differ'} from ${baseLabel}.`}
+          : `${changed} of ${rows.length} ${rows.length === 1 ? 'quantity' : 'quantities'} ${changed === 1 ? 'differs' : 'differ'} from ${baseLabel}.`}
       </p>
       <div className="rounded-lg border border-stone-200 bg-white">
         <div
@@ -46,7 +46,7 @@ export function RevisionDiff({ rows, baseLabel }: { rows: DiffRow[]; baseLabel: 
           {rows.map((r) => (
             <li
               key={`${r.quantity}-${r.variant}`}
-              className={`grid gap-1 border-t border-stone-200 px-3 py-2 text-sm first:border-t-0 md:gap-3 md:first:border-t ${COLUMNS}`}
+              className={`grid gap-1 border-t border-stone-200 px-3 py-2 text-sm first:border-t-0 md:gap-3 md:first:border-t ${COLUMNS} ${r.change === 'same' ? '' : 'bg-amber-50/40'}`}
               data-testid="diff-row"
               data-change={r.change}
             >

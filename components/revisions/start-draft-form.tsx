@@ -21,7 +21,7 @@ export function StartDraftForm({ cultivars }: { cultivars: CultivarChoice[] }) {
   return (
     <form
       action={action}
-      className="flex max-w-xl flex-wrap items-end gap-3"
+      className="flex max-w-xl flex-wrap items-start gap-x-3"
       data-testid="start-draft-form"
     >
       <div className="min-w-0 flex-1 basis-60">
@@ -46,7 +46,7 @@ export function StartDraftForm({ cultivars }: { cultivars: CultivarChoice[] }) {
           ))}
         </SelectField>
       </div>
-      <Button type="submit" disabled={pending} className="mb-5">
+      <Button type="submit" disabled={pending} className="mt-6">
         {pending ? 'Starting…' : 'Start a draft'}
       </Button>
       <div className="basis-full">

@@ -10,25 +10,22 @@ import {
   type Quantity,
 } from '@/lib/properties/quantities';
 import { fieldName, type ValueField, type ValueFields } from '@/lib/validation/revision-form';
+import { FIELD_LABELS } from './field-labels';
 import { SelectField } from './select-field';
 import { SourceSelect, type SourceChoice } from './source-select';
 
 const unitOf = (q: Quantity | null) =>
   q === null ? '' : QUANTITIES[q].unit === '–' ? ' (no unit)' : ` (${QUANTITIES[q].unit})`;
 
-const NUMBERS: [ValueField, string][] = [
-  ['value', 'Value'],
-  ['low', 'Low'],
-  ['high', 'High'],
-  ['sd', 'Std. dev.'],
-];
-const CONDITIONS: [ValueField, string, number][] = [
-  ['method', 'Method', 300],
-  ['ripeness', 'Ripeness', 120],
-  ['temperature', 'Temperature', 60],
-  ['storage', 'Storage', 200],
-  ['loadingRate', 'Loading rate', 60],
-  ['probe', 'Probe or plate', 120],
+const NUMBERS: ValueField[] = ['value', 'low', 'high', 'sd'];
+/** Condition fields and their length limits (as the schema has them). */
+const CONDITIONS: [ValueField, number][] = [
+  ['method', 300],
+  ['ripeness', 120],
+  ['temperature', 60],
+  ['storage', 200],
+  ['loadingRate', 60],
+  ['probe', 120],
 ];
 
 interface Props {
@@ -63,7 +60,7 @@ export function ValueRow({ index, fields, errors, sources, onChange, onRemove }:
       </legend>
       <div className="grid gap-x-3 sm:grid-cols-2">
         <SelectField
-          label="Quantity"
+          label={FIELD_LABELS.quantity}
           {...text('quantity')}
           onChange={(e) => {
             const next = e.target.value;
@@ -81,7 +78,7 @@ export function ValueRow({ index, fields, errors, sources, onChange, onRemove }:
             </option>
           ))}
         </SelectField>
-        <SelectField label="Variant or surface" {...text('variant')}>
+        <SelectField label={FIELD_LABELS.variant} {...text('variant')}>
           {(quantity ? variantsOf(quantity) : ['']).map((v) => (
             <option key={v} value={v}>
               {v || '(none)'}
@@ -90,17 +87,22 @@ export function ValueRow({ index, fields, errors, sources, onChange, onRemove }:
         </SelectField>
       </div>
       <div className="grid grid-cols-2 gap-x-3 sm:grid-cols-5">
-        {NUMBERS.map(([f, label]) => (
-          <Field key={f} label={`${label}${unitOf(quantity)}`} inputMode="decimal" {...text(f)} />
+        {NUMBERS.map((f) => (
+          <Field
+            key={f}
+            label={`${FIELD_LABELS[f]}${unitOf(quantity)}`}
+            inputMode="decimal"
+            {...text(f)}
+          />
         ))}
-        <Field label="Samples (n)" inputMode="numeric" {...text('samples')} />
+        <Field label={FIELD_LABELS.samples} inputMode="numeric" {...text('samples')} />
       </div>
       <div className="grid gap-x-3 sm:grid-cols-2 lg:grid-cols-3">
-        {CONDITIONS.map(([f, label, max]) => (
-          <Field key={f} label={label} maxLength={max} {...text(f)} />
+        {CONDITIONS.map(([f, max]) => (
+          <Field key={f} label={FIELD_LABELS[f]} maxLength={max} {...text(f)} />
         ))}
       </div>
-      <Field label="Note" maxLength={1000} {...text('note')} />
+      <Field label={FIELD_LABELS.note} maxLength={1000} {...text('note')} />
       <SourceSelect
         name={name('sourceKey')}
         value={fields.sourceKey}

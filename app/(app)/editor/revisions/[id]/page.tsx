@@ -84,11 +84,6 @@ export default async function RevisionPage({ params }: { params: Promise<{ id: s
         </Block>
       ) : (
         <>
-          {mode === 'review' ? (
-            <Block title="Your review">
-              <ReviewPanel revisionId={r.id} />
-            </Block>
-          ) : null}
           {mode === 'waiting' ? (
             <p
               className="mt-4 rounded-md border border-amber-200 bg-amber-50 px-3 py-2 text-sm text-amber-900"
@@ -100,6 +95,11 @@ export default async function RevisionPage({ params }: { params: Promise<{ id: s
           <Block title={`Changes against ${baseLabel}`}>
             <RevisionDiff rows={diff} baseLabel={baseLabel} />
           </Block>
+          {mode === 'review' ? (
+            <Block title="Your review">
+              <ReviewPanel revisionId={r.id} />
+            </Block>
+          ) : null}
           <Block title="Values">
             <ValueList values={r.values} />
           </Block>
