@@ -105,3 +105,14 @@ export {
   type ShearField,
   type ShearPeak,
 } from './squeeze/shear-field';
+
+// Slip map at the grip (fem/squeeze/slip-*.ts) and the probability of bruising
+// (fem/probability/): both run the squeeze only through the exports above.
+export {
+  ciavarellaJager,
+  type ContactHistory,
+  type NormalContactState,
+  type SlipMap,
+  type SlipNode,
+} from './squeeze/slip-superposition';
+export { slipMapAtGrip, slipMapAtTravel, type GripSlipMap } from './squeeze/slip-map';
