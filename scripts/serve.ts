@@ -6,6 +6,7 @@ import knex from 'knex';
 import { config, knexEnvironment } from '../knexfile';
 import { startMailCatcher } from '../lib/mail/catcher';
 import { startLocalBucket } from './local-bucket';
+import { seedDemoPhotos } from './seed-demo-photos';
 
 export async function serve(options: {
   appUrl: string;
@@ -24,6 +25,13 @@ export async function serve(options: {
     ? null
     : await startLocalBucket({ ...options.bucket, bucket: bucketName });
   if (bucket) console.log(`local bucket ${bucketName} on 127.0.0.1:${bucket.port}`);
+  try {
+    const endpoint = bucket ? `http://127.0.0.1:${bucket.port}` : process.env.S3_ENDPOINT!;
+    const added = await seedDemoPhotos(db, { endpoint, bucket: bucketName });
+    if (added) console.log(`demo photos: ${added} drawings stored`);
+  } catch (error) {
+    console.warn(`demo photos not stored: ${(error as Error).message}`);
+  }
   const app = spawn(process.execPath, ['scripts/server.mjs'], {
     stdio: 'inherit',
     env: {
