@@ -44,6 +44,15 @@ export function hertzCsv(c: CurveInputs): string {
   return lines.join('\n') + '\n';
 }
 
+/** Invented inputs for the synthetic curve, not data: a 70 mm fruit, E = 2.5 MPa, ν = 0.35. */
+export const CURVE: CurveInputs = {
+  modulusPa: 2.5e6,
+  diameterM: 0.07,
+  poisson: 0.35,
+  stepMm: 0.04,
+  steps: 150,
+};
+
 /** A small valid curve with one row replaced (row numbers count the header as row 1). */
 export function csvWithRow(row: number, line: string, header = 'displacement_mm,force_n'): string {
   const lines = [header];
