@@ -4,10 +4,13 @@ import fs from 'node:fs';
 import path from 'node:path';
 import knex from 'knex';
 
-const file = path.resolve('data/e2e.sqlite');
+// One database and bucket folder per port, so two browser runs on different ports never share.
+const port = Number(process.env.E2E_PORT ?? 3100);
+const file = path.resolve(`data/e2e-${port}.sqlite`);
+const bucketDir = `data/e2e-${port}-s3`;
 fs.mkdirSync(path.dirname(file), { recursive: true });
-fs.rmSync(file, { force: true });
-fs.rmSync('data/e2e-s3', { recursive: true, force: true });
+for (const suffix of ['', '-wal', '-shm']) fs.rmSync(file + suffix, { force: true });
+fs.rmSync(bucketDir, { recursive: true, force: true });
 process.env.KNEX_ENV = 'development';
 process.env.DATABASE_FILE = file;
 
@@ -18,11 +21,10 @@ await db.seed.run();
 await db.destroy();
 
 const { serve } = await import('./serve');
-const port = Number(process.env.E2E_PORT ?? 3100);
 await serve({
   appUrl: `http://127.0.0.1:${port}`,
   smtpPort: 0,
-  bucket: { port: 0, directory: 'data/e2e-s3' },
+  bucket: { port: 0, directory: bucketDir },
   env: {
     KNEX_ENV: 'development',
     DATABASE_FILE: file,

@@ -1,3 +1,5 @@
+import { Fragment, type ReactNode } from 'react';
+import { Measure } from '@/components/units/measure';
 import { DropCharts } from '@/components/checks/drop-charts';
 import { StackCharts } from '@/components/checks/stack-charts';
 import { CheckWarnings, UsedValues, type UsedValueView } from '@/components/checks/used-values';
@@ -22,7 +24,7 @@ function usedRows(used: Used): [string, UsedValueView | null][] {
     .map(([key, label]) => [label, used[key] as UsedValueView | null]);
 }
 
-function Figures({ rows }: { rows: [string, string][] }) {
+function Figures({ rows }: { rows: [string, ReactNode][] }) {
   return (
     <dl className="grid grid-cols-2 gap-3 text-sm sm:grid-cols-4">
       {rows.map(([k, v]) => (
@@ -45,13 +47,18 @@ export function ReportResults({ check, results }: { check: string; results: unkn
         <CheckWarnings warnings={r.warnings} />
         <Figures
           rows={[
-            ['Drop height', `${r.inputs_used.height_mm} mm onto ${r.inputs_used.surface}`],
-            ['Impact energy', `${i.impact_energy_j} J`],
-            ['Peak force', `${i.peak_force_n} N`],
-            ['Peak pressure', `${i.peak_pressure_kpa} kPa`],
-            ['Contact radius', `${i.contact_radius_mm} mm`],
-            ['Contact time', `${i.contact_time_ms} ms`],
-            ['Impact speed', `${i.impact_velocity_m_s} m/s`],
+            [
+              'Drop height',
+              <Fragment key="f10">
+                <Measure value={r.inputs_used.height_mm} unit="mm" /> onto {r.inputs_used.surface}
+              </Fragment>,
+            ],
+            ['Impact energy', <Measure key="m1" value={i.impact_energy_j} unit="J" />],
+            ['Peak force', <Measure key="m2" value={i.peak_force_n} unit="N" />],
+            ['Peak pressure', <Measure key="m3" value={i.peak_pressure_kpa} unit="kPa" />],
+            ['Contact radius', <Measure key="m4" value={i.contact_radius_mm} unit="mm" />],
+            ['Contact time', <Measure key="m5" value={i.contact_time_ms} unit="ms" />],
+            ['Impact speed', <Measure key="m6" value={i.impact_velocity_m_s} unit="m/s" />],
             ['Static margin (stricter)', r.static ? String(r.static.margin) : '—'],
           ]}
         />
@@ -72,18 +79,30 @@ export function ReportResults({ check, results }: { check: string; results: unkn
         rows={[
           [
             'Bin',
-            `${r.inputs_used.bin_length_mm} × ${r.inputs_used.bin_width_mm} mm, filled ${r.inputs_used.fill_depth_mm} mm`,
+            <Fragment key="f11">
+              <Measure value={r.inputs_used.bin_length_mm} unit="mm" /> ×{' '}
+              <Measure value={r.inputs_used.bin_width_mm} unit="mm" />, filled{' '}
+              <Measure value={r.inputs_used.fill_depth_mm} unit="mm" />
+            </Fragment>,
           ],
-          ['Bin pressure at the bottom', `${r.bottom.vertical_pressure_kpa} kPa`],
-          ['Load on one contact', `${r.bottom.contact_force_n} N`],
-          ['Contact pressure', `${r.bottom.contact_pressure_kpa} kPa`],
+          [
+            'Bin pressure at the bottom',
+            <Measure key="m7" value={r.bottom.vertical_pressure_kpa} unit="kPa" />,
+          ],
+          ['Load on one contact', <Measure key="m8" value={r.bottom.contact_force_n} unit="N" />],
+          [
+            'Contact pressure',
+            <Measure key="m9" value={r.bottom.contact_pressure_kpa} unit="kPa" />,
+          ],
           [
             'Deepest safe fill',
-            r.deepest_safe_fill_mm === null
-              ? 'any depth'
-              : r.deepest_safe_fill_mm === undefined
-                ? 'needs a threshold'
-                : `${r.deepest_safe_fill_mm} mm`,
+            r.deepest_safe_fill_mm === null ? (
+              'any depth'
+            ) : r.deepest_safe_fill_mm === undefined ? (
+              'needs a threshold'
+            ) : (
+              <Measure value={r.deepest_safe_fill_mm} unit="mm" />
+            ),
           ],
         ]}
       />

@@ -1,6 +1,7 @@
 'use client';
 
 import { useId } from 'react';
+import { useUnits } from '@/components/units/units-provider';
 
 /** A number input with its unit beside it and its error below, announced politely. */
 export function MeasureField({
@@ -21,6 +22,7 @@ export function MeasureField({
   hint?: string;
 }) {
   const id = useId();
+  const units = useUnits();
   const describedBy = `${id}-note`;
   return (
     <div className="space-y-1">
@@ -38,7 +40,7 @@ export function MeasureField({
           aria-describedby={describedBy}
           className="num w-32 rounded-md border border-stone-300 bg-white px-2 py-1 text-sm aria-[invalid=true]:border-red-600"
         />
-        <span className="text-sm text-stone-600">{unit}</span>
+        <span className="text-sm text-stone-600">{units.unit(unit)}</span>
       </div>
       <p id={describedBy} aria-live="polite" className="text-xs">
         {errors?.length ? (
@@ -59,10 +61,14 @@ export interface CultivarOption {
 }
 
 /** The placeholder of a fruit field: the published figure it falls back to, or a prompt. */
-export function publishedHint(option: CultivarOption | undefined, key: string): string {
+export function publishedHint(
+  option: CultivarOption | undefined,
+  key: string,
+  toDisplay: (value: number) => number,
+): string {
   if (!option) return '';
   const v = option.prefill[key];
-  return v === undefined ? 'none published' : `${Number(v.toPrecision(4))} (published)`;
+  return v === undefined ? 'none published' : `${Number(toDisplay(v).toPrecision(4))} (published)`;
 }
 
 export function CultivarSelect({

@@ -11,6 +11,7 @@ import {
   XAxis,
   YAxis,
 } from 'recharts';
+import { useUnits } from '@/components/units/units-provider';
 
 interface Point {
   height_mm: number;
@@ -28,32 +29,46 @@ export function DropCharts({
   heightMm: number;
   thresholdKpa: number | null;
 }) {
+  const u = useUnits();
+  const data = series.map((p) => ({
+    height_mm: u.toDisplay(p.height_mm, 'mm'),
+    peak_pressure_kpa: u.toDisplay(p.peak_pressure_kpa, 'kPa'),
+    impact_energy_j: u.toDisplay(p.impact_energy_j, 'J'),
+  }));
   return (
     <div className="h-72 w-full" data-testid="drop-chart">
       <ResponsiveContainer width="100%" height="100%">
-        <LineChart data={series} margin={{ top: 10, right: 24, bottom: 24, left: 24 }}>
+        <LineChart data={data} margin={{ top: 10, right: 24, bottom: 24, left: 24 }}>
           <CartesianGrid stroke="#e7e5e4" />
           <XAxis
             dataKey="height_mm"
             type="number"
             domain={[0, 'dataMax']}
-            label={{ value: 'drop height (mm)', position: 'insideBottom', offset: -12 }}
+            label={{
+              value: `drop height (${u.unit('mm')})`,
+              position: 'insideBottom',
+              offset: -12,
+            }}
           />
           <YAxis
             yAxisId="p"
-            label={{ value: 'peak pressure (kPa)', angle: -90, position: 'insideLeft' }}
+            label={{
+              value: `peak pressure (${u.unit('kPa')})`,
+              angle: -90,
+              position: 'insideLeft',
+            }}
           />
           <YAxis
             yAxisId="e"
             orientation="right"
-            label={{ value: 'energy (J)', angle: 90, position: 'insideRight' }}
+            label={{ value: `energy (${u.unit('J')})`, angle: 90, position: 'insideRight' }}
           />
           <Tooltip />
           <Legend verticalAlign="top" />
           <Line
             yAxisId="p"
             dataKey="peak_pressure_kpa"
-            name="peak pressure (kPa)"
+            name={`peak pressure (${u.unit('kPa')})`}
             stroke="#2f5f2c"
             dot={false}
             isAnimationActive={false}
@@ -61,14 +76,14 @@ export function DropCharts({
           <Line
             yAxisId="e"
             dataKey="impact_energy_j"
-            name="impact energy (J)"
+            name={`impact energy (${u.unit('J')})`}
             stroke="#8a4b16"
             dot={false}
             isAnimationActive={false}
           />
           <ReferenceLine
             yAxisId="p"
-            x={heightMm}
+            x={u.toDisplay(heightMm, 'mm')}
             stroke="#57534e"
             strokeDasharray="4 4"
             label="this drop"
@@ -76,7 +91,7 @@ export function DropCharts({
           {thresholdKpa ? (
             <ReferenceLine
               yAxisId="p"
-              y={thresholdKpa}
+              y={u.toDisplay(thresholdKpa, 'kPa')}
               stroke="#b91c1c"
               strokeDasharray="2 2"
               label="static threshold"

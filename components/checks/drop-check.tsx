@@ -9,6 +9,9 @@ import { MarginPanel } from './margin-panel';
 import { SaveAssessment } from './save-assessment';
 import { CheckWarnings, UsedValues } from './used-values';
 import { numberOrUndefined, useCheck } from './use-check';
+import { initialText } from './initial-text';
+import { FIELD_UNITS } from './field-units';
+import { useUnits } from '@/components/units/units-provider';
 
 const FRUIT_FIELDS = [
   ['modulusMpa', "Young's modulus", 'MPa'],
@@ -25,17 +28,24 @@ export function DropCheck({
   cultivars: CultivarOption[];
   initialCultivar: string;
 }) {
+  const units = useUnits();
   const [cultivar, setCultivar] = useState(initialCultivar);
   const [surface, setSurface] = useState<DropSurface>('steel');
-  const [text, setText] = useState<Record<string, string>>({
-    heightMm: '150',
-    padModulusMpa: '0.5',
-    padThicknessMm: '25',
-  });
+  const [text, setText] = useState<Record<string, string>>(() =>
+    initialText(
+      {
+        heightMm: '150',
+        padModulusMpa: '0.5',
+        padThicknessMm: '25',
+      },
+      units.toDisplay,
+    ),
+  );
   const set = (key: string) => (value: string) => setText((t) => ({ ...t, [key]: value }));
   const body: Record<string, unknown> = { surface, ...(cultivar && { cultivar }) };
   for (const [key, value] of Object.entries(text)) {
-    if (!key.startsWith('pad') || surface === 'foam') body[key] = numberOrUndefined(value);
+    if (!key.startsWith('pad') || surface === 'foam')
+      body[key] = numberOrUndefined(value, (v) => units.fromDisplay(v, FIELD_UNITS[key] ?? '–'));
   }
   const { result, pending, message, fieldErrors } = useCheck<DropCheckResult>(
     '/api/checks/drop',
@@ -109,6 +119,7 @@ export function DropCheck({
               placeholder={publishedHint(
                 cultivars.find((o) => o.slug === cultivar),
                 key,
+                (v) => units.toDisplay(v, FIELD_UNITS[key] ?? '–'),
               )}
             />
           ))}
@@ -157,18 +168,19 @@ export function DropCheck({
 }
 
 function DropFigures({ result }: { result: DropCheckResult }) {
+  const { show } = useUnits();
   const i = result.impact;
   return (
     <>
       <CheckWarnings warnings={result.warnings} />
       <dl className="grid grid-cols-2 gap-3 text-sm sm:grid-cols-3" data-testid="drop-figures">
         {[
-          ['Impact speed', `${i.impact_velocity_m_s} m/s`],
-          ['Impact energy', `${i.impact_energy_j} J`],
-          ['Peak force', `${i.peak_force_n} N`],
-          ['Contact radius', `${i.contact_radius_mm} mm`],
-          ['Peak pressure', `${i.peak_pressure_kpa} kPa`],
-          ['Contact time', `${i.contact_time_ms} ms`],
+          ['Impact speed', show(i.impact_velocity_m_s, 'm/s')],
+          ['Impact energy', show(i.impact_energy_j, 'J')],
+          ['Peak force', show(i.peak_force_n, 'N')],
+          ['Contact radius', show(i.contact_radius_mm, 'mm')],
+          ['Peak pressure', show(i.peak_pressure_kpa, 'kPa')],
+          ['Contact time', show(i.contact_time_ms, 'ms')],
         ].map(([k, v]) => (
           <div key={k} className="rounded-md border border-stone-200 bg-white p-2">
             <dt className="text-xs text-stone-600">{k}</dt>
@@ -178,12 +190,12 @@ function DropFigures({ result }: { result: DropCheckResult }) {
       </dl>
       {result.static ? (
         <p className="text-sm text-stone-700">
-          Secondary, stricter figure: static threshold {result.static.threshold_kpa} kPa ÷ elastic
-          peak pressure = margin <span className="num">{result.static.margin}</span>. Elastic Hertz
-          with the tissue&apos;s static strength ignores that flesh is stiffer and stronger at
-          impact rates, that the skin spreads the load and that bruising starts below the surface;
-          measured drop thresholds are far higher, so this figure is a conservative bound, not the
-          verdict.
+          Secondary, stricter figure: static threshold {show(result.static.threshold_kpa, 'kPa')} ÷
+          elastic peak pressure = margin <span className="num">{result.static.margin}</span>.
+          Elastic Hertz with the tissue&apos;s static strength ignores that flesh is stiffer and
+          stronger at impact rates, that the skin spreads the load and that bruising starts below
+          the surface; measured drop thresholds are far higher, so this figure is a conservative
+          bound, not the verdict.
         </p>
       ) : null}
       <DropCharts
@@ -197,6 +209,7 @@ function DropFigures({ result }: { result: DropCheckResult }) {
 }
 
 function SafeHeights({ rows }: { rows: DropCheckResult['safe_heights'] }) {
+  const { show } = useUnits();
   return (
     <div className="overflow-x-auto">
       <table className="w-full text-left text-sm" data-testid="safe-heights">
@@ -219,7 +232,7 @@ function SafeHeights({ rows }: { rows: DropCheckResult['safe_heights'] }) {
                   <span className="text-stone-500">no published value</span>
                 ) : (
                   <>
-                    <span className="num">{r.dynamic_safe_height_mm} mm</span>
+                    <span className="num">{show(r.dynamic_safe_height_mm, 'mm')}</span>
                     <span className="block text-xs text-stone-500">
                       {r.dynamic_basis}
                       {r.dynamic_source ? ` — ${r.dynamic_source}` : ''}
@@ -228,7 +241,7 @@ function SafeHeights({ rows }: { rows: DropCheckResult['safe_heights'] }) {
                 )}
               </td>
               <td className="num py-1">
-                {r.static_safe_height_mm === null ? '—' : `${r.static_safe_height_mm} mm`}
+                {r.static_safe_height_mm === null ? '—' : show(r.static_safe_height_mm, 'mm')}
               </td>
             </tr>
           ))}

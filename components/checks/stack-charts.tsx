@@ -11,6 +11,7 @@ import {
   XAxis,
   YAxis,
 } from 'recharts';
+import { useUnits } from '@/components/units/units-provider';
 
 interface Point {
   depth_mm: number;
@@ -29,20 +30,27 @@ export function StackCharts({
   depthMm: number;
   safeMm: number | null | undefined;
 }) {
+  const u = useUnits();
+  const data = series.map((p) => ({
+    ...p,
+    depth_mm: u.toDisplay(p.depth_mm, 'mm'),
+    vertical_pressure_kpa: u.toDisplay(p.vertical_pressure_kpa, 'kPa'),
+    contact_pressure_kpa: u.toDisplay(p.contact_pressure_kpa, 'kPa'),
+  }));
   return (
     <div className="h-72 w-full" data-testid="stack-chart">
       <ResponsiveContainer width="100%" height="100%">
-        <LineChart data={series} margin={{ top: 10, right: 24, bottom: 24, left: 24 }}>
+        <LineChart data={data} margin={{ top: 10, right: 24, bottom: 24, left: 24 }}>
           <CartesianGrid stroke="#e7e5e4" />
           <XAxis
             dataKey="depth_mm"
             type="number"
             domain={[0, 'dataMax']}
-            label={{ value: 'fill depth (mm)', position: 'insideBottom', offset: -12 }}
+            label={{ value: `fill depth (${u.unit('mm')})`, position: 'insideBottom', offset: -12 }}
           />
           <YAxis
             yAxisId="p"
-            label={{ value: 'pressure (kPa)', angle: -90, position: 'insideLeft' }}
+            label={{ value: `pressure (${u.unit('kPa')})`, angle: -90, position: 'insideLeft' }}
           />
           <YAxis
             yAxisId="m"
@@ -54,7 +62,7 @@ export function StackCharts({
           <Line
             yAxisId="p"
             dataKey="vertical_pressure_kpa"
-            name="bin vertical pressure (kPa)"
+            name={`bin vertical pressure (${u.unit('kPa')})`}
             stroke="#57534e"
             dot={false}
             isAnimationActive={false}
@@ -62,7 +70,7 @@ export function StackCharts({
           <Line
             yAxisId="p"
             dataKey="contact_pressure_kpa"
-            name="bottom contact pressure (kPa)"
+            name={`bottom contact pressure (${u.unit('kPa')})`}
             stroke="#2f5f2c"
             dot={false}
             isAnimationActive={false}
@@ -84,7 +92,7 @@ export function StackCharts({
           />
           <ReferenceLine
             yAxisId="p"
-            x={depthMm}
+            x={u.toDisplay(depthMm, 'mm')}
             stroke="#57534e"
             strokeDasharray="4 4"
             label="this fill"
@@ -92,7 +100,7 @@ export function StackCharts({
           {safeMm ? (
             <ReferenceLine
               yAxisId="p"
-              x={safeMm}
+              x={u.toDisplay(safeMm, 'mm')}
               stroke="#b91c1c"
               strokeDasharray="4 4"
               label="deepest safe"

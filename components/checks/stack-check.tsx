@@ -8,6 +8,9 @@ import { SaveAssessment } from './save-assessment';
 import { StackCharts } from './stack-charts';
 import { CheckWarnings, UsedValues } from './used-values';
 import { numberOrUndefined, useCheck } from './use-check';
+import { initialText } from './initial-text';
+import { FIELD_UNITS } from './field-units';
+import { useUnits } from '@/components/units/units-provider';
 
 const BIN_FIELDS = [
   ['binLengthMm', 'Bin inside length', 'mm', ''],
@@ -37,15 +40,22 @@ export function StackCheck({
   cultivars: CultivarOption[];
   initialCultivar: string;
 }) {
+  const units = useUnits();
   const [cultivar, setCultivar] = useState(initialCultivar);
-  const [text, setText] = useState<Record<string, string>>({
-    binLengthMm: '1200',
-    binWidthMm: '1000',
-    fillDepthMm: '600',
-  });
+  const [text, setText] = useState<Record<string, string>>(() =>
+    initialText(
+      {
+        binLengthMm: '1200',
+        binWidthMm: '1000',
+        fillDepthMm: '600',
+      },
+      units.toDisplay,
+    ),
+  );
   const set = (key: string) => (value: string) => setText((t) => ({ ...t, [key]: value }));
   const body: Record<string, unknown> = { ...(cultivar && { cultivar }) };
-  for (const [key, value] of Object.entries(text)) body[key] = numberOrUndefined(value);
+  for (const [key, value] of Object.entries(text))
+    body[key] = numberOrUndefined(value, (v) => units.fromDisplay(v, FIELD_UNITS[key] ?? '–'));
   const { result, pending, message, fieldErrors } = useCheck<StackCheckResult>(
     '/api/checks/stack',
     body,
@@ -86,6 +96,7 @@ export function StackCheck({
               placeholder={publishedHint(
                 cultivars.find((o) => o.slug === cultivar),
                 key,
+                (v) => units.toDisplay(v, FIELD_UNITS[key] ?? '–'),
               )}
             />
           ))}
@@ -117,15 +128,18 @@ export function StackCheck({
                   ? 'needs a threshold'
                   : result.deepest_safe_fill_mm === null
                     ? 'any depth (the bin pressure levels off below the limit)'
-                    : `${result.deepest_safe_fill_mm} mm`}
+                    : units.show(result.deepest_safe_fill_mm, 'mm')}
               </strong>
             </p>
             <dl className="grid grid-cols-2 gap-3 text-sm sm:grid-cols-4">
               {[
-                ['Bin pressure at the bottom', `${result.bottom.vertical_pressure_kpa} kPa`],
-                ['Load on one contact', `${result.bottom.contact_force_n} N`],
-                ['Contact radius', `${result.bottom.contact_radius_mm} mm`],
-                ['Contact pressure', `${result.bottom.contact_pressure_kpa} kPa`],
+                [
+                  'Bin pressure at the bottom',
+                  units.show(result.bottom.vertical_pressure_kpa, 'kPa'),
+                ],
+                ['Load on one contact', units.show(result.bottom.contact_force_n, 'N')],
+                ['Contact radius', units.show(result.bottom.contact_radius_mm, 'mm')],
+                ['Contact pressure', units.show(result.bottom.contact_pressure_kpa, 'kPa')],
               ].map(([k, v]) => (
                 <div key={k} className="rounded-md border border-stone-200 bg-white p-2">
                   <dt className="text-xs text-stone-600">{k}</dt>

@@ -64,10 +64,16 @@ export function useCheck<R>(endpoint: string, body: Record<string, unknown>, del
   return state;
 }
 
-/** Form text → the number the route expects; empty means "use the published value". */
-export function numberOrUndefined(text: string): number | undefined | string {
+/**
+ * Form text in the user's units → the SI number the route expects; empty means "use the
+ * published value"; text that is not a number goes through so the route names the field.
+ */
+export function numberOrUndefined(
+  text: string,
+  toSI: (value: number) => number = (v) => v,
+): number | undefined | string {
   const trimmed = text.trim();
   if (trimmed === '') return undefined;
   const n = Number(trimmed);
-  return Number.isFinite(n) ? n : trimmed;
+  return Number.isFinite(n) ? toSI(n) : trimmed;
 }

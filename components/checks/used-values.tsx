@@ -1,3 +1,5 @@
+import { Measure } from '@/components/units/measure';
+
 export interface UsedValueView {
   value: number;
   unit: string;
@@ -18,9 +20,7 @@ export function UsedValues({ rows }: { rows: [string, UsedValueView | null | und
             <th scope="row" className="py-1 pr-2 font-normal text-stone-700">
               {label}
             </th>
-            <td className="num py-1 pr-2">
-              {v ? `${Number(v.value.toPrecision(4))} ${v.unit === '–' ? '' : v.unit}` : '—'}
-            </td>
+            <td className="num py-1 pr-2">{v ? <Measure value={v.value} unit={v.unit} /> : '—'}</td>
             <td className="py-1 text-xs text-stone-600">
               {!v
                 ? 'no published value'

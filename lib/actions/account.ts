@@ -1,7 +1,8 @@
 'use server';
 
 import { requireActor } from '@/lib/auth/session';
-import { changeOwnPassword, endAllSessions } from '@/lib/data/users';
+import { revalidatePath } from 'next/cache';
+import { changeOwnPassword, endAllSessions, setUnitSystem } from '@/lib/data/users';
 import { formObject } from '@/lib/validation/form';
 import { runAction, type ActionState } from './state';
 
@@ -22,5 +23,20 @@ export async function signOutEverywhereAction(_prev: ActionState): Promise<Actio
     const actor = await requireActor('account:manage-own');
     await endAllSessions(actor.id, 'sign-out-everywhere');
     return 'Signed out on every device. Sign in again to continue.';
+  });
+}
+
+/** Choose display units ("unitSystem": "si" | "us"); stored values stay SI. */
+export async function setUnitSystemAction(
+  _prev: ActionState,
+  form: FormData,
+): Promise<ActionState> {
+  return runAction(async () => {
+    const actor = await requireActor('account:manage-own');
+    const system = await setUnitSystem(actor, formObject(form));
+    revalidatePath('/', 'layout');
+    return system === 'us'
+      ? 'Values now show in US customary units.'
+      : 'Values now show in SI units.';
   });
 }

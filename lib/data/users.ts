@@ -1,4 +1,5 @@
 import 'server-only';
+import { isUnitSystem, type UnitSystem } from '@/lib/units';
 import type { Knex } from 'knex';
 import { db } from '@/lib/db';
 import { assertCan, type Actor } from '@/lib/auth/actor';
@@ -6,7 +7,7 @@ import { hashPassword, spendVerifyTime, verifyPassword } from '@/lib/auth/passwo
 import { isRole, type Role } from '@/lib/auth/roles';
 import { ConflictError, NotFoundError, ValidationError } from '@/lib/errors';
 import { parseInput } from '@/lib/validation/parse';
-import { changePasswordSchema, userUpdateSchema } from '@/lib/validation/users';
+import { changePasswordSchema, unitSystemSchema, userUpdateSchema } from '@/lib/validation/users';
 import { clearAccountLimits, listAccountLocks, type AccountLock } from '@/lib/auth/sign-in-limits';
 import { recordAudit } from './audit-trail';
 
@@ -228,4 +229,29 @@ export async function insertUser(
     })
     .returning('id');
   return typeof row === 'object' ? Number(row.id) : Number(row);
+}
+
+/** The user's display units (SI unless they chose US customary). */
+export async function getUnitSystem(actor: Actor): Promise<UnitSystem> {
+  const row = await db('users').where({ id: actor.id }).select('unit_system').first();
+  return isUnitSystem(row?.unit_system) ? row.unit_system : 'si';
+}
+
+/** Choose one's own display units: `{ unitSystem: 'si' | 'us' }`. */
+export async function setUnitSystem(actor: Actor, input: unknown): Promise<UnitSystem> {
+  assertCan(actor, 'account:manage-own');
+  const { unitSystem } = parseInput(unitSystemSchema, input);
+  await db.transaction(async (trx) => {
+    await trx('users')
+      .where({ id: actor.id })
+      .update({ unit_system: unitSystem, updated_at: new Date() });
+    await recordAudit(trx, {
+      actorId: actor.id,
+      action: 'user.units',
+      entity: 'user',
+      entityId: actor.id,
+      detail: { unitSystem },
+    });
+  });
+  return unitSystem;
 }

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { ROLES } from '@/lib/auth/roles';
+import { UNIT_SYSTEMS } from '@/lib/units';
 import { formBoolean } from './form';
 import { idSchema } from './id';
 
@@ -83,3 +84,7 @@ export type InvitationInput = z.infer<typeof invitationSchema>;
 export type AcceptInvitationInput = z.infer<typeof acceptInvitationSchema>;
 export type ChangePasswordInput = z.infer<typeof changePasswordSchema>;
 export type UserUpdateInput = z.infer<typeof userUpdateSchema>;
+
+export const unitSystemSchema = z.object({
+  unitSystem: z.enum(UNIT_SYSTEMS, { error: 'Choose SI or US customary units.' }),
+});

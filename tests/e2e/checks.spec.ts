@@ -53,3 +53,39 @@ test('a buyer may not run checks', async ({ page, signInAs }) => {
   const response = await page.goto('/checks/drop');
   expect(response?.status()).toBe(403);
 });
+
+test('US customary units apply to what is typed and shown; SI stays stored', async ({
+  page,
+  signInAs,
+}) => {
+  await signInAs('admin');
+  await page.goto('/account');
+  const form = page.getByTestId('unit-system-form');
+  await form.getByLabel(/US customary/).check();
+  await form.getByRole('button', { name: 'Save units' }).click();
+  await expect(form.getByTestId('form-success')).toContainText('US customary');
+  try {
+    await page.goto('/checks/drop');
+    await page.getByLabel('Cultivar').selectOption('');
+    // 3 MPa = 435.1 psi, 80 mm = 3.150 in, 200 g = 7.055 oz, 100 kPa = 14.50 psi; 100 mm = 3.937 in
+    // (NIST SP 811, 2008, App. B). The same fruit and drop as the worked example above.
+    await page.getByLabel("Young's modulus").fill('435.11');
+    await page.getByLabel("Poisson's ratio").fill('0.35');
+    await page.getByLabel('Diameter').fill('3.1496');
+    await page.getByLabel('Mass').fill('7.0548');
+    await page.getByLabel('Static bruise threshold').fill('14.504');
+    await page.getByLabel('Drop height').fill('3.937');
+    const figures = page.getByTestId('drop-figures');
+    // 607 kPa = 88.0 psi; 158 N = 35.5 lbf. Typed values carry 5 figures: 0.5 % covers both.
+    const peak = async () =>
+      Number((await figures.innerText()).match(/Peak pressure\s*([\d.]+) psi/)?.[1]);
+    await expect.poll(async () => Math.abs((await peak()) - 88.04) / 88.04).toBeLessThan(0.005);
+    await expect(figures).toContainText('lbf');
+    await page.screenshot({ path: 'tests/artifacts/check-drop-us-units.png', fullPage: true });
+  } finally {
+    await page.goto('/account');
+    await form.getByLabel(/SI \(mm/).check();
+    await form.getByRole('button', { name: 'Save units' }).click();
+    await expect(form.getByTestId('form-success')).toContainText('SI units');
+  }
+});

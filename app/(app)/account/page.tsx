@@ -1,5 +1,7 @@
 import { ChangePasswordForm } from '@/components/account/change-password-form';
 import { SignOutEverywhere } from '@/components/account/sign-out-everywhere';
+import { UnitSystemForm } from '@/components/account/unit-system-form';
+import { getUnitSystem } from '@/lib/data/users';
 import { PageTitle } from '@/components/ui/page-title';
 import { requirePageActor } from '@/lib/auth/session';
 
@@ -14,6 +16,8 @@ export default async function AccountPage() {
       </PageTitle>
       <h2 className="mb-3 font-semibold">Change password</h2>
       <ChangePasswordForm />
+      <h2 className="mb-3 mt-10 font-semibold">Display units</h2>
+      <UnitSystemForm current={await getUnitSystem(actor)} />
       <h2 className="mb-3 mt-10 font-semibold">Sessions</h2>
       <SignOutEverywhere />
     </section>
