@@ -12,6 +12,16 @@ export const BODY_MODELS = ['axisymmetric', 'plane-strain'] as const;
 /** Which finite-element idealisation: a body of revolution, or a plane-strain slice per unit thickness. */
 export type BodyModel = (typeof BODY_MODELS)[number];
 
+/**
+ * A refined band of surface nodes around a pad's edge, as integers so that keys compare exactly:
+ * uniform chord spacing h = 2^(spacing/2) (unit body) from chord 8h·lo to 8h·hi from the pole.
+ */
+export interface EdgeBand {
+  spacing: number;
+  lo: number;
+  hi: number;
+}
+
 /** Key of a cached unit body: geometry is scaled to equatorial radius 1 m and modulus 1 Pa. */
 export interface UnitBodyKey {
   model: BodyModel;
@@ -20,6 +30,13 @@ export interface UnitBodyKey {
   /** Poisson's ratio, in [0, 0.5) */
   poisson: number;
   level: MeshLevel;
+  /**
+   * Contact-scale band k (integer ≤ 0): the surface spacing near the pole is graded to a contact
+   * of radius 2^(k/4) (unit body). Omit for the level's standard spacing (0.02 / 0.01 / 0.005).
+   */
+  contactBand?: number;
+  /** Refined band at a pad's edge; omit for none. */
+  edgeBand?: EdgeBand;
 }
 
 /**

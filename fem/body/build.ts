@@ -1,12 +1,12 @@
 import { Matrix } from 'ml-matrix';
 import { centroidStresses } from '../elements/element-stresses';
 import { FemInputError } from '../errors';
-import { MESH_LEVEL_PARAMS } from '../mesh/mesh-levels';
 import type { QuarterSectionMesh } from '../mesh/quad-mesh';
 import { quarterEllipseMesh } from '../mesh/quarter-ellipse';
 import { condense } from '../solver/condense';
 import type { CondensedBody, StressSample, UnitBodyKey } from '../types';
 import { assembleStiffness } from './assembly';
+import { planOf } from './grading';
 import { symmetryConstraints } from './symmetry';
 
 /** Candidate contact nodes are the surface nodes with r ≤ this (units of the equatorial radius). */
@@ -34,7 +34,8 @@ export interface FemBody extends CondensedBody {
 
 /** Builds (uncached) the condensed unit body of a validated key: E = 1 Pa, equatorial radius 1 m. */
 export function buildCondensedBody(key: UnitBodyKey): FemBody {
-  const mesh = quarterEllipseMesh(key.aspect, MESH_LEVEL_PARAMS[key.level]);
+  const plan = planOf(key.level, key.contactBand ?? null, key.edgeBand ?? null);
+  const mesh = quarterEllipseMesh(key.aspect, plan);
   const k = assembleStiffness(mesh, key.model, 1, key.poisson);
   const contactNodes = candidateContactNodes(mesh);
   const nc = contactNodes.length;

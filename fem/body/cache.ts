@@ -2,6 +2,7 @@ import { FemInputError } from '../errors';
 import { BODY_MODELS, MESH_LEVELS, type UnitBodyKey } from '../types';
 import { requireFinite, requireOneOf, requirePoisson } from '../validate';
 import { buildCondensedBody, type FemBody } from './build';
+import { requireBands } from './grading';
 
 export type { FemBody } from './build';
 
@@ -17,14 +18,23 @@ const cache = new Map<string, FemBody>();
 /**
  * The unit body (equatorial radius 1 m, E = 1 Pa) condensed onto the axial DOFs of its candidate
  * contact nodes (surface nodes from the pole out to r = 0.6), built once per
- * (model, aspect, poisson, level) and cached in memory (up to CACHE_LIMIT bodies, LRU).
+ * (model, aspect, poisson, level, contact band, edge band) and cached in memory (up to
+ * CACHE_LIMIT bodies, LRU).
  * Scale per the CondensedBody contract: axisymmetric K_real = E·R·K, plane strain K_real = E·K
  * per metre of thickness (half slice, see FemBody.forceFactor). Throws FemInputError naming the
  * field for an invalid key. The returned object is shared: do not mutate its arrays or K.
  */
 export function getCondensedBody(key: UnitBodyKey): FemBody {
   const valid = validateKey(key);
-  const id = `${valid.model}|${valid.aspect}|${valid.poisson}|${valid.level}`;
+  const edge = valid.edgeBand;
+  const id = [
+    valid.model,
+    valid.aspect,
+    valid.poisson,
+    valid.level,
+    valid.contactBand ?? '',
+    edge ? `${edge.spacing}:${edge.lo}:${edge.hi}` : '',
+  ].join('|');
   const hit = cache.get(id);
   if (hit) {
     cache.delete(id);
@@ -50,5 +60,14 @@ function validateKey(key: UnitBodyKey): UnitBodyKey {
     throw new FemInputError('aspect', `aspect must lie between ${ASPECT_MIN} and ${ASPECT_MAX}`);
   }
   requirePoisson('poisson', key.poisson);
-  return { model: key.model, aspect: key.aspect, poisson: key.poisson, level: key.level };
+  requireBands(key.contactBand, key.edgeBand);
+  const valid: UnitBodyKey = {
+    model: key.model,
+    aspect: key.aspect,
+    poisson: key.poisson,
+    level: key.level,
+  };
+  if (key.contactBand !== undefined) valid.contactBand = key.contactBand;
+  if (key.edgeBand !== undefined) valid.edgeBand = { ...key.edgeBand };
+  return valid;
 }

@@ -1,7 +1,8 @@
 import { requirePositive } from '../validate';
-import type { MeshLevelParams } from './mesh-levels';
+import type { MeshPlan } from './mesh-levels';
 import { DiscDrawing } from './disc-drawing';
 import type { QuarterSectionMesh } from './quad-mesh';
+import { ringRadii } from './ring-radii';
 import { gradedPositions } from './spacing';
 import { fillPatch } from './transfinite';
 
@@ -14,14 +15,28 @@ const CORE_CORNER = 0.72;
  * Built on the unit quarter disc and stretched by `aspect` in z (an affine map, so element
  * Jacobians stay positive). Around the pole P = (0, 1): a uniform core of three transfinite
  * patches, then rings (circles about P, from the axis to the surface) whose radii grow
- * geometrically, then one transfinite patch for the rest of the body.
+ * geometrically, then one transfinite patch for the rest of the body. A plan may hold the pole
+ * spacing out to a chord `contactExtent` (the expected contact) and add a refined band of rings
+ * (the pad's edge); the core shrinks to end where the band begins.
  */
-export function quarterEllipseMesh(aspect: number, p: MeshLevelParams): QuarterSectionMesh {
+export function quarterEllipseMesh(aspect: number, p: MeshPlan): QuarterSectionMesh {
   requirePositive('aspect', aspect);
   const g = new DiscDrawing(p.half);
-  const rhoMin = (p.poleSpacing * p.half) / CORE_SIDE;
+  const band = p.band ?? null;
+  let rhoMin = (p.poleSpacing * p.half) / CORE_SIDE;
+  if (band && band.lo < rhoMin) rhoMin = Math.max(band.lo, (band.spacing * p.half) / CORE_SIDE);
   const core = poleCore(g, rhoMin);
-  const rings = growingRings(g, core.ring, rhoMin, p.ringOuter);
+  const radii = ringRadii(
+    {
+      natural: g.psiMax(rhoMin) / (2 * p.half),
+      contactSpacing: p.poleSpacing,
+      contactExtent: p.contactExtent ?? 0,
+      band,
+    },
+    rhoMin,
+    p.ringOuter,
+  );
+  const rings = growingRings(g, core.ring, radii);
   const rest = outerPatch(g, rings.outer, rings.growth, p.ringOuter);
   const mesh = g.mb.build();
   for (let i = 0; i < mesh.nodeZ.length; i++) mesh.nodeZ[i] *= aspect;
@@ -64,24 +79,20 @@ function poleCore(g: DiscDrawing, rhoMin: number): Part & { ring: number[] } {
   return { axis: [...axis1, ...axis2.slice(1)], surface: [...surf1, ...surf2.slice(1)], ring };
 }
 
-/** Rings of geometrically growing radius from ρ_min to `ringOuter`, about as wide as they are deep. */
+/** Rings at the given radii (the first is the core's ring); `growth` is the last radius ratio. */
 function growingRings(
   g: DiscDrawing,
   first: number[],
-  rhoMin: number,
-  ringOuter: number,
+  radii: number[],
 ): Part & { outer: number[]; growth: number } {
   const m = g.m;
-  const nRings = Math.max(
-    1,
-    Math.round(Math.log(ringOuter / rhoMin) / (g.psiMax(rhoMin) / (2 * m))),
-  );
-  const growth = Math.pow(ringOuter / rhoMin, 1 / nRings);
+  const n = radii.length - 1;
+  const growth = radii[n] / radii[n - 1];
   const axis: number[] = [];
   const surface: number[] = [];
   let inner = first;
-  for (let n = 1; n <= nRings; n++) {
-    const outer = g.ring(rhoMin * Math.pow(growth, n));
+  for (let k = 1; k <= n; k++) {
+    const outer = g.ring(radii[k]);
     for (let j = 0; j < 2 * m; j++) g.mb.quad(inner[j], outer[j], outer[j + 1], inner[j + 1]);
     axis.push(outer[0]);
     surface.push(outer[2 * m]);

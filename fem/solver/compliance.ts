@@ -42,3 +42,11 @@ export function createContactSystem(stiffness: Matrix): ContactSystem {
   }
   return { size: n, compliance, flat };
 }
+
+/** A contact system from a compliance C (m/N), dense row-major n × n, symmetric positive definite. */
+export function contactSystemFromCompliance(flat: Float64Array, n: number): ContactSystem {
+  if (flat.length !== n * n) throw new FemInputError('compliance', 'compliance must be n × n');
+  const compliance = new Matrix(n, n);
+  for (let i = 0; i < n; i++) for (let j = 0; j < n; j++) compliance.set(i, j, flat[i * n + j]);
+  return { size: n, compliance, flat };
+}

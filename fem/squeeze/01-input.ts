@@ -31,6 +31,12 @@ export interface SqueezeInput {
   steps?: number;
   /** mesh level (default 'normal') */
   mesh?: MeshLevel;
+  /**
+   * contact radius (m) the mesh is graded to; default the Hertz estimate √(R_p·travel) at the
+   * full travel (R_p = R_eq²/R_ax). A run whose contact holds too few nodes repeats itself with
+   * this set to its contact radius.
+   */
+  meshContactRadius?: number;
   /** overall pad face diameter D, m; omit for an infinite flat plate */
   padDiameter?: number;
   /** radius of the pad's rounded edge r_e, m (0 < r_e < D/2; default 2 mm) */
@@ -64,6 +70,8 @@ export interface SqueezeCase {
   travel: number;
   steps: number;
   mesh: MeshLevel;
+  /** contact radius the mesh is graded to, m; null = the Hertz estimate at the full travel */
+  meshContactRadius: number | null;
   pad: PadGeometry;
   /** Winkler stiffness of the facing per unit area E_l / t_l, Pa/m; null = rigid */
   facingStiffness: number | null;
@@ -118,6 +126,10 @@ export function validateSqueezeInput(input: SqueezeInput): SqueezeCase {
     throw new FemInputError('steps', 'steps must be an integer from 1 to 200');
   }
   const pad = createPad({ diameter: input.padDiameter, edgeRadius: input.edgeRadius });
+  const meshContactRadius =
+    input.meshContactRadius === undefined
+      ? null
+      : requirePositive('meshContactRadius', input.meshContactRadius);
   return {
     model,
     equatorialRadius,
@@ -128,6 +140,7 @@ export function validateSqueezeInput(input: SqueezeInput): SqueezeCase {
     travel,
     steps,
     mesh,
+    meshContactRadius,
     pad,
     facingStiffness: facing(input),
     lift: liftInput(input),

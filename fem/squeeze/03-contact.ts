@@ -6,34 +6,56 @@ import { FemInputError } from '../errors';
 import type { SqueezeInput } from './01-input';
 import { prepareBody, type BodyStage } from './02-body';
 import { solveContact, type ContactSolution } from '../solver/active-set';
-import { createContactSystem, type ContactSystem } from '../solver/compliance';
+import {
+  contactSystemFromCompliance,
+  createContactSystem,
+  type ContactSystem,
+} from '../solver/compliance';
+import { pointCompliance, pointsToNodes } from './contact-points';
 import { surfaceWeights } from './pressure-recovery';
 
-/** The body stage plus its contact compliance and the facing springs. */
+/** The body stage plus the contact compliance of its points and the facing springs. */
 export interface ContactStage extends BodyStage {
-  /** compliance of the unit body's contact nodes (shared per body) */
+  /** compliance of the unit body at the contact points (shared per body when they are its nodes) */
   system: ContactSystem;
-  /** facing compliance per node in unit-body force units (see prepareContact); undefined = rigid */
+  /** compliance of the unit body at its contact nodes (shared per body) */
+  nodeSystem: ContactSystem;
+  /** facing compliance per point in unit-body force units (see prepareContact); undefined = rigid */
   facing: Float64Array | undefined;
+}
+
+/** A contact solution at the points, with the contact nodes' loads and displacements. */
+export interface StageSolution extends ContactSolution {
+  /** axial load on each contact node, N (N/m), ≥ 0 in sum */
+  nodeForce: Float64Array;
+  /** axial displacement of each contact node, m (negative toward the centre) */
+  nodeDisplacement: Float64Array;
 }
 
 const systems = new WeakMap<FemBody, ContactSystem>();
 
-/** Prepares the body (stage 2) and its contact system; the compliance is cached per body. */
+/** Prepares the body (stage 2) and its contact system; the node compliance is cached per body. */
 export function prepareContact(input: SqueezeInput): ContactStage {
   const stage = prepareBody(input);
-  const { body, r, stiffnessScale } = stage;
-  let system = systems.get(body);
-  if (!system) {
-    system = createContactSystem(body.K);
-    systems.set(body, system);
+  const { body, r, stiffnessScale, points } = stage;
+  let nodeSystem = systems.get(body);
+  if (!nodeSystem) {
+    nodeSystem = createContactSystem(body.K);
+    systems.set(body, nodeSystem);
   }
+  const system =
+    points.edge < 0
+      ? nodeSystem
+      : contactSystemFromCompliance(
+          pointCompliance(points, nodeSystem.flat, nodeSystem.size),
+          points.r.length,
+        );
   // Winkler facing: spring k_i = (E_l / t_l)·A_i per node; in the solve's scaled force units
   // (p̃ = p / stiffnessScale) its compliance becomes stiffnessScale / k_i.
   const kf = stage.case.facingStiffness;
   const area = surfaceWeights(r, stage.case.model).area;
   const facing = kf === null ? undefined : area.map((A) => stiffnessScale / (kf * A));
-  return { ...stage, system, facing };
+  return { ...stage, system, nodeSystem, facing };
 }
 
 /**
@@ -41,7 +63,7 @@ export function prepareContact(input: SqueezeInput): ContactStage {
  * on the unit compliance; returned forces are in N (N/m), displacements and gaps in m.
  * @throws FemInputError('travel') when the contact reaches the last candidate node
  */
-export function solveAt(stage: ContactStage, travel: number, warm?: Uint8Array): ContactSolution {
+export function solveAt(stage: ContactStage, travel: number, warm?: Uint8Array): StageSolution {
   const sol = solveContact(stage.system, {
     gap: stage.gap,
     travel,
@@ -55,13 +77,23 @@ export function solveAt(stage: ContactStage, travel: number, warm?: Uint8Array):
       'travel spreads the contact past the modelled contact zone; reduce travel',
     );
   }
+  const nc = stage.nodeSystem.size;
+  const unitNodeLoad = pointsToNodes(stage.points, sol.force, nc);
+  const C = stage.nodeSystem.flat;
+  const nodeDisplacement = new Float64Array(nc);
+  for (let i = 0; i < nc; i++) {
+    let v = 0;
+    for (let j = 0; j < nc; j++) if (unitNodeLoad[j] !== 0) v -= C[i * nc + j] * unitNodeLoad[j];
+    nodeDisplacement[i] = v;
+  }
   const force = sol.force.map((p) => p * stage.stiffnessScale);
-  return { ...sol, force };
+  const nodeForce = unitNodeLoad.map((p) => p * stage.stiffnessScale);
+  return { ...sol, force, nodeForce, nodeDisplacement };
 }
 
 /**
- * Total normal force of one pad, N: the sum of the whole-ring nodal forces (axisymmetric); in plane
- * strain twice the sum over the half-slice x ≥ 0 of the quarter model, N per metre.
+ * Total normal force of one pad, N: the sum of the whole-ring point forces (axisymmetric); in
+ * plane strain twice the sum over the half-slice x ≥ 0 of the quarter model, N per metre.
  */
 export function padForce(stage: ContactStage, sol: ContactSolution): number {
   const half = sol.force.reduce((s, p) => s + p, 0);

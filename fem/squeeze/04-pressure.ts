@@ -2,9 +2,14 @@
  * Stage 4 of the squeeze pipeline: nodal contact pressure, contact radius and mean pressure from
  * the contact solution of stage 3.
  */
-import type { ContactSolution } from '../solver/active-set';
 import type { SqueezeInput } from './01-input';
-import { padForce, prepareContact, solveAt, type ContactStage } from './03-contact';
+import {
+  padForce,
+  prepareContact,
+  solveAt,
+  type ContactStage,
+  type StageSolution,
+} from './03-contact';
 import { padReach } from './pad';
 import { recoverPressure } from './pressure-recovery';
 
@@ -16,8 +21,8 @@ export interface PressureStage extends ContactStage {
 
 /** Contact and pressures at one travel, SI; pressures compressive positive. */
 export interface PressureAt {
-  /** the contact solution: nodal forces N (N/m), displacements and gaps m */
-  solution: ContactSolution;
+  /** the contact solution: point and node forces N (N/m), displacements and gaps m */
+  solution: StageSolution;
   /** normal force of one pad, N (N/m in plane strain) */
   force: number;
   /** recovered nodal pressure, Pa (zero out of contact) */
@@ -40,7 +45,7 @@ export function preparePressure(input: SqueezeInput): PressureStage {
 export function pressureAt(stage: PressureStage, travel: number, warm?: Uint8Array): PressureAt {
   const solution = solveAt(stage, travel, warm);
   const model = stage.case.model;
-  const pressure = recoverPressure(stage.r, solution.force, solution.active, model);
+  const pressure = recoverPressure(stage.r, solution.force, solution.active, model, stage.gap);
   const force = padForce(stage, solution);
   const a = contactRadius(stage.r, solution.gap, solution.active, stage.reach);
   const meanPressure =

@@ -26,10 +26,15 @@ export interface SqueezeState {
   peakPressure: number;
   /** force / (π a²), or force / (2a) in plane strain, Pa */
   meanPressure: number;
-  /** largest Tresca shear (σ1 − σ3)/2 under the contact (r ≤ a), Pa; null when not computed */
+  /**
+   * largest Tresca shear (σ1 − σ3)/2 at the element centroids under the contact (r ≤ a), Pa;
+   * null when not computed, or when it could not be sampled (see maxShearUnavailable)
+   */
   maxShear: number | null;
-  /** depth of that shear below the undeformed surface, m; null when not computed */
+  /** depth of that shear below the undeformed surface, m; null with maxShear */
   maxShearDepth: number | null;
+  /** why the shear was asked for but could not be sampled, in plain words; else null */
+  maxShearUnavailable: string | null;
   /** lift ratio μ·2F / (SF·m·(g + a)), set by the liftability stage; null without its inputs */
   liftRatio: number | null;
   /** contact nodes in contact */
@@ -46,7 +51,7 @@ export interface StateAt {
 /** Prepares the pressure stage (stage 4) with the stress influence of its body. */
 export function prepareShear(input: SqueezeInput): ShearStage {
   const stage = preparePressure(input);
-  return { ...stage, shearField: getShearField(stage.body) };
+  return { ...stage, shearField: getShearField(stage.body, stage.nodeSystem) };
 }
 
 /** The state at `travel` (m), warm-started from `warm`; shear only if `withShear` (it costs). */
@@ -57,14 +62,18 @@ export function stateAt(
   withShear: boolean,
 ): StateAt {
   const at = pressureAt(stage, travel, warm);
-  const { equatorialRadius: R, modulus } = stage.case;
+  const R = stage.case.equatorialRadius;
   let maxShear: number | null = null;
   let maxShearDepth: number | null = null;
-  if (withShear) {
-    const unitU = at.solution.displacement.map((u) => u / R);
-    const peak = maxShearUnder(stage.shearField, unitU, at.contactRadius / R);
-    maxShear = peak.shear * modulus;
-    maxShearDepth = peak.depth * R;
+  let maxShearUnavailable: string | null = null;
+  if (withShear && at.force > 0) {
+    // u_real = C_unit p̃ with p̃ = p / stiffnessScale, and the unit body's displacement is u_real / R.
+    const unitForce = at.solution.nodeForce.map((f) => f / (stage.stiffnessScale * R));
+    const under = maxShearUnder(stage.shearField, unitForce, at.contactRadius / R);
+    if (under.peak) {
+      maxShear = under.peak.shear * stage.bodyModulus;
+      maxShearDepth = under.peak.depth * R;
+    } else maxShearUnavailable = under.reason;
   }
   const state: SqueezeState = {
     travel,
@@ -74,6 +83,7 @@ export function stateAt(
     meanPressure: at.meanPressure,
     maxShear,
     maxShearDepth,
+    maxShearUnavailable,
     liftRatio: null,
     activeNodes: at.solution.active.reduce((s, x) => s + x, 0),
   };

@@ -37,28 +37,34 @@ export function surfaceWeights(r: Float64Array, model: BodyModel): SurfaceWeight
 }
 
 /**
- * Nodal contact pressures (Pa, compressive positive) from nodal pad forces p_i (N, ≥ 0): solves
- * the ring-weighted surface "mass" system M p = f over the nodes up to the first one out of
- * contact, whose pressure is zero, so the recovered field is the piecewise-linear pressure whose
- * consistent nodal loads are the contact forces. The axis node's own force is the least accurate
- * of a linear axisymmetric mesh and made the recovered profile dip there, so the pressure at the
- * axis is tied to the even extrapolation p₀ = (r₂²p₁ − r₁²p₂)/(r₂² − r₁²) of its neighbours (p is
- * smooth and even in r there) and the axis row is merged into the next one, which keeps the
- * total force. Nodes out of contact read zero.
+ * Contact pressures (Pa, compressive positive) at the contact points from their forces p_i
+ * (N, ≥ 0), as the piecewise-linear field in r whose loads on the points' hat functions are the
+ * forces (a Galerkin projection, M p = f with the ring-weighted surface "mass" matrix). The
+ * field ends at the first point out of contact, where it is zero, or, when that point lies
+ * beyond the pad (`gap` Infinity), at the last point in contact. So that the field carries the
+ * whole force, the hat of that outer zero point is added to the test function of the last
+ * point in contact: the test functions then sum to 1 over the contact and ∫p dA = Σ f_i
+ * exactly (before negative values are cut off). The axis point's own force is the least
+ * accurate of a linear axisymmetric mesh and made the recovered profile dip there, so the
+ * pressure at the axis is tied to the even extrapolation p₀ = (r₂²p₁ − r₁²p₂)/(r₂² − r₁²) of its
+ * neighbours (p is smooth and even in r there) and the axis row is merged into the next one,
+ * which keeps the total force. Points out of contact read zero.
  */
 export function recoverPressure(
   r: Float64Array,
   force: Float64Array,
   active: Uint8Array,
   model: BodyModel,
+  gap?: Float64Array,
 ): Float64Array {
   const n = r.length;
   const pressure = new Float64Array(n);
   let last = -1;
   active.forEach((a, i) => a && (last = i));
   if (last < 0) return pressure;
-  const m = last + 1; // unknowns 0..m−1; node m (if any) has zero pressure
-  const { diag, off } = surfaceWeights(r, model);
+  const m = last + 1; // unknowns 0..m−1; point m (if any and reachable) has zero pressure
+  const closes = m < n && (gap === undefined || Number.isFinite(gap[m]));
+  const { diag, off } = surfaceWeights(r.subarray(0, closes ? m + 1 : m), model);
   const lower = new Float64Array(m);
   const main = new Float64Array(m);
   const upper = new Float64Array(m);
@@ -69,6 +75,7 @@ export function recoverPressure(
     upper[i] = i < m - 1 ? off[i] : 0;
     rhs[i] = force[i];
   }
+  if (closes) main[m - 1] += off[m - 1];
   const tie = m >= 3 && r[0] === 0;
   if (tie) {
     const [r1, r2] = [r[1] * r[1], r[2] * r[2]];

@@ -3,65 +3,81 @@ import { elasticSplit, type ElasticSplit } from '../elements/elastic-d';
 import { Q4Workspace } from '../elements/q4-stiffness';
 import { q4Stress } from '../elements/q4-stress';
 import { elementCorners } from '../mesh/quad-mesh';
+import type { ContactSystem } from '../solver/compliance';
+import { shearZoneOf } from '../body/grading';
 
 /**
- * Stress influence of the contact nodes on the element centroids under the candidate contact
- * zone of a unit body (E = 1 Pa, R = 1 m). Stress is linear in the contact displacements
- * (recover() has no other loads), so σ(sample) = Σ_j S_j u_j. Built once per body: one recover()
- * per contact node, and each zone element's 4×8 centroid stress matrix from q4Stress with unit
- * element displacements — the same centroid stresses as body.stresses(), far fewer evaluations.
+ * Stress influence of the pad forces on the element centroids under the contact zone of a unit
+ * body (E = 1 Pa, R = 1 m). Stress is linear in the contact forces p̃ (unit-body N, compressive
+ * positive; the contact displacements are u = −C p̃ and recover() has no other loads), so
+ * σ(sample) = Σ_j S_j p̃_j. Built once per body: one recover() per contact node that can carry
+ * force (r ≤ the zone radius), and each zone element's 4×8 centroid stress matrix from q4Stress
+ * with unit element displacements — the same centroid stresses as body.stresses(), far fewer
+ * evaluations. The zone holds the elements whose centroid lies within the zone radius of the
+ * axis and below the surface (see shearZoneOf); shear outside it is not sampled.
  */
 export interface ShearField {
   /** sample radius and depth below the undeformed surface, unit body, sorted by radius */
   r: Float64Array;
   depth: Float64Array;
-  /** [sample][component srr, szz, stt, srz][contact node], row-major */
+  /** [sample][component srr, szz, stt, srz][force node], row-major */
   influence: Float64Array;
+  /** contact nodes that may carry force (the first `nodes` of the body's contact nodes) */
   nodes: number;
+  /** radius and depth of the sampled zone, unit body */
+  zone: number;
 }
 
 const cache = new WeakMap<FemBody, ShearField>();
 
-/** The cached stress influence of `body` (built on first use). */
-export function getShearField(body: FemBody): ShearField {
+/** The cached stress influence of `body` (built on first use) from its contact compliance. */
+export function getShearField(body: FemBody, contact: ContactSystem): ShearField {
   const hit = cache.get(body);
   if (hit) return hit;
   const nc = body.contactR.length;
-  // One full unit-body displacement field per contact node moved by 1 (unit body, m).
-  const columns = Array.from({ length: nc }, (_, j) => {
-    const uc = new Float64Array(nc);
-    uc[j] = 1;
-    return body.recover(uc);
-  });
-  const zone = elementsUnder(body, body.contactR[nc - 1]);
+  const zoneRadius = shearZoneOf(body.key);
+  let nf = 0;
+  while (nf < nc && body.contactR[nf] <= zoneRadius) nf++;
+  // One full unit-body displacement field per unit pad force on a contact node.
+  const columns = Array.from({ length: nf }, (_, j) =>
+    body.recover(Float64Array.from({ length: nc }, (_, i) => -contact.flat[i * nc + j])),
+  );
+  const zone = elementsUnder(body, zoneRadius);
   const r = new Float64Array(zone.length);
   const depth = new Float64Array(zone.length);
-  const influence = new Float64Array(zone.length * 4 * nc);
+  const influence = new Float64Array(zone.length * 4 * nf);
   const unit = new UnitStresses(body);
-  zone.forEach(({ e, r: rc }, s) => {
-    const at = unit.evaluate(e);
-    r[s] = at.r;
-    // Depth below the undeformed elliptical meridian z = aspect·√(1 − r²) of the unit body.
-    depth[s] = Math.max(body.key.aspect * Math.sqrt(Math.max(1 - rc * rc, 0)) - at.z, 0);
-    for (let j = 0; j < nc; j++) {
-      for (let k = 0; k < 4; k++) influence[(s * 4 + k) * nc + j] = unit.apply(e, k, columns[j]);
+  zone.forEach(({ e, r: rc, depth: dc }, s) => {
+    unit.evaluate(e);
+    r[s] = rc;
+    depth[s] = dc;
+    for (let j = 0; j < nf; j++) {
+      for (let k = 0; k < 4; k++) influence[(s * 4 + k) * nf + j] = unit.apply(e, k, columns[j]);
     }
   });
-  const field = { r, depth, influence, nodes: nc };
+  const field = { r, depth, influence, nodes: nf, zone: zoneRadius };
   cache.set(body, field);
   return field;
 }
 
-/** Elements whose centroid lies at r ≤ `reach` (unit body), sorted by centroid radius. */
-function elementsUnder(body: FemBody, reach: number): { e: number; r: number }[] {
+/**
+ * Elements whose centroid lies at r ≤ `reach` and less than `reach` below the undeformed
+ * elliptical meridian z = aspect·√(1 − r²) (unit body), sorted by centroid radius.
+ */
+function elementsUnder(body: FemBody, reach: number): { e: number; r: number; depth: number }[] {
   const xr = new Float64Array(4);
   const xz = new Float64Array(4);
-  const zone: { e: number; r: number }[] = [];
+  const zone: { e: number; r: number; depth: number }[] = [];
   for (let e = 0; e < body.quads.length / 4; e++) {
     elementCorners(body, e, xr, xz);
     let r = 0;
-    for (let a = 0; a < 4; a++) r += xr[a] / 4;
-    if (r <= reach) zone.push({ e, r });
+    let z = 0;
+    for (let a = 0; a < 4; a++) {
+      r += xr[a] / 4;
+      z += xz[a] / 4;
+    }
+    const depth = Math.max(body.key.aspect * Math.sqrt(Math.max(1 - r * r, 0)) - z, 0);
+    if (r <= reach && depth <= reach) zone.push({ e, r, depth });
   }
   return zone.sort((x, y) => x.r - y.r);
 }
@@ -82,19 +98,16 @@ class UnitStresses {
     this.material = elasticSplit(body.key.model, 1, body.key.poisson);
   }
 
-  /** Fills the matrix for element `e`; returns the centroid (r, z) in m. */
-  evaluate(e: number): { r: number; z: number } {
+  /** Fills the matrix for element `e`. */
+  evaluate(e: number): void {
     const { xr, xz, ue, se } = this;
     elementCorners(this.body, e, xr, xz);
-    let centroid = { r: 0, z: 0 };
     for (let c = 0; c < 8; c++) {
       ue.fill(0);
       ue[c] = 1;
       const q = q4Stress(xr, xz, ue, this.material, 0, 0, this.ws);
-      if (c === 0) centroid = { r: q.r, z: q.z };
       [q.srr, q.szz, q.stt, q.srz].forEach((v, k) => (se[k * 8 + c] = v));
     }
-    return centroid;
   }
 
   /** Stress component `k` of the last evaluated element `e` under the full displacement `u`. */
@@ -117,27 +130,42 @@ export interface ShearPeak {
   r: number;
 }
 
+/** The largest shear under a contact, or null with the reason it could not be sampled. */
+export interface ShearUnder {
+  peak: ShearPeak | null;
+  reason: string | null;
+}
+
 /**
- * Largest Tresca shear (σ_max − σ_min)/2 over the samples with r ≤ `radius`, the hoop (or
- * out-of-plane) stress being the third principal stress; `u` are the unit body's contact-node
- * axial displacements (real displacement / R).
+ * Largest Tresca shear (σ_max − σ_min)/2 over the samples with r ≤ `radius` (the contact radius,
+ * unit body), the hoop (or out-of-plane) stress being the third principal stress; `force` holds
+ * the unit body's contact-node forces (real force / stiffness scale, compressive positive). No
+ * peak, with the reason, when the contact reaches past the sampled zone or covers no sample.
  */
-export function maxShearUnder(field: ShearField, u: Float64Array, radius: number): ShearPeak {
-  const nc = field.nodes;
+export function maxShearUnder(field: ShearField, force: Float64Array, radius: number): ShearUnder {
+  const nf = field.nodes;
+  const beyond = force.some((f, j) => j >= nf && f !== 0);
+  if (beyond || radius > field.zone) {
+    return { peak: null, reason: 'the contact reaches past the zone where stresses are sampled' };
+  }
+  if (!(field.r.length > 0 && field.r[0] <= radius)) {
+    return { peak: null, reason: 'no stress sample lies under the contact' };
+  }
   const best: ShearPeak = { shear: 0, depth: 0, r: 0 };
   const inf = field.influence;
   for (let s = 0; s < field.r.length && field.r[s] <= radius; s++) {
-    const b = s * 4 * nc;
+    const b = s * 4 * nf;
     let srr = 0;
     let szz = 0;
     let stt = 0;
     let srz = 0;
-    for (let j = 0; j < nc; j++) {
-      const uj = u[j];
-      srr += inf[b + j] * uj;
-      szz += inf[b + nc + j] * uj;
-      stt += inf[b + 2 * nc + j] * uj;
-      srz += inf[b + 3 * nc + j] * uj;
+    for (let j = 0; j < nf; j++) {
+      const fj = force[j];
+      if (fj === 0) continue;
+      srr += inf[b + j] * fj;
+      szz += inf[b + nf + j] * fj;
+      stt += inf[b + 2 * nf + j] * fj;
+      srz += inf[b + 3 * nf + j] * fj;
     }
     const centre = (srr + szz) / 2;
     const radiusMohr = Math.hypot((srr - szz) / 2, srz);
@@ -146,5 +174,5 @@ export function maxShearUnder(field: ShearField, u: Float64Array, radius: number
     const shear = (top - bottom) / 2;
     if (shear > best.shear) Object.assign(best, { shear, depth: field.depth[s], r: field.r[s] });
   }
-  return best;
+  return { peak: best, reason: null };
 }

@@ -57,9 +57,13 @@ describe('liftability of the two-pad grip', () => {
     expect(grip).not.toBeNull();
     const tol = GRIP_TOLERANCE * base.travel;
     expect(ratioOf(grip.force)).toBeGreaterThanOrEqual(1);
-    // Independent re-runs just below and at the grip travel (one increment each, cold start).
-    const below = runSqueeze({ ...base, travel: grip.travel - 2 * tol, steps: 1 }).final;
-    const at = runSqueeze({ ...base, travel: grip.travel, steps: 1 }).final;
+    // Independent re-runs just below and at the grip travel (one increment each, cold start), on
+    // the mesh of the full run: graded to its contact estimate √(R·d) at the full travel d.
+    const meshContactRadius = Math.sqrt(0.035 * base.travel);
+    const rerun = (travel: number) =>
+      runSqueeze({ ...base, travel, steps: 1, meshContactRadius }).final;
+    const below = rerun(grip.travel - 2 * tol);
+    const at = rerun(grip.travel);
     expect(ratioOf(below.force)).toBeLessThan(1);
     // The ratio changes by (dF/dd)·tol across the bracket; with F ~ d^1.5 that is < 1e-3 here.
     expect(ratioOf(at.force) - 1).toBeLessThan(1e-3);

@@ -17,7 +17,7 @@ describe('subsurface shear from the stress influence', () => {
     });
     const { state } = stateAt(stage, 0.001, undefined, true);
     const sol = solveAt(stage, 0.001);
-    const u = stage.body.recover(sol.displacement.map((x) => x / R));
+    const u = stage.body.recover(sol.nodeDisplacement.map((x) => x / R));
     let best = 0;
     for (const s of stage.body.stresses(u)) {
       if (s.r > state.contactRadius / R) continue;
