@@ -66,6 +66,14 @@ test('an editor uploads a compression test, sees E, R² and the plot, and starts
 
   await page.getByRole('button', { name: 'Start a draft from this result' }).click();
   await expect(page).toHaveURL(/\/editor\/revisions\/\d+$/);
+  await expect(page.getByRole('heading', { level: 1 })).toContainText('Jonathan — revision');
+  const revisionId = page.url().split('/').at(-1);
+  const { revision } = await (await page.request.get(`/api/revisions/${revisionId}`)).json();
+  const apparent = revision.values.find(
+    (v: { variant: string; method: string | null }) =>
+      v.variant === 'apparent' && v.method === 'Parallel-plate compression, Hertz fit (ASAE S368)',
+  );
+  expect([apparent.value, apparent.source.kind]).toEqual([2.5, 'report']);
 
   // The list shows the test; on a phone the list and the form fit the width.
   await page.setViewportSize({ width: 390, height: 844 });
