@@ -12,7 +12,11 @@ import * as lock from '@/app/api/admin/users/[id]/sign-in-lock/route';
 import * as invitations from '@/app/api/invitations/route';
 import * as outbox from '@/app/api/admin/outbox/route';
 import * as audit from '@/app/api/admin/audit/route';
-import { changePasswordAction, signOutEverywhereAction } from '@/lib/actions/account';
+import {
+  changePasswordAction,
+  setUnitSystemAction,
+  signOutEverywhereAction,
+} from '@/lib/actions/account';
 import { clearSignInLockAction, updateUserAction } from '@/lib/actions/users';
 import { inviteAction } from '@/lib/actions/invitations';
 import { initialActionState } from '@/lib/actions/initial-state';
@@ -124,6 +128,12 @@ const ACTIONS: Row[] = [
     name: 'action changePasswordAction',
     expect: ALL_OK(200),
     call: async () => (await changePasswordAction(initialActionState, form(samePassword))).status,
+  },
+  {
+    name: 'action setUnitSystemAction',
+    expect: ALL_OK(200),
+    call: async () =>
+      (await setUnitSystemAction(initialActionState, form({ unitSystem: 'si' }))).status,
   },
   {
     name: 'action signOutEverywhereAction',
