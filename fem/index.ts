@@ -116,3 +116,32 @@ export {
   type SlipNode,
 } from './squeeze/slip-superposition';
 export { slipMapAtGrip, slipMapAtTravel, type GripSlipMap } from './squeeze/slip-map';
+export { randomStream, splitMix64, xoshiro128ss, type RandomStream } from './probability/prng';
+export {
+  samplerOf,
+  SPREAD_INPUTS,
+  type Sampler,
+  type Spread,
+  type SpreadInput,
+  type Spreads,
+} from './probability/spread';
+export {
+  quantileSorted,
+  ranks,
+  spearman,
+  wilsonInterval,
+  Z_95,
+  type Interval,
+} from './probability/statistics';
+export { gripMargin, type GripHint, type GripSample } from './probability/grip-margin';
+export { bandCentre, POISSON_BAND } from './probability/mc-samples';
+export { type Driver, type SampleSummary } from './probability/mc-summary';
+export {
+  createMonteCarlo,
+  MAX_SAMPLES,
+  type MonteCarloInput,
+  type MonteCarloOptions,
+  type MonteCarloResult,
+  type MonteCarloRun,
+} from './probability/monte-carlo';
+export { runMonteCarlo, runMonteCarloAsync } from './probability/run-monte-carlo';
