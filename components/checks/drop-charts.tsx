@@ -13,6 +13,8 @@ import {
 } from 'recharts';
 import { useUnits } from '@/components/units/units-provider';
 
+const tick = (v: number) => String(Number(v.toPrecision(3)));
+
 interface Point {
   height_mm: number;
   peak_pressure_kpa: number;
@@ -38,9 +40,10 @@ export function DropCharts({
   return (
     <div className="h-72 w-full" data-testid="drop-chart">
       <ResponsiveContainer width="100%" height="100%">
-        <LineChart data={data} margin={{ top: 10, right: 24, bottom: 24, left: 24 }}>
+        <LineChart data={data} margin={{ top: 10, right: 8, bottom: 24, left: 8 }}>
           <CartesianGrid stroke="#e7e5e4" />
           <XAxis
+            tickFormatter={tick}
             dataKey="height_mm"
             type="number"
             domain={[0, 'dataMax']}
@@ -51,6 +54,8 @@ export function DropCharts({
             }}
           />
           <YAxis
+            width={72}
+            tickFormatter={tick}
             yAxisId="p"
             label={{
               value: `peak pressure (${u.unit('kPa')})`,
@@ -59,6 +64,8 @@ export function DropCharts({
             }}
           />
           <YAxis
+            width={72}
+            tickFormatter={tick}
             yAxisId="e"
             orientation="right"
             label={{ value: `energy (${u.unit('J')})`, angle: 90, position: 'insideRight' }}

@@ -13,6 +13,8 @@ import {
 } from 'recharts';
 import { useUnits } from '@/components/units/units-provider';
 
+const tick = (v: number) => String(Number(v.toPrecision(3)));
+
 interface Point {
   depth_mm: number;
   vertical_pressure_kpa: number;
@@ -40,19 +42,24 @@ export function StackCharts({
   return (
     <div className="h-72 w-full" data-testid="stack-chart">
       <ResponsiveContainer width="100%" height="100%">
-        <LineChart data={data} margin={{ top: 10, right: 24, bottom: 24, left: 24 }}>
+        <LineChart data={data} margin={{ top: 10, right: 8, bottom: 24, left: 8 }}>
           <CartesianGrid stroke="#e7e5e4" />
           <XAxis
+            tickFormatter={tick}
             dataKey="depth_mm"
             type="number"
             domain={[0, 'dataMax']}
             label={{ value: `fill depth (${u.unit('mm')})`, position: 'insideBottom', offset: -12 }}
           />
           <YAxis
+            width={72}
+            tickFormatter={tick}
             yAxisId="p"
             label={{ value: `pressure (${u.unit('kPa')})`, angle: -90, position: 'insideLeft' }}
           />
           <YAxis
+            width={72}
+            tickFormatter={tick}
             yAxisId="m"
             orientation="right"
             label={{ value: 'margin (–)', angle: 90, position: 'insideRight' }}
