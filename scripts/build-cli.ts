@@ -16,6 +16,8 @@ export async function buildCli(outdir = path.join(root, 'dist')): Promise<string
     entryPoints: {
       tenderline: path.join(root, 'scripts/fem.ts'),
       bench: path.join(root, 'scripts/bench.ts'),
+      // The app's worker threads for the model (lib/compute/pool.ts loads it).
+      'compute-worker': path.join(root, 'lib/compute/worker-entry.ts'),
     },
     outdir,
     outExtension: { '.js': '.mjs' },
