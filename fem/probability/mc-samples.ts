@@ -1,5 +1,4 @@
-import { MAX_TRAVEL_FRACTION, type SqueezeCase, type SqueezeInput } from '../index';
-import { FemInputError } from '../errors';
+import { FemInputError, MAX_TRAVEL_FRACTION, type SqueezeCase, type SqueezeInput } from '../index';
 import { randomStream } from './prng';
 import { samplerOf, SPREAD_INPUTS, type Sampler, type SpreadInput, type Spreads } from './spread';
 
@@ -14,24 +13,32 @@ export interface SampleDesign {
   band: number;
 }
 
-/** Builds the samplers of `spreads` about the nominal values of the validated case `nominal`. */
+/**
+ * Builds the samplers of `spreads` about the nominal values of the validated case `nominal`,
+ * which needs the grip inputs (density, friction) and a bruise threshold.
+ * @throws FemInputError naming 'density', 'bruiseThreshold', 'poissonBand' or `spreads.…`
+ */
 export function designSamples(
   base: SqueezeInput,
   nominal: SqueezeCase,
   spreads: Spreads,
   band: number,
 ): SampleDesign {
+  const lift = nominal.lift;
+  if (!lift) throw new FemInputError('density', 'density and friction are needed for the grip');
+  if (lift.bruiseThreshold === null) {
+    throw new FemInputError('bruiseThreshold', 'bruiseThreshold is needed for the bruise margin');
+  }
   if (!(typeof band === 'number' && band > 0 && band <= 0.1)) {
     throw new FemInputError('poissonBand', 'poissonBand must lie in (0, 0.1]');
   }
-  const lift = nominal.lift;
   const values: Record<SpreadInput, number> = {
     modulus: nominal.modulus,
     poisson: nominal.poisson,
     size: nominal.equatorialRadius,
-    density: lift?.density ?? NaN,
-    friction: lift?.friction ?? NaN,
-    bruiseThreshold: lift?.bruiseThreshold ?? NaN,
+    density: lift.density,
+    friction: lift.friction,
+    bruiseThreshold: lift.bruiseThreshold,
   };
   const samplers = Object.fromEntries(
     SPREAD_INPUTS.map((k) => [k, samplerOf(k, values[k], spreads?.[k])]),
@@ -71,6 +78,7 @@ export function sampleInput(design: SampleDesign, x: Record<SpreadInput, number>
   if (!samplers.size.varies) return input;
   const [R, axial] =
     base.axialRadius === undefined ? [x.size, undefined] : exactRadii(x.size, nominal.aspect);
+  // A small fruit takes at most the model's largest travel (15 % of its axial radius).
   const reach = MAX_TRAVEL_FRACTION * (axial ?? R);
   return {
     ...input,

@@ -57,7 +57,7 @@ export interface MonteCarloResult extends SampleSummary {
   nominalMargin: number | null;
   /** distinct reasons of skipped samples */
   skipReasons: string[];
-  /** Poisson's ratios of the unit bodies the run used */
+  /** Poisson's ratios the samples ran at, one per band (the nominal ν when it does not vary) */
   poissonBands: number[];
 }
 
@@ -78,24 +78,18 @@ export interface MonteCarloRun {
  */
 export function createMonteCarlo(input: MonteCarloInput): MonteCarloRun {
   const nominal = validateSqueezeInput(input.base);
-  if (!nominal.lift) {
-    throw new FemInputError('density', 'density and friction are needed for the grip point');
-  }
-  if (nominal.lift.bruiseThreshold === null) {
-    throw new FemInputError('bruiseThreshold', 'bruiseThreshold is needed for the bruise margin');
-  }
-  const { samples } = input;
-  if (!Number.isInteger(samples) || samples < 1 || samples > MAX_SAMPLES) {
-    throw new FemInputError('samples', `samples must be a whole number from 1 to ${MAX_SAMPLES}`);
-  }
-  const seed = input.seed ?? 1;
-  const stream = randomStream(seed);
   const design = designSamples(
     input.base,
     nominal,
     input.spreads,
     input.poissonBand ?? POISSON_BAND,
   );
+  const { samples } = input;
+  if (!Number.isInteger(samples) || samples < 1 || samples > MAX_SAMPLES) {
+    throw new FemInputError('samples', `samples must be a whole number from 1 to ${MAX_SAMPLES}`);
+  }
+  const seed = input.seed ?? 1;
+  const stream = randomStream(seed);
   const varied = SPREAD_INPUTS.filter((k) => design.samplers[k].varies);
   const rec: SampleRecord = {
     done: 0,
