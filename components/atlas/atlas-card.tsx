@@ -12,7 +12,7 @@ function Photo({ entry }: { entry: AtlasEntry }) {
       src={`/api/photos/${entry.photo.id}/card`}
       alt={entry.photo.alt}
       className="h-full w-full object-cover"
-      loading="lazy"
+      data-testid="atlas-photo"
     />
   );
 }

@@ -18,7 +18,7 @@ function ValuesTable({ cultivar }: { cultivar: Sheet['cultivars'][number] }) {
             <th scope="row" className="w-2/5 py-1 pr-2 font-normal text-stone-600">
               {row.label}
             </th>
-            <td className="py-1 pr-2">
+            <td className="py-1 pr-2 whitespace-nowrap">
               {row.value ? (
                 <span className="num">{row.value}</span>
               ) : (
@@ -76,7 +76,7 @@ export function HandlingSheet({ sheet }: { sheet: Sheet }) {
         <h2 id="sheet-values" className="text-base font-semibold text-stone-900">
           Key published values
         </h2>
-        <div className="mt-2 grid gap-4 sm:grid-cols-2">
+        <div className="mt-2 grid gap-4 lg:grid-cols-2">
           {sheet.cultivars.map((c) => (
             <ValuesTable key={c.slug} cultivar={c} />
           ))}

@@ -19,7 +19,7 @@ export function H2({ children }: { children?: ReactNode }) {
   return (
     <h2
       id={id}
-      className="mt-10 mb-3 scroll-mt-24 border-b border-stone-200 pb-1 text-xl font-semibold text-stone-900 break-after-avoid"
+      className="clear-both mt-10 mb-3 scroll-mt-24 border-b border-stone-200 pb-1 text-xl font-semibold text-stone-900 break-after-avoid"
     >
       {children}
     </h2>

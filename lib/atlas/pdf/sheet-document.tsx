@@ -14,26 +14,25 @@ const s = StyleSheet.create({
   page: { padding: 36, paddingBottom: 48, fontFamily: PDF_SANS, fontSize: 9, color: '#1c1917' },
   kicker: { fontSize: 7.5, color: LEAF, letterSpacing: 1 },
   title: { fontSize: 20, fontFamily: 'Helvetica-Bold', marginTop: 2 },
-  summary: { marginTop: 4, lineHeight: 1.35 },
+  summary: { marginTop: 4 },
   meta: { marginTop: 4, fontSize: 8, color: GREY },
   rule: { borderBottomWidth: 1.5, borderBottomColor: LEAF, paddingBottom: 8, marginBottom: 10 },
   h2: { fontSize: 11, fontFamily: 'Helvetica-Bold', marginTop: 10, marginBottom: 5 },
   stages: { flexDirection: 'row', flexWrap: 'wrap' },
   stage: { width: '50%', paddingRight: 10, marginBottom: 6 },
   stageName: { fontFamily: 'Helvetica-Bold', marginBottom: 1.5 },
-  bullet: { flexDirection: 'row', marginBottom: 1.5, lineHeight: 1.3 },
+  bullet: { flexDirection: 'row', marginBottom: 1.5 },
   dot: { width: 8 },
-  tables: { flexDirection: 'row', flexWrap: 'wrap' },
-  table: { width: '50%', paddingRight: 10, marginBottom: 6 },
+  table: { marginBottom: 8 },
   cultivar: { fontFamily: 'Helvetica-Bold', marginBottom: 2 },
   row: { flexDirection: 'row', borderTopWidth: 0.5, borderTopColor: '#d6d3d1', paddingVertical: 2 },
-  label: { width: '42%', color: GREY, paddingRight: 4 },
-  value: { width: '36%', fontFamily: PDF_MONO, fontSize: 8, paddingRight: 4 },
-  missing: { width: '36%', color: '#a8a29e', paddingRight: 4 },
-  cite: { width: '22%', color: GREY, fontSize: 7.5 },
+  label: { width: '32%', color: GREY, paddingRight: 4 },
+  value: { width: '30%', fontFamily: PDF_MONO, fontSize: 8, paddingRight: 4 },
+  missing: { width: '30%', color: '#a8a29e', paddingRight: 4 },
+  cite: { width: '38%', color: GREY, fontSize: 7.5 },
   caution: { marginTop: 8, padding: 6, backgroundColor: '#fbf4ec', borderLeftWidth: 3 },
   cautionTitle: { fontFamily: 'Helvetica-Bold', color: CLAY, marginBottom: 2 },
-  small: { fontSize: 7.5, color: GREY, marginBottom: 1.5, lineHeight: 1.3 },
+  small: { fontSize: 7.5, color: GREY, marginBottom: 1.5 },
   footer: { position: 'absolute', bottom: 22, left: 36, right: 36, fontSize: 7, color: GREY },
 });
 
@@ -61,7 +60,7 @@ function Rules({ sheet }: { sheet: HandlingSheet }) {
 
 function Values({ sheet }: { sheet: HandlingSheet }) {
   return (
-    <View style={s.tables}>
+    <View>
       {sheet.cultivars.map((c) => (
         <View key={c.slug} style={s.table} wrap={false}>
           <Text style={s.cultivar}>
@@ -101,14 +100,18 @@ export function SheetDocument({ sheet }: { sheet: HandlingSheet }) {
         </View>
         <Text style={s.h2}>Handling rules along the line</Text>
         <Rules sheet={sheet} />
-        <Text style={s.h2}>Key published values</Text>
+        <Text style={s.h2} minPresenceAhead={120}>
+          Key published values
+        </Text>
         <Values sheet={sheet} />
         <View style={[s.caution, { borderLeftColor: CLAY }]} wrap={false}>
           <Text style={s.cautionTitle}>Caution</Text>
           <Text style={s.small}>{t(STANDING_CAUTION)}</Text>
           <Text style={s.small}>{t(MACHINERY_CAUTION)}</Text>
         </View>
-        <Text style={s.h2}>Sources</Text>
+        <Text style={s.h2} minPresenceAhead={40}>
+          Sources
+        </Text>
         {sheet.sources.map((src) => (
           <Text key={src.key} style={s.small}>
             {t(`${shortCitation(src)}: ${src.title}${src.venue ? `, ${src.venue}` : ''}.`)}

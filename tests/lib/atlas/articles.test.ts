@@ -76,6 +76,11 @@ describe('Atlas articles', () => {
       expect(article.body).toContain('<StandingCaution />');
     });
 
+    it('never starts a line with an inline component (it would become a paragraph of its own)', () => {
+      const lines = article.body.split('\n').filter((l) => /^<(SourceRef|MarginBadge)\b/.test(l));
+      expect(lines).toEqual([]);
+    });
+
     it('renders: formulas through KaTeX, the GFM table, live cards, citations and anchors', async () => {
       const { content, sources } = await renderArticle(buyer, article);
       const html = await renderHtml(content);

@@ -2,11 +2,15 @@ import 'katex/dist/katex.min.css';
 import type { Metadata } from 'next';
 import { notFound } from 'next/navigation';
 import { ArticleLayout } from '@/components/atlas/article-layout';
+import { listAllArticles } from '@/lib/atlas/articles';
 import { getAtlasArticle } from '@/lib/atlas/entries';
 import { renderArticle } from '@/lib/atlas/render';
 import { requirePageActor } from '@/lib/auth/session';
 
 type Props = { params: Promise<{ commodity: string }> };
+
+// Read and checked when the route module loads, so `next build` stops on a bad frontmatter.
+listAllArticles();
 
 export async function generateMetadata({ params }: Props): Promise<Metadata> {
   const actor = await requirePageActor('atlas:read');
