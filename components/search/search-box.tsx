@@ -10,8 +10,7 @@ import {
   useState,
   type KeyboardEvent,
 } from 'react';
-import { MAX_QUERY_LENGTH } from '@/lib/search/query';
-import type { SearchHit } from '@/lib/search/types';
+import { MAX_QUERY_LENGTH, type SearchHit } from '@/lib/search/types';
 import { optionId, SearchResults } from './search-results';
 import { useSearch, type SearchState } from './use-search';
 

@@ -1,6 +1,5 @@
 import { z } from 'zod';
-
-export const MAX_QUERY_LENGTH = 100;
+import { MAX_QUERY_LENGTH } from './types';
 
 /** `GET /api/search?q=`: a missing q is an empty search; over 100 characters is refused. */
 export const searchQuerySchema = z.object({

@@ -1,3 +1,6 @@
+/** The longest query the search accepts (the box stops typing there; the API answers 400). */
+export const MAX_QUERY_LENGTH = 100;
+
 /** What a search result can be, in the order the results box shows the groups. */
 export const SEARCH_KINDS = ['commodity', 'cultivar', 'section', 'source'] as const;
 export type SearchKind = (typeof SEARCH_KINDS)[number];
