@@ -1,0 +1,147 @@
+/**
+ * Route latency against the built app on loopback (autocannon): a fresh seeded database, the
+ * app server, an engineer signed in; then for each check route 200 sequential requests and 20
+ * concurrent connections (400 requests), and a page load timed while the concurrent run is on.
+ * Needs `next build` first. Run: `npx tsx scripts/bench-routes.ts`.
+ * Targets (squeeze): warm p50 ≤ 50 ms, p95 ≤ 200 ms at 20 concurrent.
+ */
+import { spawn } from 'node:child_process';
+import fs from 'node:fs';
+import path from 'node:path';
+import autocannon from 'autocannon';
+
+const PORT = Number(process.env.BENCH_PORT ?? 3390);
+const ORIGIN = `http://127.0.0.1:${PORT}`;
+const ROUTES: Record<string, unknown> = {
+  '/api/checks/drop': {
+    modulusMpa: 3,
+    poisson: 0.35,
+    diameterMm: 80,
+    massG: 200,
+    heightMm: 150,
+    surface: 'steel',
+  },
+  '/api/checks/stack': {
+    modulusMpa: 3,
+    poisson: 0.35,
+    diameterMm: 80,
+    massG: 200,
+    staticThresholdKpa: 100,
+    binLengthMm: 1200,
+    binWidthMm: 1000,
+    fillDepthMm: 600,
+  },
+  '/api/checks/squeeze': {
+    modulusMpa: 3,
+    poisson: 0.35,
+    diameterMm: 80,
+    massG: 200,
+    staticThresholdKpa: 100,
+    padDiameterMm: 20,
+    padEdgeMm: 2,
+    friction: 0.5,
+    safetyFactor: 2,
+    accelerationMs2: 2,
+    maxTravelMm: 2,
+  },
+};
+
+async function waitFor(url: string, ms = 90_000) {
+  const until = Date.now() + ms;
+  while (Date.now() < until) {
+    if (
+      await fetch(url).then(
+        (r) => r.ok,
+        () => false,
+      )
+    )
+      return;
+    await new Promise((r) => setTimeout(r, 300));
+  }
+  throw new Error(`${url} did not answer in ${ms / 1000} s`);
+}
+
+async function signIn(): Promise<string> {
+  const csrf = await fetch(`${ORIGIN}/api/auth/csrf`);
+  const cookie = csrf.headers
+    .getSetCookie()
+    .map((c) => c.split(';')[0])
+    .join('; ');
+  const { csrfToken } = (await csrf.json()) as { csrfToken: string };
+  const res = await fetch(`${ORIGIN}/api/auth/callback/credentials`, {
+    method: 'POST',
+    headers: { 'content-type': 'application/x-www-form-urlencoded', cookie, origin: ORIGIN },
+    body: new URLSearchParams({
+      email: 'engineer@kestrelvale.example',
+      password: 'kestrel-demo-2026',
+      csrfToken,
+      json: 'true',
+    }),
+    redirect: 'manual',
+  });
+  const session = res.headers
+    .getSetCookie()
+    .map((c) => c.split(';')[0])
+    .join('; ');
+  if (!session.includes('session-token')) throw new Error('sign-in failed');
+  return `${cookie}; ${session}`;
+}
+
+function load(route: string, body: unknown, cookie: string, connections: number, amount: number) {
+  return autocannon({
+    url: ORIGIN + route,
+    method: 'POST',
+    connections,
+    amount,
+    headers: { 'content-type': 'application/json', cookie, origin: ORIGIN },
+    body: JSON.stringify(body),
+  });
+}
+
+async function pageWhileLoaded(route: string, body: unknown, cookie: string): Promise<number> {
+  const running = load(route, body, cookie, 20, 200);
+  await new Promise((r) => setTimeout(r, 300));
+  const t = performance.now();
+  await fetch(`${ORIGIN}/checks`, { headers: { cookie } });
+  const ms = performance.now() - t;
+  await running;
+  return ms;
+}
+
+const server = spawn(process.execPath, ['node_modules/.bin/tsx', 'scripts/e2e-server.ts'], {
+  env: { ...process.env, E2E_PORT: String(PORT) },
+  stdio: ['ignore', 'ignore', 'inherit'],
+});
+try {
+  await waitFor(`${ORIGIN}/sign-in`);
+  const cookie = await signIn();
+  console.log('route latency (ms), built app on loopback, engineer signed in');
+  console.log(
+    'route                   | 200 sequential p50 / p95 | 20 concurrent p50 / p95 | errors | page load under load',
+  );
+  for (const [route, body] of Object.entries(ROUTES)) {
+    const probe = await fetch(ORIGIN + route, {
+      method: 'POST',
+      headers: { 'content-type': 'application/json', cookie, origin: ORIGIN },
+      body: JSON.stringify(body),
+    });
+    if (probe.status === 404) continue; // a check not built yet
+    const seq = await load(route, body, cookie, 1, 200);
+    const par = await load(route, body, cookie, 20, 400);
+    const page = await pageWhileLoaded(route, body, cookie);
+    const row = [
+      route.padEnd(23),
+      `${seq.latency.p50} / ${seq.latency.p97_5}`.padStart(24),
+      `${par.latency.p50} / ${par.latency.p97_5}`.padStart(23),
+      String(seq.non2xx + par.non2xx + seq.errors + par.errors).padStart(6),
+      `${page.toFixed(0)} ms`.padStart(20),
+    ];
+    console.log(row.join(' | '));
+  }
+  console.log('(autocannon reports p97.5 as its nearest percentile above p95)');
+} finally {
+  server.kill('SIGTERM');
+  for (const f of fs.readdirSync('data').filter((f) => f.startsWith(`e2e-${PORT}`))) {
+    fs.rmSync(path.join('data', f), { recursive: true, force: true });
+  }
+}
