@@ -33,9 +33,13 @@ test('a buyer searches by keyboard, reads the apple article with live values and
   await expect(card).toContainText('2.52 MPa (2.36–3.28)');
   await expect(card).toContainText('no published value');
   await expect(page.locator('.katex-display').first()).toBeVisible();
+  // The stylesheet's @font-face rules must be there and their files loaded under font-src 'self'.
   const katexFont = await page.evaluate(async () => {
     await document.fonts.ready;
-    return document.fonts.check('16px KaTeX_Main') && document.fonts.check('16px KaTeX_Math');
+    const loaded = [...document.fonts].filter((f) => f.status === 'loaded');
+    return ['KaTeX_Main', 'KaTeX_Math'].every((family) =>
+      loaded.some((f) => f.family.replace(/["']/g, '') === family),
+    );
   });
   expect(katexFont, 'KaTeX fonts loaded').toBe(true);
   await expect(page.locator('#source-shahabasi-1979')).toContainText('Shahabasi');
