@@ -10,6 +10,7 @@ export {
   MESH_LEVELS,
   type BodyModel,
   type CondensedBody,
+  type EdgeBand,
   type MeshLevel,
   type StressSample,
   type UnitBodyKey,
@@ -29,6 +30,13 @@ export {
   getCondensedBody,
   type FemBody,
 } from './body/cache';
+export {
+  contactBandOf,
+  contactScaleOf,
+  poissonBandOf,
+  CONTACT_SCALE_MAX,
+  CONTACT_SCALE_MIN,
+} from './body/grading';
 export * from './closed-form';
 export { solveContact, type ContactOptions, type ContactSolution } from './solver/active-set';
 export { createContactSystem, type ContactSystem } from './solver/compliance';
@@ -38,13 +46,22 @@ export { createContactSystem, type ContactSystem } from './solver/compliance';
 // 06 liftability → 07 run (runSqueeze) → 08 sweep (sweepPadDiameters).
 export {
   validateSqueezeInput,
+  DEFAULT_FACING_POISSON,
   MAX_TRAVEL_FRACTION,
+  type FacingInput,
   type LiftInput,
   type SqueezeCase,
   type SqueezeInput,
 } from './squeeze/01-input';
 export { prepareBody, type BodyStage } from './squeeze/02-body';
-export { padForce, prepareContact, solveAt, type ContactStage } from './squeeze/03-contact';
+export {
+  padForce,
+  prepareContact,
+  solveAt,
+  type ContactStage,
+  type FacingStage,
+  type StageSolution,
+} from './squeeze/03-contact';
 export {
   contactRadius,
   preparePressure,
@@ -73,10 +90,13 @@ export {
   type PressurePoint,
 } from './squeeze/06-liftability';
 export {
+  meshSummary,
+  regradeRadius,
   runCase,
   runSqueeze,
   squeezeWarnings,
   type CaseRun,
+  type MeshSummary,
   type SqueezeResult,
 } from './squeeze/07-run';
 export { sweepPadDiameters, type PadSweepPoint } from './squeeze/08-sweep';
@@ -98,13 +118,30 @@ export {
   type PadGeometry,
   type PadSpec,
 } from './squeeze/pad';
+export {
+  contactPoints,
+  nodesToPoints,
+  pointsToNodes,
+  type ContactPoints,
+} from './squeeze/contact-points';
 export { recoverPressure, surfaceWeights, type SurfaceWeights } from './squeeze/pressure-recovery';
 export {
   getShearField,
   maxShearUnder,
   type ShearField,
   type ShearPeak,
+  type ShearUnder,
 } from './squeeze/shear-field';
+export { stateWarnings } from './squeeze/state-warnings';
+export {
+  inputWarnings,
+  CHECKED_POISSON,
+  FACING_STRAIN_LIMIT,
+  MIN_CONTACT_NODES,
+  SMALL_TRAVEL_FRACTION,
+  type SqueezeWarning,
+  type SqueezeWarningCode,
+} from './squeeze/warnings';
 
 // Slip map at the grip (fem/squeeze/slip-*.ts) and the probability of bruising
 // (fem/probability/): both run the squeeze only through the exports above.

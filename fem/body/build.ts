@@ -25,6 +25,8 @@ export interface FemBody extends CondensedBody {
   surfaceNodes: Int32Array;
   /** mesh node index of each candidate contact node (same order as contactR / contactZ / K) */
   contactNodes: Int32Array;
+  /** recover() for several contact-displacement vectors, only at the DOFs `at` (unchecked) */
+  recoverAt(ucs: Float64Array[], at: Int32Array): Float64Array[];
   /**
    * Multiply the sum of the contact-node forces by this for the whole pad force: 1 for the
    * axisymmetric model (ring forces), 2 for plane strain (the model is the half slice x ≥ 0).
@@ -54,6 +56,7 @@ export function buildCondensedBody(key: UnitBodyKey): FemBody {
       requireAllFinite('uc', uc, nc, 'contact displacements');
       return sys.recover(uc);
     },
+    recoverAt: (ucs: Float64Array[], at: Int32Array) => sys.recoverAt(ucs, at),
     stresses(u: Float64Array): StressSample[] {
       requireAllFinite('u', u, dofs, 'displacements');
       return centroidStresses(mesh, key.model, 1, key.poisson, u);

@@ -4,8 +4,9 @@ import type { EdgeBand, MeshLevel } from '../types';
 
 /** Contact-scale bands are 2^(1/4) apart; the mesh is graded to the band's lower end. */
 const BANDS_PER_OCTAVE = 4;
-/** Smallest and largest contact radius (unit body) a mesh is graded to. */
+/** Smallest contact radius (unit body) a mesh is graded to; smaller contacts get this grading. */
 export const CONTACT_SCALE_MIN = 0.002;
+/** Largest contact radius (unit body) a mesh is graded to (the travel limit keeps a below it). */
 export const CONTACT_SCALE_MAX = 0.4;
 /** Pad-edge bands: edges of the refined band sit on multiples of this many band spacings. */
 const EDGE_GRID = 8;
@@ -129,16 +130,19 @@ export function poissonBandOf(poisson: number): number {
 }
 
 /**
- * Radius and depth (unit body) of the zone where subsurface stresses are sampled: 4× the graded
- * contact radius, or the refined edge band when it reaches further, at most the candidate
- * contact zone (0.6); the whole candidate zone for a body without a contact band.
+ * Radius (unit body) of the zone where subsurface stresses are sampled: 1.5× the graded contact
+ * radius (the contact at the full travel reaches about 1.3× it: the band's lower end is within
+ * 2^(1/4) of the Hertz estimate, and the finite body's contact is a few per cent larger), or
+ * the refined edge band when it reaches further, at most the candidate contact zone (0.6); the
+ * whole candidate zone for a body without a contact band. A larger contact makes the run
+ * regrade its mesh to it (see runCase).
  */
 export function shearZoneOf(key: { contactBand?: number; edgeBand?: EdgeBand }): number {
   if (key.contactBand === undefined) return 0.6;
-  let zone = 4 * contactScaleOf(key.contactBand);
+  let zone = 1.5 * contactScaleOf(key.contactBand);
   if (key.edgeBand) {
     const h = 2 ** (key.edgeBand.spacing / 2);
-    zone = Math.max(zone, 1.25 * key.edgeBand.hi * EDGE_GRID * h);
+    zone = Math.max(zone, key.edgeBand.hi * EDGE_GRID * h);
   }
   return Math.min(zone, 0.6);
 }

@@ -10,6 +10,11 @@ export interface CondensedSystem {
   kstar: Float64Array;
   /** full DOF vector from the kept DOFs' values, no load on the condensed DOFs, 0 on fixed DOFs */
   recover(uc: ArrayLike<number>): Float64Array;
+  /**
+   * recover() for several kept-DOF vectors in one sweep of the factor, returning only the DOFs
+   * `at` (each result lists their values in that order); the sweep stops once they are known.
+   */
+  recoverAt(ucs: ArrayLike<number>[], at: ArrayLike<number>): Float64Array[];
   /** stored entries of the skyline factor (memory measure) */
   profile: number;
 }
@@ -71,5 +76,40 @@ export function condense(
     for (let i = 0; i < nc; i++) u[keep[i]] = uc[i];
     return u;
   };
-  return { nKeep: nc, kstar, recover, profile: sky.profile };
+  const position = new Int32Array(nTotal).fill(-1);
+  for (let i = 0; i < nf; i++) position[orderF[i]] = i;
+  for (let i = 0; i < nc; i++) position[keep[i]] = nf + i;
+  const recoverAt = (ucs: ArrayLike<number>[], at: ArrayLike<number>): Float64Array[] => {
+    const k = ucs.length;
+    const uk = new Float64Array(nc * k);
+    ucs.forEach((uc, c) => {
+      for (let i = 0; i < nc; i++) uk[i * k + c] = uc[i];
+    });
+    const x = new Float64Array(nf * k);
+    for (let i = 0; i < nc; i++) {
+      const row = nf + i;
+      const base = ptr[row] - first[row];
+      const ui = i * k;
+      for (let kk = first[row]; kk < nf; kk++) {
+        const l = data[base + kk];
+        if (l === 0) continue;
+        const xk = kk * k;
+        for (let c = 0; c < k; c++) x[xk + c] -= l * uk[ui + c];
+      }
+    }
+    let stop = nf;
+    for (let j = 0; j < at.length; j++) {
+      if (position[at[j]] >= 0) stop = Math.min(stop, position[at[j]]);
+    }
+    sky.backSubstituteBlock(x, nf, k, stop);
+    return ucs.map((uc, c) => {
+      const out = new Float64Array(at.length);
+      for (let j = 0; j < at.length; j++) {
+        const q = position[at[j]];
+        out[j] = q < 0 ? 0 : q < nf ? x[q * k + c] : uc[q - nf];
+      }
+      return out;
+    });
+  };
+  return { nKeep: nc, kstar, recover, recoverAt, profile: sky.profile };
 }

@@ -115,4 +115,24 @@ export class SkylineMatrix {
       for (let k = first[i]; k < i; k++) x[k] -= a[pi + k] * xi;
     }
   }
+
+  /**
+   * backSubstitute for `k` right-hand sides at once: `x` holds them row-major (m × k, equation
+   * i's values at x[i·k .. i·k + k)), so one sweep of the profile serves every column. With
+   * `stop` > 0 only equations stop..m−1 are solved (the sweep runs from the last equation down,
+   * and each is final when reached).
+   */
+  backSubstituteBlock(x: Float64Array, m: number, k: number, stop = 0): void {
+    const { first, ptr, data: a } = this;
+    for (let i = m - 1; i >= stop; i--) {
+      const pi = ptr[i] - first[i];
+      const xi = i * k;
+      for (let q = first[i]; q < i; q++) {
+        const l = a[pi + q];
+        if (l === 0) continue;
+        const xq = q * k;
+        for (let c = 0; c < k; c++) x[xq + c] -= l * x[xi + c];
+      }
+    }
+  }
 }

@@ -41,10 +41,15 @@ export interface SqueezeInput {
   padDiameter?: number;
   /** radius of the pad's rounded edge r_e, m (0 < r_e < D/2; default 2 mm) */
   edgeRadius?: number;
-  /** modulus E_l of a compliant facing layer, Pa; give with facingThickness, omit both for rigid */
+  /**
+   * Young's modulus E_l of a compliant facing on the pad, Pa: an elastic layer of its own,
+   * bonded to the rigid pad; give with facingThickness, omit both for a rigid pad face
+   */
   facingModulus?: number;
   /** thickness t_l of the facing layer, m */
   facingThickness?: number;
+  /** Poisson's ratio of the facing, in [0, 0.5) (default 0.45, with a warning) */
+  facingPoisson?: number;
   /** flesh density, kg/m³ (with friction: enables liftability) */
   density?: number;
   /** pad–fruit Coulomb friction coefficient μ (> 0) */
@@ -73,10 +78,22 @@ export interface SqueezeCase {
   /** contact radius the mesh is graded to, m; null = the Hertz estimate at the full travel */
   meshContactRadius: number | null;
   pad: PadGeometry;
-  /** Winkler stiffness of the facing per unit area E_l / t_l, Pa/m; null = rigid */
-  facingStiffness: number | null;
+  /** the pad's elastic facing layer; null = rigid pad face */
+  facing: FacingInput | null;
   lift: LiftInput | null;
 }
+
+/** A pad facing, validated: modulus (Pa), thickness (m), Poisson's ratio. */
+export interface FacingInput {
+  modulus: number;
+  thickness: number;
+  poisson: number;
+  /** true when facingPoisson was not given and the default was used */
+  poissonAssumed: boolean;
+}
+
+/** Poisson's ratio of a facing when none is given. */
+export const DEFAULT_FACING_POISSON = 0.45;
 
 /** Liftability inputs, validated (see SqueezeInput for units). */
 export interface LiftInput {
@@ -142,19 +159,28 @@ export function validateSqueezeInput(input: SqueezeInput): SqueezeCase {
     mesh,
     meshContactRadius,
     pad,
-    facingStiffness: facing(input),
+    facing: facing(input),
     lift: liftInput(input),
   };
 }
 
-function facing(input: SqueezeInput): number | null {
-  const { facingModulus: em, facingThickness: t } = input;
-  if (em === undefined && t === undefined) return null;
+function facing(input: SqueezeInput): FacingInput | null {
+  const { facingModulus: em, facingThickness: t, facingPoisson: nu } = input;
+  if (em === undefined && t === undefined) {
+    if (nu !== undefined)
+      throw new FemInputError('facingPoisson', 'facingPoisson needs facingModulus');
+    return null;
+  }
   if (em === undefined)
     throw new FemInputError('facingModulus', 'facingModulus is needed with facingThickness');
   if (t === undefined)
     throw new FemInputError('facingThickness', 'facingThickness is needed with facingModulus');
-  return requirePositive('facingModulus', em) / requirePositive('facingThickness', t);
+  return {
+    modulus: requirePositive('facingModulus', em),
+    thickness: requirePositive('facingThickness', t),
+    poisson: nu === undefined ? DEFAULT_FACING_POISSON : requirePoisson('facingPoisson', nu),
+    poissonAssumed: nu === undefined,
+  };
 }
 
 function liftInput(input: SqueezeInput): LiftInput | null {

@@ -37,8 +37,10 @@ export interface SqueezeState {
   maxShearUnavailable: string | null;
   /** lift ratio μ·2F / (SF·m·(g + a)), set by the liftability stage; null without its inputs */
   liftRatio: number | null;
-  /** contact nodes in contact */
+  /** contact points in contact (surface nodes, and the pad's edge point when it touches) */
   activeNodes: number;
+  /** largest compression of the pad's facing over its thickness (0.2 = 20 %); null if rigid */
+  facingStrain: number | null;
 }
 
 /** A state with the nodal pressures (Pa) and the active set it came from. */
@@ -86,6 +88,7 @@ export function stateAt(
     maxShearUnavailable,
     liftRatio: null,
     activeNodes: at.solution.active.reduce((s, x) => s + x, 0),
+    facingStrain: at.solution.facingStrain,
   };
   return { state, pressure: at.pressure, active: at.solution.active };
 }

@@ -1,7 +1,9 @@
 /**
  * Stage 7 of the squeeze pipeline: one squeeze case run through the increments and the grip of
- * stage 6, with its pressure profile, Hertz comparison and warnings.
+ * stage 6, regraded once when its contact is under-resolved, with its pressure profile, Hertz
+ * comparison and warnings.
  */
+import { contactBandOf, contactScaleOf } from '../body/grading';
 import type { MeshLevel } from '../types';
 import type { SqueezeCase, SqueezeInput } from './01-input';
 import type { SqueezeState } from './05-shear';
@@ -16,19 +18,39 @@ import {
   type PressurePoint,
 } from './06-liftability';
 import { hertzComparison, type HertzComparison } from './hertz';
+import { padReach } from './pad';
+import { stateWarnings } from './state-warnings';
+import { inputWarnings, MIN_CONTACT_NODES, uniqueWarnings, type SqueezeWarning } from './warnings';
+
+/** Size and grading of the body a result was computed on. */
+export interface MeshSummary {
+  level: MeshLevel;
+  nodes: number;
+  dofs: number;
+  /** candidate contact nodes */
+  contactNodes: number;
+  /** contact radius the mesh near the pole is graded to, m */
+  gradedContactRadius: number;
+  /** node spacing of the refined band at the pad's edge, m; null without one */
+  edgeBandSpacing: number | null;
+}
 
 /** Full result of a squeeze run, SI; never holds NaN or Infinity. */
 export interface SqueezeResult {
   input: SqueezeCase;
-  mesh: { level: MeshLevel; nodes: number; dofs: number; contactNodes: number };
+  /** the body of the increments and the final state */
+  mesh: MeshSummary;
+  /** the body the grip was found on when the run regraded for it (a small grip contact), else null */
+  gripMesh: MeshSummary | null;
   /** one state per increment, travel rising to the requested travel */
   steps: SqueezeState[];
   final: SqueezeState;
-  /** pressure along the candidate contact nodes at the final travel */
+  /** pressure along the contact points at the final travel */
   profile: PressurePoint[];
   liftability: Liftability | null;
   hertz: HertzComparison;
-  warnings: string[];
+  /** plain-word warnings with stable codes (changed from string[] in this edition) */
+  warnings: SqueezeWarning[];
 }
 
 /** A case run through its increments and grip search, before it is summarised. */
@@ -36,52 +58,104 @@ export interface CaseRun {
   stage: LiftStage;
   track: IncrementTrack[];
   liftability: Liftability | null;
+  /** the regraded stage the grip was found on, when it was not `stage` */
+  gripStage: LiftStage | null;
 }
 
-/** Prepares `input` (stage 6) and runs its increments (shear optional) and grip search. */
-export function runCase(input: SqueezeInput, withShear: boolean): CaseRun {
+function runOnce(input: SqueezeInput, withShear: boolean): Omit<CaseRun, 'gripStage'> {
   const stage = prepareLift(input);
   const track = runIncrements(stage, withShear);
   return { stage, track, liftability: findLiftability(stage, track) };
 }
 
-/** Warnings for a state: the pad's own (sharp edge) and contact spreading onto the rounded edge. */
-export function squeezeWarnings(stage: LiftStage, state: SqueezeState): string[] {
-  const warnings = [...stage.case.pad.warnings];
-  const flat = stage.case.pad.flatRadius;
-  if (flat !== null && state.contactRadius > flat) {
-    warnings.push(
-      'The contact spreads onto the rounded edge of the pad: the pressure rises at the edge, and ' +
-        'a larger pad or a softer facing would spread the load.',
-    );
-  }
-  return warnings;
+/**
+ * The contact radius (m) to regrade the mesh to when `state` has fewer than MIN_CONTACT_NODES
+ * points in contact or its shear could not be sampled, or null when the state is resolved or
+ * regrading would not change the mesh (the contact-scale band is the same).
+ */
+export function regradeRadius(stage: LiftStage, state: SqueezeState): number | null {
+  if (!(state.force > 0)) return null;
+  if (state.activeNodes >= MIN_CONTACT_NODES && state.maxShearUnavailable === null) return null;
+  const band = contactBandOf(state.contactRadius / stage.case.equatorialRadius);
+  return band === stage.body.key.contactBand ? null : state.contactRadius;
+}
+
+/**
+ * Prepares `input` (stage 6) and runs its increments (shear optional) and grip search. When the
+ * final state or the grip has fewer than MIN_CONTACT_NODES points in contact, or its shear could
+ * not be sampled, the case runs once more on a mesh graded to that contact (unless the input
+ * fixes `meshContactRadius`). A regrade for the final state serves the whole run; one for the
+ * grip alone keeps the increments of the first run and takes the grip from the second.
+ */
+export function runCase(input: SqueezeInput, withShear: boolean): CaseRun {
+  const first = runOnce(input, withShear);
+  if (input.meshContactRadius !== undefined) return { ...first, gripStage: null };
+  const grip = first.liftability?.grip ?? null;
+  const forFinal = regradeRadius(first.stage, first.track[first.track.length - 1].state);
+  const forGrip = grip ? regradeRadius(first.stage, grip) : null;
+  if (forFinal === null && forGrip === null) return { ...first, gripStage: null };
+  const target = Math.min(forFinal ?? Infinity, forGrip ?? Infinity);
+  const second = runOnce({ ...input, meshContactRadius: target }, withShear);
+  if (forFinal !== null) return { ...second, gripStage: null };
+  return { ...first, liftability: second.liftability, gripStage: second.stage };
+}
+
+/** Mesh summary of a stage's body. */
+export function meshSummary(stage: LiftStage): MeshSummary {
+  const { body, case: c } = stage;
+  const edge = body.key.edgeBand;
+  return {
+    level: c.mesh,
+    nodes: body.nodes,
+    dofs: body.dofs,
+    contactNodes: body.contactR.length,
+    gradedContactRadius: contactScaleOf(body.key.contactBand ?? 0) * c.equatorialRadius,
+    edgeBandSpacing: edge ? 2 ** (edge.spacing / 2) * c.equatorialRadius : null,
+  };
+}
+
+/**
+ * The warnings of a case with one of its states (`where` names it in the messages, e.g.
+ * 'at the grip'): the pad's, the inputs' and the state's (see stateWarnings), each once.
+ */
+export function squeezeWarnings(
+  stage: LiftStage,
+  state: SqueezeState,
+  where = 'at the full travel',
+): SqueezeWarning[] {
+  const c = stage.case;
+  return uniqueWarnings([
+    ...c.pad.warnings,
+    ...inputWarnings(c),
+    ...stateWarnings(c, padReach(c.pad), state, where),
+  ]);
 }
 
 /**
  * Squeeze check: two identical pads squeeze the fruit, each moving `travel` (m) toward the centre
  * in `steps` equal increments. Returns force, contact radius, pressures and subsurface shear per
  * increment (SI, compressive positive), the pressure profile at full travel, the grip point and
- * margins when liftability inputs are given, and Hertz figures for comparison.
+ * margins when liftability inputs are given, Hertz figures for comparison, and warnings.
  * @throws FemInputError (field named) for bad input; FemConvergenceError if contact does not settle
  */
 export function runSqueeze(input: SqueezeInput): SqueezeResult {
-  const { stage, track, liftability } = runCase(input, true);
+  const { stage, track, liftability, gripStage } = runCase(input, true);
   const last = track[track.length - 1];
-  const { body } = stage;
+  const c = stage.case;
+  const grip = liftability?.grip ?? null;
+  const warnings = [
+    ...squeezeWarnings(stage, last.state),
+    ...(grip ? stateWarnings(c, padReach(c.pad), grip, 'at the grip') : []),
+  ];
   return {
-    input: stage.case,
-    mesh: {
-      level: stage.case.mesh,
-      nodes: body.nodes,
-      dofs: body.dofs,
-      contactNodes: stage.r.length,
-    },
+    input: c,
+    mesh: meshSummary(stage),
+    gripMesh: gripStage ? meshSummary(gripStage) : null,
     steps: track.map((t) => t.state),
     final: last.state,
     profile: profileOf(stage, last.pressure),
     liftability,
-    hertz: hertzComparison(stage.case, stage.case.travel, last.state.force),
-    warnings: squeezeWarnings(stage, last.state),
+    hertz: hertzComparison(c, c.travel, last.state.force),
+    warnings: uniqueWarnings(warnings),
   };
 }

@@ -4,6 +4,7 @@
 import { FemInputError } from '../errors';
 import type { SqueezeInput } from './01-input';
 import { runCase, squeezeWarnings } from './07-run';
+import type { SqueezeWarning } from './warnings';
 
 /** One pad size of a sweep, SI; margins > 1 are safe, null when not computable. */
 export interface PadSweepPoint {
@@ -20,8 +21,8 @@ export interface PadSweepPoint {
   shearMargin: number | null;
   /** why there is no grip, or null */
   reason: string | null;
-  /** pad warnings, and whether the contact at the grip (or full travel) reaches the rounded edge */
-  warnings: string[];
+  /** pad warnings, and those of the grip (or the full travel without one), with codes */
+  warnings: SqueezeWarning[];
 }
 
 /**
@@ -51,7 +52,7 @@ export function sweepPadDiameters(
       bruiseMargin: grip?.bruiseMargin ?? null,
       shearMargin: grip?.shearMargin ?? null,
       reason: lift === null ? 'no liftability inputs (density and friction)' : lift.reason,
-      warnings: squeezeWarnings(stage, grip ?? final),
+      warnings: squeezeWarnings(stage, grip ?? final, grip ? 'at the grip' : 'at the full travel'),
     };
   });
 }

@@ -1,5 +1,6 @@
 import { FemInputError } from '../errors';
 import { requirePositive } from '../validate';
+import type { SqueezeWarning } from './warnings';
 
 /** Default radius of the rounded edge of a finite pad (m). */
 export const DEFAULT_EDGE_RADIUS = 0.002;
@@ -18,7 +19,7 @@ export interface PadGeometry {
   edgeRadius: number | null;
   /** radius (m) of the flat part of the face; null for a plate */
   flatRadius: number | null;
-  warnings: string[];
+  warnings: SqueezeWarning[];
 }
 
 /** Pad inputs in SI (m): omit `diameter` for an infinite flat plate. */
@@ -47,12 +48,14 @@ export function createPad(spec: PadSpec): PadGeometry {
   if (edgeRadius >= half) {
     throw new FemInputError('edgeRadius', 'edgeRadius must be less than half the padDiameter');
   }
-  const warnings: string[] = [];
+  const warnings: SqueezeWarning[] = [];
   if (edgeRadius < SHARP_EDGE_RADIUS) {
-    warnings.push(
-      'The pad edge radius is below 0.2 mm: a sharp edge gives a singular edge pressure, so the ' +
-        'peak pressure at the edge depends on the mesh and is not a reliable figure.',
-    );
+    warnings.push({
+      code: 'sharp-edge',
+      message:
+        'The pad edge radius is below 0.2 mm: a sharp edge gives a singular edge pressure, so ' +
+        'the peak pressure at the edge depends on the mesh and is not a reliable figure.',
+    });
   }
   return { diameter, edgeRadius, flatRadius: half - edgeRadius, warnings };
 }

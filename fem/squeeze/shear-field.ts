@@ -1,7 +1,7 @@
 import type { FemBody } from '../body/cache';
 import { elasticSplit, type ElasticSplit } from '../elements/elastic-d';
 import { Q4Workspace } from '../elements/q4-stiffness';
-import { q4Stress } from '../elements/q4-stress';
+import { q4CentroidStressMatrix } from '../elements/q4-stress';
 import { elementCorners } from '../mesh/quad-mesh';
 import type { ContactSystem } from '../solver/compliance';
 import { shearZoneOf } from '../body/grading';
@@ -30,6 +30,14 @@ export interface ShearField {
 
 const cache = new WeakMap<FemBody, ShearField>();
 
+/**
+ * Depth of the sampled zone over its radius. The zone radius is at least about 1.15× a contact
+ * it serves (shearZoneOf), and the largest shear lies within about 0.6 a of the surface: on the
+ * axis under a Hertz contact (0.48 a for ν = 0.3, Johnson 1985 §3.4 [from memory]) and nearer
+ * the surface at a pad's edge.
+ */
+const ZONE_DEPTH = 0.8;
+
 /** The cached stress influence of `body` (built on first use) from its contact compliance. */
 export function getShearField(body: FemBody, contact: ContactSystem): ShearField {
   const hit = cache.get(body);
@@ -38,11 +46,23 @@ export function getShearField(body: FemBody, contact: ContactSystem): ShearField
   const zoneRadius = shearZoneOf(body.key);
   let nf = 0;
   while (nf < nc && body.contactR[nf] <= zoneRadius) nf++;
-  // One full unit-body displacement field per unit pad force on a contact node.
-  const columns = Array.from({ length: nf }, (_, j) =>
-    body.recover(Float64Array.from({ length: nc }, (_, i) => -contact.flat[i * nc + j])),
-  );
   const zone = elementsUnder(body, zoneRadius);
+  // The zone elements' DOFs, packed; one displacement field over them per unit pad force on a
+  // contact node (u_c = −C e_j).
+  const pack = new Int32Array(body.dofs).fill(-1);
+  const dofs: number[] = [];
+  for (const { e } of zone) {
+    for (let a = 0; a < 4; a++) {
+      const v = body.quads[4 * e + a];
+      for (const d of [2 * v, 2 * v + 1]) if (pack[d] < 0) pack[d] = dofs.push(d) - 1;
+    }
+  }
+  const columns = body.recoverAt(
+    Array.from({ length: nf }, (_, j) =>
+      Float64Array.from({ length: nc }, (_, i) => -contact.flat[i * nc + j]),
+    ),
+    Int32Array.from(dofs),
+  );
   const r = new Float64Array(zone.length);
   const depth = new Float64Array(zone.length);
   const influence = new Float64Array(zone.length * 4 * nf);
@@ -52,7 +72,8 @@ export function getShearField(body: FemBody, contact: ContactSystem): ShearField
     r[s] = rc;
     depth[s] = dc;
     for (let j = 0; j < nf; j++) {
-      for (let k = 0; k < 4; k++) influence[(s * 4 + k) * nf + j] = unit.apply(e, k, columns[j]);
+      for (let k = 0; k < 4; k++)
+        influence[(s * 4 + k) * nf + j] = unit.apply(e, k, columns[j], pack);
     }
   });
   const field = { r, depth, influence, nodes: nf, zone: zoneRadius };
@@ -61,8 +82,8 @@ export function getShearField(body: FemBody, contact: ContactSystem): ShearField
 }
 
 /**
- * Elements whose centroid lies at r ≤ `reach` and less than `reach` below the undeformed
- * elliptical meridian z = aspect·√(1 − r²) (unit body), sorted by centroid radius.
+ * Elements whose centroid lies at r ≤ `reach` and less than ZONE_DEPTH·`reach` below the
+ * undeformed elliptical meridian z = aspect·√(1 − r²) (unit body), sorted by centroid radius.
  */
 function elementsUnder(body: FemBody, reach: number): { e: number; r: number; depth: number }[] {
   const xr = new Float64Array(4);
@@ -77,7 +98,7 @@ function elementsUnder(body: FemBody, reach: number): { e: number; r: number; de
       z += xz[a] / 4;
     }
     const depth = Math.max(body.key.aspect * Math.sqrt(Math.max(1 - r * r, 0)) - z, 0);
-    if (r <= reach && depth <= reach) zone.push({ e, r, depth });
+    if (r <= reach && depth <= ZONE_DEPTH * reach) zone.push({ e, r, depth });
   }
   return zone.sort((x, y) => x.r - y.r);
 }
@@ -89,7 +110,6 @@ function elementsUnder(body: FemBody, reach: number): { e: number; r: number; de
 class UnitStresses {
   private readonly xr = new Float64Array(4);
   private readonly xz = new Float64Array(4);
-  private readonly ue = new Float64Array(8);
   private readonly se = new Float64Array(32);
   private readonly ws = new Q4Workspace();
   private readonly material: ElasticSplit;
@@ -100,24 +120,18 @@ class UnitStresses {
 
   /** Fills the matrix for element `e`. */
   evaluate(e: number): void {
-    const { xr, xz, ue, se } = this;
-    elementCorners(this.body, e, xr, xz);
-    for (let c = 0; c < 8; c++) {
-      ue.fill(0);
-      ue[c] = 1;
-      const q = q4Stress(xr, xz, ue, this.material, 0, 0, this.ws);
-      [q.srr, q.szz, q.stt, q.srz].forEach((v, k) => (se[k * 8 + c] = v));
-    }
+    elementCorners(this.body, e, this.xr, this.xz);
+    q4CentroidStressMatrix(this.xr, this.xz, this.material, this.se, this.ws);
   }
 
-  /** Stress component `k` of the last evaluated element `e` under the full displacement `u`. */
-  apply(e: number, k: number, u: Float64Array): number {
+  /** Stress component `k` of the last evaluated element `e`; `u` holds the DOFs packed by `pack`. */
+  apply(e: number, k: number, u: Float64Array, pack: Int32Array): number {
     const { se } = this;
     const quads = this.body.quads;
     let v = 0;
     for (let a = 0; a < 4; a++) {
       const node = quads[4 * e + a];
-      v += se[k * 8 + 2 * a] * u[2 * node] + se[k * 8 + 2 * a + 1] * u[2 * node + 1];
+      v += se[k * 8 + 2 * a] * u[pack[2 * node]] + se[k * 8 + 2 * a + 1] * u[pack[2 * node + 1]];
     }
     return v;
   }

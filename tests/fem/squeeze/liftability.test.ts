@@ -58,8 +58,8 @@ describe('liftability of the two-pad grip', () => {
     const tol = GRIP_TOLERANCE * base.travel;
     expect(ratioOf(grip.force)).toBeGreaterThanOrEqual(1);
     // Independent re-runs just below and at the grip travel (one increment each, cold start), on
-    // the mesh of the full run: graded to its contact estimate √(R·d) at the full travel d.
-    const meshContactRadius = Math.sqrt(0.035 * base.travel);
+    // the mesh the grip was found on (the run regrades for a grip contact with few nodes).
+    const meshContactRadius = (res.gripMesh ?? res.mesh).gradedContactRadius;
     const rerun = (travel: number) =>
       runSqueeze({ ...base, travel, steps: 1, meshContactRadius }).final;
     const below = rerun(grip.travel - 2 * tol);

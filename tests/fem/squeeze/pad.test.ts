@@ -39,12 +39,14 @@ describe('pad geometry', () => {
     expect(peak.pressure).toBeGreaterThan(1.5 * centre); // a clear rise, not a ripple
     expect(small.final.contactRadius).toBeLessThanOrEqual(0.004); // never past the pad
     expect(small.final.force).toBeLessThan(plate.final.force); // less contact, less force
-    expect(small.warnings.join(' ')).toMatch(/rounded edge/);
+    expect(small.warnings.map((w) => w.code)).toContain('edge-contact');
+    expect(small.warnings.map((w) => w.message).join(' ')).toMatch(/rounded edge/);
   });
 
   it('warns that a sharp edge gives a mesh-dependent edge pressure', () => {
     const sharp = runSqueeze({ ...base, padDiameter: 0.008, edgeRadius: 0.0001 });
-    expect(sharp.warnings.join(' ')).toMatch(/singular/);
+    expect(sharp.warnings.map((w) => w.code)).toContain('sharp-edge');
+    expect(sharp.warnings.map((w) => w.message).join(' ')).toMatch(/singular/);
   });
 });
 
