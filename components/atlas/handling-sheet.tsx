@@ -18,7 +18,7 @@ function ValuesTable({ cultivar }: { cultivar: Sheet['cultivars'][number] }) {
             <th scope="row" className="w-2/5 py-1 pr-2 font-normal text-stone-600">
               {row.label}
             </th>
-            <td className="py-1 pr-2 whitespace-nowrap">
+            <td className="py-1 pr-2 sm:whitespace-nowrap">
               {row.value ? (
                 <span className="num">{row.value}</span>
               ) : (

@@ -128,6 +128,8 @@ test.describe('on a phone', () => {
       ['phone-index', '/atlas'],
       ['phone-kiwifruit', '/atlas/kiwifruit'],
       ['phone-sheet', '/atlas/kiwifruit/sheet'],
+      ['phone-apple-sheet', '/atlas/apple/sheet'],
+      ['phone-apple', '/atlas/apple'],
     ]) {
       await page.goto(url);
       await expectNoSidewaysScroll(page);
