@@ -1,9 +1,42 @@
-import { AreaPlaceholder } from '@/components/shell/area-placeholder';
+import { PropertiesTable } from '@/components/properties/properties-table';
+import { PageTitle } from '@/components/ui/page-title';
 import { requirePageActor } from '@/lib/auth/session';
+import { listPublishedCultivars } from '@/lib/data/cultivars';
+import { parseTableQuery, tableQueryString } from '@/lib/properties/table-query';
+import { toTableRows } from '@/lib/properties/table-rows';
 
 export const metadata = { title: 'Properties' };
 
-export default async function PropertiesPage() {
+type Props = { searchParams: Promise<Record<string, string | string[] | undefined>> };
+
+export default async function PropertiesPage({ searchParams }: Props) {
   const actor = await requirePageActor('properties:read-published');
-  return <AreaPlaceholder title="Properties" href="/properties" role={actor.role} />;
+  const [cultivars, query] = await Promise.all([
+    listPublishedCultivars(actor),
+    searchParams.then(parseTableQuery),
+  ]);
+  const full = new URLSearchParams({ format: 'csv' });
+  if (query.commodity) full.set('commodity', query.commodity);
+  return (
+    <section>
+      <PageTitle title="Properties">
+        Published, sourced values for each cultivar, in the unit each column names. Focus or hover a
+        value for its source and the conditions it was measured under; open a cultivar for full
+        citations. A dash means no published value.
+      </PageTitle>
+      {/* The view in the address is the table's starting state: a new address remounts it. */}
+      <PropertiesTable
+        key={tableQueryString(query)}
+        rows={toTableRows(cultivars)}
+        initial={query}
+      />
+      <p className="mt-4 text-sm text-stone-600">
+        Every published value with its conditions, one row per value:{' '}
+        <a href={`/api/cultivars?${full}`} download className="text-leaf-700 underline">
+          full CSV{query.commodity ? ' of this commodity' : ''}
+        </a>
+        .
+      </p>
+    </section>
+  );
 }
