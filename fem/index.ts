@@ -126,6 +126,12 @@ export {
 } from './squeeze/contact-points';
 export { recoverPressure, surfaceWeights, type SurfaceWeights } from './squeeze/pressure-recovery';
 export {
+  squeezeResultJson,
+  type ResultJsonOptions,
+  type SqueezeResultJson,
+} from './squeeze/result-json';
+export { resultUnits } from './squeeze/result-units';
+export {
   getShearField,
   maxShearUnder,
   type ShearField,

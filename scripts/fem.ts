@@ -5,8 +5,8 @@
  * Bad options print one line to stderr, naming the option as typed, and exit 2.
  */
 import { parseArgs } from 'node:util';
-import { FemConvergenceError, FemInputError, runSqueeze } from '../fem';
-import type { HertzFigures, MeshLevel, SqueezeInput, SqueezeResult, SqueezeState } from '../fem';
+import { FemConvergenceError, FemInputError, runSqueeze, squeezeResultJson } from '../fem';
+import type { MeshLevel, SqueezeInput, SqueezeResultJson } from '../fem';
 
 type NumberField = Exclude<
   keyof SqueezeInput,
@@ -23,6 +23,7 @@ const NUMBERS: Record<string, [NumberField, number]> = {
   'edge-radius-mm': ['edgeRadius', 1e-3],
   'facing-modulus-mpa': ['facingModulus', 1e6],
   'facing-thickness-mm': ['facingThickness', 1e-3],
+  'facing-poisson': ['facingPoisson', 1],
   density: ['density', 1],
   friction: ['friction', 1],
   'safety-factor': ['safetyFactor', 1],
@@ -101,105 +102,51 @@ function flagged(err: FemInputError, values: Values): string {
   );
 }
 
-// Display rounding only; the core keeps full precision.
-const round = (v: number | null, digits = 4): number | null =>
-  v === null ? null : Number(v.toPrecision(digits));
-const kpa = (pa: number | null) => round(pa === null ? null : pa / 1e3);
-const mm = (m: number | null) => round(m === null ? null : m * 1e3);
+type Json = SqueezeResultJson;
+type StateJson = Json['final'];
 
-function stepJson(s: SqueezeState, withLift: boolean) {
-  return {
-    travel_mm: mm(s.travel),
-    force_n: round(s.force),
-    contact_radius_mm: mm(s.contactRadius),
-    peak_pressure_kpa: kpa(s.peakPressure),
-    mean_pressure_kpa: kpa(s.meanPressure),
-    max_shear_kpa: kpa(s.maxShear),
-    max_shear_depth_mm: mm(s.maxShearDepth),
-    ...(withLift ? { lift_ratio: round(s.liftRatio) } : {}),
-  };
-}
+const fmt = (v: unknown, width: number) =>
+  (v === null || v === undefined ? '—' : String(v)).padStart(width);
 
-function hertzJson(h: HertzFigures | null) {
+/** The force key of the model's JSON (per metre in plane strain). */
+const forceKey = (data: Json) => (data.model === 'plane-strain' ? 'force_n_per_m' : 'force_n');
+const contactKey = (data: Json) =>
+  data.model === 'plane-strain' ? 'contact_half_width_mm' : 'contact_radius_mm';
+
+function stepLine(data: Json, s: StateJson): string {
+  const v = s as Record<string, unknown>;
   return (
-    h && {
-      force_n: round(h.force),
-      contact_radius_mm: mm(h.contactRadius),
-      peak_pressure_kpa: kpa(h.peakPressure),
-      mean_pressure_kpa: kpa(h.meanPressure),
-      approach_mm: mm(h.approach),
-      max_shear_kpa: kpa(h.maxShear),
-      max_shear_depth_mm: mm(h.maxShearDepth),
-    }
+    `  ${fmt(v.travel_per_pad_mm, 9)} ${fmt(v[forceKey(data)], 9)} ${fmt(v[contactKey(data)], 7)} ` +
+    `${fmt(v.peak_pressure_kpa, 10)} ${fmt(v.mean_pressure_kpa, 10)} ${fmt(v.max_shear_kpa, 11)}` +
+    ('lift_ratio' in v ? ` ${fmt(v.lift_ratio, 6)}` : '')
   );
 }
 
-function liftJson(lift: NonNullable<SqueezeResult['liftability']>) {
-  const grip = lift.grip;
-  return {
-    grip: grip && {
-      travel_mm: mm(grip.travel),
-      force_n: round(grip.force),
-      peak_pressure_kpa: kpa(grip.peakPressure),
-      margin: round(grip.bruiseMargin, 3),
-      shear_margin: round(grip.shearMargin, 3),
-      lift_ratio: round(grip.liftRatio),
-    },
-    grip_reason: lift.reason,
-    mass_kg: round(lift.mass),
-    required_force_n: round(lift.requiredForce),
-  };
-}
-
-function toJson(values: Values, result: SqueezeResult) {
-  const lift = result.liftability;
-  const { json: _json, ...options } = values;
-  void _json;
-  const { model, mesh, steps } = result.input;
-  return {
-    input: { ...options, model, mesh, steps },
-    units: { force: model === 'axisymmetric' ? 'N' : 'N/m' },
-    steps: result.steps.map((s) => stepJson(s, lift !== null)),
-    final: stepJson(result.final, lift !== null),
-    profile: result.profile.map((p) => ({ r_mm: mm(p.r), pressure_kpa: kpa(p.pressure) })),
-    ...(lift !== null ? liftJson(lift) : {}),
-    hertz: {
-      at_travel: hertzJson(result.hertz.atTravel),
-      at_force: hertzJson(result.hertz.atForce),
-    },
-    mesh: { level: result.mesh.level, nodes: result.mesh.nodes, dofs: result.mesh.dofs },
-    warnings: result.warnings,
-  };
-}
-
-const fmt = (v: number | null, width: number) => (v === null ? '—' : String(v)).padStart(width);
-
-function pretty(data: ReturnType<typeof toJson>): string {
-  const f = data.final;
+function pretty(data: Json): string {
+  const force = data.model === 'plane-strain' ? 'N/m' : 'N';
   const lines = [
-    `Squeeze (${data.input.model}, mesh ${data.mesh.level}: ${data.mesh.nodes} nodes, ${data.mesh.dofs} DOFs)`,
-    `  travel mm   force ${data.units.force}   a mm   peak kPa   mean kPa   shear kPa` +
-      ('lift_ratio' in f ? '   lift' : ''),
-    ...data.steps.map(
-      (s) =>
-        `  ${fmt(s.travel_mm, 9)} ${fmt(s.force_n, 7)} ${fmt(s.contact_radius_mm, 7)} ${fmt(s.peak_pressure_kpa, 10)} ` +
-        `${fmt(s.mean_pressure_kpa, 10)} ${fmt(s.max_shear_kpa, 11)}` +
-        ('lift_ratio' in s ? ` ${fmt(s.lift_ratio ?? null, 6)}` : ''),
-    ),
+    `Squeeze (${data.model}, mesh ${data.mesh?.level}: ${data.mesh?.nodes} nodes, ${data.mesh?.dofs} DOFs)`,
+    `  travel mm  force ${force.padEnd(3)}    a mm   peak kPa   mean kPa   shear kPa` +
+      ('lift_ratio' in data.final ? '   lift' : ''),
+    ...data.steps.map((s) => stepLine(data, s)),
   ];
-  const h = data.hertz.at_force;
-  if (h)
+  const h = data.hertz.at_force as Record<string, unknown> | null;
+  if (h) {
     lines.push(
-      `Hertz at the same force: a = ${h.contact_radius_mm} mm, p0 = ${h.peak_pressure_kpa} kPa`,
-    );
-  if ('grip' in data) {
-    lines.push(
-      data.grip
-        ? `Grip at ${data.grip.travel_mm} mm: force ${data.grip.force_n} N, peak ${data.grip.peak_pressure_kpa} kPa, margin ${data.grip.margin ?? 'n/a'}`
-        : `No grip: ${data.grip_reason}`,
+      `Hertz at the same force: a = ${h[contactKey(data)]} mm, p0 = ${h.peak_pressure_kpa} kPa`,
     );
   }
-  for (const w of data.warnings) lines.push(`Warning: ${w}`);
+  const lift = data.liftability as Record<string, unknown> | null;
+  if (lift) {
+    const grip = lift.grip as Record<string, unknown> | null;
+    lines.push(
+      grip
+        ? `Grip at ${grip.travel_per_pad_mm} mm per pad: force ${grip[forceKey(data)]} ${force}, ` +
+            `peak ${grip.peak_pressure_kpa} kPa, bruise margin ${grip.bruise_margin ?? 'n/a'}`
+        : `No grip: ${lift.grip_reason}`,
+    );
+  }
+  for (const w of data.warnings) lines.push(`Warning: ${w.message}`);
   lines.push('Screening estimate from a linear-elastic model; not a substitute for bruise tests.');
   return lines.join('\n');
 }
@@ -227,7 +174,7 @@ function main(argv: string[]): number {
     if (parsed.positionals.length !== 1 || parsed.positionals[0] !== 'squeeze') {
       throw new UsageError('usage: tenderline squeeze [options] [--json]');
     }
-    const data = toJson(values, runSqueeze(toInput(values)));
+    const data = squeezeResultJson(runSqueeze(toInput(values)));
     process.stdout.write((values.json ? JSON.stringify(data, null, 2) : pretty(data)) + '\n');
     return 0;
   } catch (err) {

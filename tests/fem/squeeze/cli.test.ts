@@ -48,16 +48,18 @@ describe('tenderline CLI (scripts/fem.ts, built to dist/tenderline.mjs)', () => 
     const out = JSON.parse(stdout);
     expect(out.steps).toHaveLength(5);
     // 1 mm printed to 4 significant figures is exactly 1: 1e-6 only absorbs the float parse.
-    expect(out.final.travel_mm).toBeCloseTo(1, 6);
+    expect(out.final.travel_per_pad_mm).toBeCloseTo(1, 6);
     expect(out.final.force_n).toBeGreaterThan(0);
     expect(out.steps[0]).toHaveProperty('lift_ratio');
-    expect(out.grip.travel_mm).toBeGreaterThan(0);
+    const grip = out.liftability.grip;
+    expect(grip.travel_per_pad_mm).toBeGreaterThan(0);
     // Product definition: bruise margin = threshold / peak pressure at the grip. Compared to
     // 2 decimals (toBeCloseTo 2): both are printed to 3–4 significant figures.
-    expect(out.grip.margin).toBeCloseTo(150 / out.grip.peak_pressure_kpa, 2);
+    expect(grip.bruise_margin).toBeCloseTo(150 / grip.peak_pressure_kpa, 2);
     expect(out.hertz.at_travel.force_n).toBeGreaterThan(0);
     expect(out.mesh).toMatchObject({ level: 'coarse' });
     expect(out.profile[0]).toHaveProperty('r_mm');
+    expect(out.units.travel_per_pad_mm).toMatch(/^mm: travel of each pad/);
   }, 30_000);
 
   it.each([
