@@ -7,6 +7,8 @@ import './globals.css';
 export const metadata: Metadata = {
   title: { default: 'Tenderline', template: '%s · Tenderline' },
   description: 'Sourced produce properties and contact-pressure checks for packhouse engineers.',
+  manifest: '/manifest.webmanifest',
+  icons: { icon: '/icon.svg' },
 };
 
 export default async function RootLayout({ children }: { children: ReactNode }) {
