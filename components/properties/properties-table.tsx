@@ -1,5 +1,6 @@
 'use client';
 
+import { useSearchParams } from 'next/navigation';
 import { useEffect, useState } from 'react';
 import {
   getCoreRowModel,
@@ -13,7 +14,12 @@ import {
   type Updater,
 } from '@tanstack/react-table';
 import { QUANTITY_KEYS, isQuantity } from '@/lib/properties/quantities';
-import { tableQueryString, type SortColumn, type TableQuery } from '@/lib/properties/table-query';
+import {
+  parseTableQuery,
+  tableQueryString,
+  type SortColumn,
+  type TableQuery,
+} from '@/lib/properties/table-query';
 import type { TableRow } from '@/lib/properties/table-rows';
 import { viewCsv } from '@/lib/properties/view-csv';
 import { ColumnPicker } from './column-picker';
@@ -49,8 +55,11 @@ function download(csv: string) {
  * state object mirrored into the address with replaceState, so a reload or a shared link opens
  * the same view; TanStack Table does the sorting, filtering and paging.
  */
-export function PropertiesTable({ rows, initial }: { rows: TableRow[]; initial: TableQuery }) {
-  const [view, setView] = useState(initial);
+export function PropertiesTable({ rows }: { rows: TableRow[] }) {
+  // Read from the address itself (not the server's first answer), so going Back to the page
+  // restores the view as it was last left.
+  const params = useSearchParams();
+  const [view, setView] = useState(() => parseTableQuery(params));
   const sorting: SortingState = view.sort ? [view.sort] : [];
   const pagination: PaginationState = { pageIndex: view.pageIndex, pageSize: view.pageSize };
 

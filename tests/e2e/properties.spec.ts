@@ -54,6 +54,12 @@ test('the table sorts, filters by commodity, text and range, pages and chooses c
   expect(new Set(commodities)).toEqual(new Set(['Apple']));
   expect(await slugsShown(page)).toContain(JONATHAN);
 
+  // Into a cultivar and Back again: the view is as it was left.
+  await page.getByRole('link', { name: 'Jonathan', exact: true }).click();
+  await expect(page).toHaveURL(new RegExp(`/properties/${JONATHAN}$`));
+  await page.goBack();
+  await expect(page.getByLabel('Commodity', { exact: true })).toHaveValue('apple');
+
   await page.getByLabel('Cultivar or commodity').fill('jonath');
   await expect(tableRows(page)).toHaveCount(1);
   await page.getByLabel('Cultivar or commodity').fill('');
@@ -339,4 +345,12 @@ test('an engineer compares two revisions: the changed value shows old → new wi
     page.locator('[data-testid="diff-row"][data-change="same"]', { hasText: 'failure stress' }),
   ).toBeVisible();
   await shootBoth(page, 'diff', page.getByTestId('revision-diff'));
+
+  await page.goto(`/properties/${JONATHAN}/compare?from=abc&to=999999`);
+  await expect(page.getByTestId('compare-problem')).toContainText(
+    '“abc” is not a revision number.',
+  );
+  await expect(page.getByTestId('compare-problem')).toContainText(
+    'no revision 999999 of this cultivar',
+  );
 });

@@ -24,12 +24,8 @@ export default async function PropertiesPage({ searchParams }: Props) {
         value for its source and the conditions it was measured under; open a cultivar for full
         citations. A dash means no published value.
       </PageTitle>
-      {/* The view in the address is the table's starting state: a new address remounts it. */}
-      <PropertiesTable
-        key={tableQueryString(query)}
-        rows={toTableRows(cultivars)}
-        initial={query}
-      />
+      {/* The view lives in the address: a navigation to another address remounts the table. */}
+      <PropertiesTable key={tableQueryString(query)} rows={toTableRows(cultivars)} />
       <p className="mt-4 text-sm text-stone-600">
         Every published value with its conditions, one row per value:{' '}
         <a href={`/api/cultivars?${full}`} download className="text-leaf-700 underline">

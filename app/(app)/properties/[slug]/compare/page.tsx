@@ -7,7 +7,7 @@ import { getRevision, listRevisions } from '@/lib/data/cultivars';
 import { toDiffValue } from '@/lib/data/follows';
 import type { SourceRef } from '@/lib/data/property-rows';
 import { diffRevisions } from '@/lib/properties/diff';
-import { defaultPair } from '@/lib/properties/revision-labels';
+import { chosenRevision, defaultPair } from '@/lib/properties/revision-labels';
 import { titleFor } from '@/lib/page-title';
 import { getCultivarOr404 } from '../lookup';
 
@@ -20,23 +20,18 @@ export async function generateMetadata(): Promise<Metadata> {
   return titleFor('properties:read-history', 'Compare revisions')();
 }
 
-/** A revision number from the address, or null when it is missing or not a whole number. */
-function numberParam(value: string | string[] | undefined): number | null {
-  const text = Array.isArray(value) ? value[0] : value;
-  return text && /^\d{1,9}$/.test(text) ? Number(text) : null;
-}
-
 /** The values of any two revisions side by side, changes highlighted (history readers only). */
 export default async function ComparePage({ params, searchParams }: Props) {
   const actor = await requirePageActor('properties:read-history');
   const cultivar = await getCultivarOr404(actor, (await params).slug);
   const revisions = await listRevisions(actor, cultivar.slug);
   const query = await searchParams;
-  const pair = defaultPair(revisions.map((r) => r.number));
-  const from = numberParam(query.from) ?? pair?.from ?? null;
-  const to = numberParam(query.to) ?? pair?.to ?? null;
-  const a = revisions.find((r) => r.number === from);
-  const b = revisions.find((r) => r.number === to);
+  const numbers = revisions.map((r) => r.number);
+  const pair = defaultPair(numbers);
+  const from = chosenRevision(query.from, numbers, pair?.from ?? null);
+  const to = chosenRevision(query.to, numbers, pair?.to ?? null);
+  const a = revisions.find((r) => r.number === from.number);
+  const b = revisions.find((r) => r.number === to.number);
   const [before, after] = await Promise.all(
     [a, b].map((r) => (r ? getRevision(actor, r.id) : null)),
   );
@@ -44,7 +39,7 @@ export default async function ComparePage({ params, searchParams }: Props) {
   for (const v of [...(before?.values ?? []), ...(after?.values ?? [])]) {
     if (v.source) sources[v.source.key] = v.source;
   }
-  const missing = [a ? null : from, b ? null : to].filter((n) => n !== null);
+  const problems = [from.problem, to.problem].filter(Boolean);
   return (
     <article className="space-y-5">
       <header className="border-b border-stone-200 pb-4">
@@ -59,8 +54,8 @@ export default async function ComparePage({ params, searchParams }: Props) {
       <CompareForm
         slug={cultivar.slug}
         revisions={revisions}
-        from={from ?? undefined}
-        to={to ?? undefined}
+        from={from.number ?? undefined}
+        to={to.number ?? undefined}
       />
       {before && after ? (
         <RevisionDiff
@@ -70,10 +65,12 @@ export default async function ComparePage({ params, searchParams }: Props) {
           after={`Revision ${after.number} (after)`}
         />
       ) : (
-        <p role="alert" className="rounded-md bg-red-50 px-3 py-2 text-sm text-red-800">
-          {missing.length
-            ? `No revision ${missing.join(' or ')} of this cultivar that you may see; choose two from the lists.`
-            : 'Choose two revisions from the lists.'}
+        <p
+          role="alert"
+          data-testid="compare-problem"
+          className="rounded-md bg-red-50 px-3 py-2 text-sm text-red-800"
+        >
+          {problems.join(' ')} Choose two revisions from the lists.
         </p>
       )}
     </article>
