@@ -1,12 +1,14 @@
 import 'server-only';
 import type { Actor } from '@/lib/auth/actor';
 import { runDropCheck } from './drop';
+import { runSqueezeCheck } from './squeeze';
 import { runStackCheck } from './stack';
 
 /** Every check an assessment can save, by name; each validates its own inputs. */
 export const CHECK_RUNNERS = {
   drop: runDropCheck,
   stack: runStackCheck,
+  squeeze: runSqueezeCheck,
 } satisfies Record<string, (actor: Actor, input: unknown) => Promise<{ pinned: unknown }>>;
 
 export type CheckName = keyof typeof CHECK_RUNNERS;

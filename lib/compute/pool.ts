@@ -4,6 +4,7 @@ import os from 'node:os';
 import path from 'node:path';
 import { MessageChannel } from 'node:worker_threads';
 import { Piscina } from 'piscina';
+import './register-tasks';
 import { runComputeTask, type Progress } from './task-table';
 
 /**

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { FACING_KEYS } from '@/lib/checks/facings';
 import { DROP_SURFACE_KEYS } from '@/lib/checks/surfaces';
 import { slugSchema } from './cultivars';
 
@@ -70,3 +71,72 @@ export const stackCheckSchema = z
   .strict();
 
 export type StackCheckInput = z.infer<typeof stackCheckSchema>;
+
+export const squeezeCheckSchema = z
+  .object({
+    ...fruitSchema,
+    axialMm: measure('Axial diameter', 'mm', 0, 500).optional(),
+    densityKgM3: measure('Density', 'kg/m³', 0, 3000).optional(),
+    /** Omit both for flat plates wider than the contact. */
+    padDiameterMm: measure('Pad diameter', 'mm', 0, 300).optional(),
+    padEdgeMm: measure('Pad edge radius', 'mm', 0, 100).optional(),
+    facing: z
+      .enum(FACING_KEYS, { error: `Facing must be one of ${FACING_KEYS.join(', ')}.` })
+      .default('rigid'),
+    facingModulusMpa: measure('Facing modulus', 'MPa', 0, 100_000).optional(),
+    facingThicknessMm: measure('Facing thickness', 'mm', 0, 100).optional(),
+    facingPoisson: poisson.optional(),
+    friction: measure('Friction coefficient', '', 0, 2).optional(),
+    safetyFactor: measure('Safety factor', '', 0.999, 20).default(2),
+    accelerationMs2: measure('Peak acceleration of the move', 'm/s²', -0.001, 100).default(0),
+    maxTravelMm: measure('Maximum travel per pad', 'mm', 0, 100),
+    mesh: z.enum(['coarse', 'normal', 'fine']).default('normal'),
+    sweep: z.boolean().default(true),
+  })
+  .strict()
+  .superRefine((v, ctx) => {
+    if (v.padDiameterMm === undefined && v.padEdgeMm !== undefined) {
+      ctx.addIssue({
+        code: 'custom',
+        path: ['padDiameterMm'],
+        message: 'Give the pad diameter with its edge radius.',
+      });
+    }
+    if (
+      v.padDiameterMm !== undefined &&
+      v.padEdgeMm !== undefined &&
+      v.padEdgeMm >= v.padDiameterMm / 2
+    ) {
+      ctx.addIssue({
+        code: 'custom',
+        path: ['padEdgeMm'],
+        message: 'The edge radius must be less than half the pad diameter.',
+      });
+    }
+    if (v.facing === 'custom') {
+      for (const [key, label] of [
+        ['facingModulusMpa', 'modulus (MPa)'],
+        ['facingThicknessMm', 'thickness (mm)'],
+      ] as const) {
+        if (v[key] === undefined)
+          ctx.addIssue({ code: 'custom', path: [key], message: `Give the facing ${label}.` });
+      }
+    }
+  });
+
+export type SqueezeCheckInput = z.infer<typeof squeezeCheckSchema>;
+
+export const probabilityCheckSchema = z.object({
+  samples: z
+    .number()
+    .int('Samples must be a whole number.')
+    .min(50, 'At least 50 samples.')
+    .max(5000, 'At most 5000 samples.')
+    .default(1000),
+  seed: z
+    .number()
+    .int()
+    .min(0)
+    .max(2 ** 31)
+    .default(1),
+});

@@ -1,0 +1,115 @@
+import 'server-only';
+import { STANDARD_GRAVITY, type SqueezeInput, type Spreads } from '@/fem';
+import type { Actor } from '@/lib/auth/actor';
+import type { SqueezeCheckInput } from '@/lib/validation/checks';
+import { chooseValue, publishedValue, type UsedValue } from './cultivar-inputs';
+import { FACING_PRESETS, frictionSurfacesFor } from './facings';
+import { resolveFruit, type ResolvedFruit } from './resolve-fruit';
+
+export interface ResolvedSqueeze {
+  fruit: ResolvedFruit;
+  density: UsedValue;
+  friction: UsedValue;
+  failureStress: UsedValue | null;
+  axialMm: number;
+  model: SqueezeInput;
+}
+
+/** Density: typed, published, or the sphere's (spheroid's) mass over its volume. */
+function densityOf(v: SqueezeCheckInput, f: ResolvedFruit, axialMm: number): UsedValue {
+  if (v.densityKgM3 !== undefined)
+    return chooseValue('densityKgM3', 'Density', v.densityKgM3, null, 'kg/m³');
+  const published = publishedValue(f.pinned, 'density');
+  if (published && f.massG.origin !== 'entered') return published;
+  const volume = (Math.PI / 6) * (f.diameterMm.value / 1000) ** 2 * (axialMm / 1000);
+  return {
+    value: Number((f.massG.value / 1000 / volume).toPrecision(4)),
+    unit: 'kg/m³',
+    origin: f.massG.origin,
+    source: `mass ÷ volume of the fruit (${f.massG.source ?? 'entered mass'})`,
+    low: null,
+    high: null,
+    sd: null,
+  };
+}
+
+/** The squeeze case in SI from the form's figures and the cultivar's published ones. */
+export async function resolveSqueeze(actor: Actor, v: SqueezeCheckInput): Promise<ResolvedSqueeze> {
+  const fruit = await resolveFruit(actor, v);
+  const axialMm = v.axialMm ?? fruit.diameterMm.value;
+  const density = densityOf(v, fruit, axialMm);
+  const friction = chooseValue(
+    'friction',
+    'Friction coefficient',
+    v.friction,
+    publishedValue(fruit.pinned, 'friction_coefficient', frictionSurfacesFor(v.facing)),
+    '–',
+  );
+  const failureStress = publishedValue(fruit.pinned, 'failure_stress');
+  const preset = FACING_PRESETS[v.facing];
+  const facingModulus = v.facing === 'custom' ? v.facingModulusMpa : preset.modulusMpa;
+  const facingThickness = v.facing === 'custom' ? v.facingThicknessMm : preset.thicknessMm;
+  const model: SqueezeInput = {
+    equatorialRadius: fruit.diameterMm.value / 2000,
+    axialRadius: axialMm / 2000,
+    modulus: fruit.modulusMpa.value * 1e6,
+    poisson: fruit.poisson.value,
+    travel: v.maxTravelMm / 1000,
+    mesh: v.mesh,
+    ...(v.padDiameterMm !== undefined && { padDiameter: v.padDiameterMm / 1000 }),
+    ...(v.padEdgeMm !== undefined && { edgeRadius: v.padEdgeMm / 1000 }),
+    ...(facingModulus != null && facingThickness != null
+      ? {
+          facingModulus: facingModulus * 1e6,
+          facingThickness: facingThickness / 1000,
+          facingPoisson: v.facing === 'custom' ? v.facingPoisson : (preset.poisson ?? undefined),
+        }
+      : {}),
+    density: density.value,
+    friction: friction.value,
+    safetyFactor: v.safetyFactor,
+    accelG: v.accelerationMs2 / STANDARD_GRAVITY,
+    ...(fruit.staticThresholdKpa ? { bruiseThreshold: fruit.staticThresholdKpa.value * 1000 } : {}),
+    // Tresca: at failure in uniaxial compression the largest shear is half the failure stress.
+    ...(failureStress ? { failureShear: (failureStress.value * 1000) / 2 } : {}),
+  };
+  return { fruit, density, friction, failureStress, axialMm, model };
+}
+
+/** Pad diameters for the sweep: 12 from a quarter of the pad to three pads, within the fruit. */
+export function sweepDiameters(v: SqueezeCheckInput, diameterMm: number): number[] | null {
+  if (v.padDiameterMm === undefined) return null;
+  const edge = v.padEdgeMm ?? 2;
+  const lo = Math.max(2.5 * edge, 0.25 * v.padDiameterMm, 2);
+  const hi = Math.max(lo * 1.2, Math.min(3 * v.padDiameterMm, 0.9 * diameterMm));
+  return Array.from({ length: 12 }, (_, i) => (lo + ((hi - lo) * i) / 11) / 1000);
+}
+
+/** A published value's spread in SI (×scale), as the Monte Carlo takes it; null without one. */
+function spreadOf(u: UsedValue | null, scale: number) {
+  if (!u || u.origin !== 'published') return null;
+  if (u.sd !== null && u.sd > 0) return { sd: u.sd * scale };
+  if (u.low !== null && u.high !== null && u.high > u.low)
+    return { low: u.low * scale, high: u.high * scale };
+  return null;
+}
+
+/** The published spreads of the inputs that have them, and which ones carry none. */
+export function spreadsOf(r: ResolvedSqueeze): { spreads: Spreads; without: string[] } {
+  const entries: [keyof Spreads, string, UsedValue | null, number][] = [
+    ['modulus', "Young's modulus", r.fruit.modulusMpa, 1e6],
+    ['poisson', "Poisson's ratio", r.fruit.poisson, 1],
+    ['size', 'diameter', r.fruit.diameterMm, 1 / 2000],
+    ['density', 'density', r.density, 1],
+    ['friction', 'friction', r.friction, 1],
+    ['bruiseThreshold', 'bruise threshold', r.fruit.staticThresholdKpa, 1000],
+  ];
+  const spreads: Spreads = {};
+  const without: string[] = [];
+  for (const [key, label, used, scale] of entries) {
+    const s = spreadOf(used, scale);
+    if (s) spreads[key] = s;
+    else without.push(label);
+  }
+  return { spreads, without };
+}

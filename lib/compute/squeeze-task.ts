@@ -1,0 +1,84 @@
+/**
+ * The squeeze check's model work, pure and off the main thread: the squeeze with its grip
+ * point, the pad sweep, the slip map at the grip, and the Monte Carlo probability of bruising.
+ */
+import {
+  runMonteCarlo,
+  runSqueeze,
+  slipMapAtGrip,
+  squeezeResultJson,
+  sweepPadDiameters,
+  type SqueezeInput,
+  type Spreads,
+} from '@/fem';
+
+const r4 = (v: number | null | undefined) =>
+  v == null || !Number.isFinite(v) ? null : Number(v.toPrecision(4));
+const mm = (m: number | null | undefined) => r4(m == null ? null : m * 1e3);
+const kpa = (pa: number | null | undefined) => r4(pa == null ? null : pa / 1e3);
+
+export interface SqueezeTaskInput {
+  input: SqueezeInput;
+  /** pad diameters of the sweep, m; null for none */
+  sweep: number[] | null;
+}
+
+function sweepJson(input: SqueezeInput, diameters: number[]) {
+  const points = sweepPadDiameters(input, diameters).map((p) => ({
+    pad_diameter_mm: mm(p.padDiameter),
+    bruise_margin: p.bruiseMargin === null ? null : Number(p.bruiseMargin.toPrecision(3)),
+    grip_force_n: r4(p.gripForce),
+    grip_peak_pressure_kpa: kpa(p.gripPeakPressure),
+    reason: p.reason,
+  }));
+  const safe = points.find((p) => p.bruise_margin !== null && p.bruise_margin >= 1);
+  return { points, smallest_safe_pad_mm: safe?.pad_diameter_mm ?? null };
+}
+
+function slipJson(input: SqueezeInput) {
+  const s = slipMapAtGrip(input);
+  if (!s.map) return { holds: null, reason: s.reason };
+  const m = s.map;
+  return {
+    holds: !m.grossSliding,
+    reason: s.reason,
+    lift_load_n: r4(s.liftLoad),
+    design_load_n: r4(s.designLoad),
+    utilisation: r4(m.utilisation),
+    contact_radius_mm: mm(m.contactRadius),
+    stick_radius_mm: mm(m.stickRadius),
+    slip_annulus_mm: { inner: mm(m.slipAnnulus.inner), outer: mm(m.slipAnnulus.outer) },
+    nodes: m.nodes.map((n) => ({
+      r_mm: mm(n.r),
+      state: n.state,
+      traction_kpa: kpa(n.traction),
+      pressure_kpa: kpa(n.pressure),
+    })),
+  };
+}
+
+export function squeezeTask({ input, sweep }: SqueezeTaskInput) {
+  const result = runSqueeze(input);
+  const grip = result.liftability?.grip ?? null;
+  return {
+    model: squeezeResultJson(result),
+    grip_profile: grip
+      ? grip.profile.map((p) => ({ r_mm: mm(p.r), pressure_kpa: kpa(p.pressure) }))
+      : null,
+    sweep: sweep && grip ? sweepJson(input, sweep) : null,
+    slip: grip ? slipJson(input) : null,
+  };
+}
+
+export type SqueezeTaskResult = ReturnType<typeof squeezeTask>;
+
+export interface ProbabilityTaskInput {
+  base: SqueezeInput;
+  spreads: Spreads;
+  samples: number;
+  seed: number;
+}
+
+export function probabilityTask(input: ProbabilityTaskInput, progress: (f: number) => void) {
+  return runMonteCarlo(input, { onProgress: progress });
+}

@@ -1,0 +1,160 @@
+import { beforeAll, describe, expect, it } from 'vitest';
+import { signInAs } from '../support/session';
+import { freshDatabase, userId } from '../support/db';
+import { ACCOUNTS } from '../support/accounts';
+import { db } from '@/lib/db';
+import { getActiveActor } from '@/lib/data/users';
+import { createDraft } from '@/lib/data/revisions';
+import { runSqueeze, squeezeResultJson } from '@/fem';
+import * as squeeze from '@/app/api/checks/squeeze/route';
+import * as probability from '@/app/api/checks/squeeze/probability/route';
+
+const post = (route: typeof squeeze | typeof probability, body: unknown) =>
+  route.POST(
+    new Request('http://tenderline.test/api/checks/squeeze', {
+      method: 'POST',
+      headers: { 'content-type': 'application/json' },
+      body: JSON.stringify(body),
+    }),
+    {},
+  );
+// Illustrative inputs (not data): an 80 mm, 200 g fruit, E = 3 MPa, ν = 0.35, μ = 0.5.
+const FRUIT = {
+  modulusMpa: 3,
+  poisson: 0.35,
+  diameterMm: 80,
+  massG: 200,
+  staticThresholdKpa: 100,
+  friction: 0.5,
+};
+
+describe('squeeze check route', () => {
+  beforeAll(async () => {
+    await freshDatabase();
+    signInAs(await userId(ACCOUNTS.engineer));
+  });
+
+  it('flat plates: force, contact radius and peak pressure equal calling fem/ directly, to the last digit', async () => {
+    const res = await post(squeeze, { ...FRUIT, maxTravelMm: 1, sweep: false });
+    const json = await res.json();
+    expect(res.status, JSON.stringify(json)).toBe(200);
+    const mass = 0.2;
+    const density = mass / ((Math.PI / 6) * 0.08 ** 3);
+    const direct = squeezeResultJson(
+      runSqueeze({
+        equatorialRadius: 0.04,
+        axialRadius: 0.04,
+        modulus: 3e6,
+        poisson: 0.35,
+        travel: 0.001,
+        mesh: 'normal',
+        density: Number(density.toPrecision(4)),
+        friction: 0.5,
+        safetyFactor: 2,
+        accelG: 0,
+        bruiseThreshold: 100e3,
+      }),
+    );
+    for (const key of ['force_n', 'contact_radius_mm', 'peak_pressure_kpa'] as const) {
+      expect(json.result.model.final[key]).toBe(direct.final[key]);
+    }
+    expect(json.result.model.liftability.grip).toEqual(direct.liftability!.grip);
+  });
+
+  it('with a pad: the grip point, a margin in words, the pad sweep and the slip map', async () => {
+    const res = await post(squeeze, { ...FRUIT, padDiameterMm: 20, padEdgeMm: 2, maxTravelMm: 2 });
+    const r = (await res.json()).result;
+    // The grip rule [common practice]: 2μN ≥ SF·m·g → N = 2·0.2·9.80665/(2·0.5) = 3.923 N
+    // (4 figures printed; the grip search stops within 1e-5 of the travel).
+    expect(Math.abs(r.model.liftability.grip.force_n - 3.923) / 3.923).toBeLessThan(2e-3);
+    expect(r.margin.verdict).toBe(
+      r.margin.value >= 1.5 ? 'comfortable' : r.margin.value >= 1 ? 'tight' : 'bruise risk',
+    );
+    expect(r.sweep.points).toHaveLength(12);
+    expect(
+      r.sweep.points.some((p: { pad_diameter_mm: number }) => Math.abs(p.pad_diameter_mm - 20) < 3),
+    ).toBe(true);
+    // Lifting carries m·g/2 per pad, the design load SF times that: utilisation T/μP = 1/SF.
+    expect(r.slip.holds).toBe(true);
+    expect(Math.abs(r.slip.utilisation - 0.5)).toBeLessThan(2e-3);
+    expect(r.slip.stick_radius_mm).toBeLessThan(r.slip.contact_radius_mm);
+    expect(r.grip_profile.length).toBeGreaterThan(5);
+  });
+
+  it('the probability of bruising streams progress, then its result', async () => {
+    const res = await post(probability, {
+      ...FRUIT,
+      padDiameterMm: 20,
+      padEdgeMm: 2,
+      maxTravelMm: 2,
+      samples: 50,
+    });
+    expect(res.headers.get('content-type')).toContain('ndjson');
+    const lines = (await res.text())
+      .trim()
+      .split('\n')
+      .map((l) => JSON.parse(l));
+    expect(lines.some((l) => typeof l.progress === 'number')).toBe(true);
+    const { result } = lines[lines.length - 1];
+    // No published spreads for typed values: every sample is the nominal case, margin 0.57 < 1,
+    // so P(margin < 1) is exactly 1.
+    expect(result.without_spread).toHaveLength(6);
+    expect(result.probability).toBe(1);
+    expect(result.completed).toBe(50);
+  });
+});
+
+describe('squeeze bad input: 400 with a field message', () => {
+  beforeAll(async () => signInAs(await userId(ACCOUNTS.engineer)));
+  const cases: [string, unknown, string][] = [
+    ['missing travel', { ...FRUIT }, 'maxTravelMm'],
+    ['negative travel', { ...FRUIT, maxTravelMm: -1 }, 'maxTravelMm'],
+    ['travel as text', { ...FRUIT, maxTravelMm: 'two' }, 'maxTravelMm'],
+    [
+      'edge wider than the pad',
+      { ...FRUIT, maxTravelMm: 1, padDiameterMm: 10, padEdgeMm: 6 },
+      'padEdgeMm',
+    ],
+    [
+      'custom facing without its modulus',
+      { ...FRUIT, maxTravelMm: 1, facing: 'custom', facingThicknessMm: 2 },
+      'facingModulusMpa',
+    ],
+    ['unknown facing', { ...FRUIT, maxTravelMm: 1, facing: 'velvet' }, 'facing'],
+    ['unknown cultivar', { cultivar: 'no-such', maxTravelMm: 1 }, 'cultivar'],
+    ['travel beyond the model', { ...FRUIT, maxTravelMm: 20 }, 'travel'],
+  ];
+  for (const [name, body, field] of cases) {
+    it(name, async () => {
+      const res = await post(squeeze, body);
+      const json = await res.json();
+      expect(res.status, JSON.stringify(json)).toBe(400);
+      expect(json.fieldErrors?.[field]?.[0], JSON.stringify(json)).toMatch(/\w/);
+    });
+  }
+  it('a cultivar with only a draft is refused', async () => {
+    const [commodity] = await db('commodities').select('id').limit(1);
+    await db('cultivars').insert({
+      commodity_id: commodity.id,
+      slug: 'squeeze-draft',
+      name: 'Draft',
+      is_type: false,
+    });
+    await createDraft((await getActiveActor(await userId(ACCOUNTS.editor)))!, 'squeeze-draft');
+    const res = await post(squeeze, { cultivar: 'squeeze-draft', maxTravelMm: 1 });
+    expect(res.status).toBe(400);
+    expect((await res.json()).fieldErrors.cultivar[0]).toMatch(/no published revision/);
+  });
+});
+
+describe('who may run the squeeze check (written out)', () => {
+  const EXPECT = { 'signed-out': 401, admin: 200, editor: 200, engineer: 200, buyer: 403 } as const;
+  for (const [who, status] of Object.entries(EXPECT)) {
+    it(`POST /api/checks/squeeze as ${who} → ${status}`, async () => {
+      signInAs(who === 'signed-out' ? null : await userId(ACCOUNTS[who as keyof typeof ACCOUNTS]));
+      expect(
+        (await post(squeeze, { ...FRUIT, maxTravelMm: 0.5, sweep: false, mesh: 'coarse' })).status,
+      ).toBe(status);
+    });
+  }
+});
