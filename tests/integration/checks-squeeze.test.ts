@@ -56,7 +56,7 @@ describe('squeeze check route', () => {
       }),
     );
     for (const key of ['force_n', 'contact_radius_mm', 'peak_pressure_kpa'] as const) {
-      expect(json.result.model.final[key]).toBe(direct.final[key]);
+      expect(json.result.model.final[key]).toBe((direct.final as Record<string, unknown>)[key]);
     }
     expect(json.result.model.liftability.grip).toEqual(direct.liftability!.grip);
   });
