@@ -1,6 +1,9 @@
 import { Fragment, type ReactNode } from 'react';
 import { Measure } from '@/components/units/measure';
 import { DropCharts } from '@/components/checks/drop-charts';
+import { SlipMap } from '@/components/checks/slip-map';
+import { SqueezeCharts } from '@/components/checks/squeeze-charts';
+import type { SqueezeCheckResult } from '@/lib/checks/squeeze';
 import { StackCharts } from '@/components/checks/stack-charts';
 import { CheckWarnings, UsedValues, type UsedValueView } from '@/components/checks/used-values';
 import type { DropCheckResult } from '@/lib/checks/drop';
@@ -14,6 +17,9 @@ const LABELS: Record<string, string> = {
   mass_g: 'Mass',
   static_bruise_threshold_kpa: 'Static bruise threshold',
   bulk_density_kg_m3: 'Bulk density',
+  density_kg_m3: 'Density',
+  friction: 'Friction',
+  failure_stress_kpa: 'Failure stress',
   wall_friction: 'Wall friction',
   lateral_pressure_ratio: 'Lateral pressure ratio',
 };
@@ -67,6 +73,50 @@ export function ReportResults({ check, results }: { check: string; results: unkn
           heightMm={r.inputs_used.height_mm}
           thresholdKpa={r.static?.threshold_kpa ?? null}
         />
+        <UsedValues rows={usedRows(r.inputs_used as unknown as Used)} />
+      </div>
+    );
+  }
+  if (check === 'squeeze') {
+    const r = results as SqueezeCheckResult;
+    const g = r.model.liftability?.grip as Record<string, number | null> | null | undefined;
+    return (
+      <div className="space-y-4">
+        <CheckWarnings warnings={r.warnings} />
+        <Figures
+          rows={[
+            [
+              'Grip force per pad',
+              g?.force_n != null ? <Measure key="gf" value={g.force_n} unit="N" /> : 'not lifted',
+            ],
+            [
+              'Travel per pad at the grip',
+              g?.travel_per_pad_mm != null ? (
+                <Measure key="gt" value={g.travel_per_pad_mm} unit="mm" />
+              ) : (
+                '—'
+              ),
+            ],
+            [
+              'Peak pressure at the grip',
+              g?.peak_pressure_kpa != null ? (
+                <Measure key="gp" value={g.peak_pressure_kpa} unit="kPa" />
+              ) : (
+                '—'
+              ),
+            ],
+            [
+              'Smallest safe pad in the sweep',
+              r.sweep?.smallest_safe_pad_mm ? (
+                <Measure key="sp" value={r.sweep.smallest_safe_pad_mm} unit="mm" />
+              ) : (
+                'none'
+              ),
+            ],
+          ]}
+        />
+        <SqueezeCharts result={r} />
+        {r.slip ? <SlipMap slip={r.slip} /> : null}
         <UsedValues rows={usedRows(r.inputs_used as unknown as Used)} />
       </div>
     );

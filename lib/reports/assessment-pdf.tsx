@@ -32,6 +32,42 @@ function chartsOf(a: Assessment): { title: string; x: string; y: string; series:
     string,
     number
   >[];
+  if (a.check === 'squeeze') {
+    const r = a.results as unknown as {
+      model: { steps: Record<string, number>[] };
+      grip_profile: Record<string, number>[] | null;
+    };
+    return [
+      {
+        title: 'Pad force against travel',
+        x: 'travel per pad (mm)',
+        y: 'force (N)',
+        series: [
+          {
+            label: 'F',
+            color: '#2f5f2c',
+            points: r.model.steps.map((p) => [p.travel_per_pad_mm, p.force_n]),
+          },
+        ],
+      },
+      ...(r.grip_profile
+        ? [
+            {
+              title: 'Contact pressure at the grip point',
+              x: 'radius (mm)',
+              y: 'pressure (kPa)',
+              series: [
+                {
+                  label: 'p',
+                  color: '#8a4b16',
+                  points: r.grip_profile.map((p) => [p.r_mm, p.pressure_kpa] as [number, number]),
+                },
+              ],
+            },
+          ]
+        : []),
+    ];
+  }
   if (a.check === 'drop') {
     return [
       {

@@ -1,0 +1,113 @@
+'use client';
+
+import { FACING_KEYS, FACING_PRESETS, type FacingPreset } from '@/lib/checks/facings';
+import { CultivarSelect, MeasureField, publishedHint, type CultivarOption } from './check-fields';
+import { FIELD_UNITS } from './field-units';
+import { useUnits } from '@/components/units/units-provider';
+
+const FRUIT = [
+  ['modulusMpa', "Young's modulus"],
+  ['poisson', "Poisson's ratio"],
+  ['diameterMm', 'Diameter (equatorial)'],
+  ['axialMm', 'Axial diameter (along the squeeze)'],
+  ['massG', 'Mass'],
+  ['densityKgM3', 'Density'],
+  ['staticThresholdKpa', 'Static bruise threshold'],
+  ['friction', 'Friction coefficient'],
+] as const;
+const GRIP = [
+  ['padDiameterMm', 'Pad diameter', ''],
+  ['padEdgeMm', 'Pad edge radius', ''],
+  ['safetyFactor', 'Safety factor on weight', 'our default 2'],
+  ['accelerationMs2', 'Peak acceleration of the move', 'upward, beyond gravity'],
+  ['maxTravelMm', 'Maximum travel per pad', 'at most 15 % of the axial radius'],
+] as const;
+
+export interface SqueezeFormProps {
+  cultivars: CultivarOption[];
+  cultivar: string;
+  setCultivar: (slug: string) => void;
+  facing: FacingPreset;
+  setFacing: (f: FacingPreset) => void;
+  text: Record<string, string>;
+  set: (key: string) => (value: string) => void;
+  fieldErrors: Record<string, string[]>;
+  message: string | null;
+}
+
+/** The squeeze check's inputs: fruit (or a cultivar's published values), pads and the move. */
+export function SqueezeForm(p: SqueezeFormProps) {
+  const units = useUnits();
+  const option = p.cultivars.find((o) => o.slug === p.cultivar);
+  const field = (key: string, label: string, hint?: string) => (
+    <MeasureField
+      key={key}
+      label={label}
+      unit={FIELD_UNITS[key] ?? '–'}
+      hint={hint || undefined}
+      value={p.text[key] ?? ''}
+      onChange={p.set(key)}
+      errors={p.fieldErrors[key]}
+      placeholder={publishedHint(option, key, (v) => units.toDisplay(v, FIELD_UNITS[key] ?? '–'))}
+    />
+  );
+  return (
+    <form className="space-y-3" onSubmit={(e) => e.preventDefault()} aria-label="Squeeze inputs">
+      <CultivarSelect
+        options={p.cultivars}
+        value={p.cultivar}
+        onChange={p.setCultivar}
+        errors={p.fieldErrors.cultivar}
+      />
+      <fieldset className="space-y-3 rounded-md border border-stone-200 p-3">
+        <legend className="px-1 text-xs font-medium uppercase tracking-wide text-stone-600">
+          Grip
+        </legend>
+        {GRIP.map(([key, label, hint]) => field(key, label, hint))}
+        <div className="space-y-1">
+          <label htmlFor="squeeze-facing" className="block text-sm font-medium">
+            Pad facing
+          </label>
+          <select
+            id="squeeze-facing"
+            value={p.facing}
+            onChange={(e) => p.setFacing(e.target.value as FacingPreset)}
+            className="w-full max-w-xs rounded-md border border-stone-300 bg-white px-2 py-1.5 text-sm"
+          >
+            {FACING_KEYS.map((k) => (
+              <option key={k} value={k}>
+                {FACING_PRESETS[k].label}
+              </option>
+            ))}
+          </select>
+          <p className="text-xs text-stone-500">{FACING_PRESETS[p.facing].basis}</p>
+          <p className="text-xs text-red-700" aria-live="polite">
+            {p.fieldErrors.facing?.join(' ')}
+          </p>
+        </div>
+        {p.facing === 'custom' ? (
+          <>
+            {field('facingModulusMpa', 'Facing modulus')}
+            {field('facingThicknessMm', 'Facing thickness')}
+            {field('facingPoisson', "Facing Poisson's ratio", 'empty: 0.45')}
+          </>
+        ) : null}
+      </fieldset>
+      <fieldset className="space-y-3 rounded-md border border-stone-200 p-3">
+        <legend className="px-1 text-xs font-medium uppercase tracking-wide text-stone-600">
+          Fruit {p.cultivar ? '(leave empty to use the published value)' : ''}
+        </legend>
+        {FRUIT.map(([key, label]) => field(key, label))}
+      </fieldset>
+      {p.message ? (
+        <p
+          className="rounded-md bg-red-50 px-3 py-2 text-sm text-red-800"
+          data-testid="form-error"
+          aria-live="polite"
+        >
+          {p.message}
+        </p>
+      ) : null}
+    </form>
+  );
+}
