@@ -57,10 +57,16 @@ export function edgeBandOf(
   const plan = planOf(level, contact, null);
   const grading = LEVEL_GRADING[level];
   const lo0 = chordOf(t.flat);
-  const ambient = Math.min(
-    (lo0 * Math.PI) / (4 * plan.half),
-    plan.poleSpacing + 0.15 * Math.max(0, lo0 - (plan.contactExtent ?? 0)),
-  );
+  // The spacing the mesh would have there: the pole spacing over the contact (the core and the
+  // capped rings), then the smaller of the natural ring spacing and the contact's growth.
+  const extent = plan.contactExtent ?? 0;
+  const ambient =
+    lo0 <= extent
+      ? plan.poleSpacing
+      : Math.min(
+          Math.max((lo0 * Math.PI) / (4 * plan.half), plan.poleSpacing),
+          plan.poleSpacing + 0.15 * (lo0 - extent),
+        );
   const target = Math.max(
     Math.min(t.edge / grading.edgeDivisions, ambient / grading.bandRefinement),
     plan.poleSpacing / 32,

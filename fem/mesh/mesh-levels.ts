@@ -47,9 +47,13 @@ export const MESH_LEVEL_PARAMS: Record<MeshLevel, MeshLevelParams> = {
   fine: { half: 20, poleSpacing: 0.005, ringOuter: 0.7 },
 };
 
-/** 8 / 16 / 32 nodes across the contact, as the pole spacings give a 0.16 R contact. */
+/**
+ * 8 / 16 / 32 nodes across the contact, as the pole spacings give a 0.16 R contact; the edge
+ * band resolves the rounded edge with 12 / 24 / 48 spacings, which puts 3–10 nodes across the
+ * pressure peak of a contact that reaches a quarter of the edge radius past the flat.
+ */
 export const LEVEL_GRADING: Record<MeshLevel, LevelGrading> = {
-  coarse: { nodesPerContact: 8, edgeDivisions: 6, bandRefinement: 2 },
-  normal: { nodesPerContact: 16, edgeDivisions: 12, bandRefinement: 3 },
-  fine: { nodesPerContact: 32, edgeDivisions: 24, bandRefinement: 5 },
+  coarse: { nodesPerContact: 8, edgeDivisions: 12, bandRefinement: 2 },
+  normal: { nodesPerContact: 16, edgeDivisions: 24, bandRefinement: 3 },
+  fine: { nodesPerContact: 32, edgeDivisions: 48, bandRefinement: 5 },
 };

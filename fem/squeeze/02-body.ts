@@ -7,6 +7,7 @@ import { contactBandOf, edgeBandOf, poissonBandOf } from '../body/grading';
 import type { UnitBodyKey } from '../types';
 import { validateSqueezeInput, type SqueezeCase, type SqueezeInput } from './01-input';
 import { contactPoints, type ContactPoints } from './contact-points';
+import { padReach } from './pad';
 
 /** A squeeze case on its condensed body: real point radii and initial gaps to the pad. */
 export interface BodyStage {
@@ -35,13 +36,15 @@ export interface BodyStage {
  * level, contact-scale band and pad-edge band (built on first use). The contact scale is the
  * Hertz estimate √(R_p·d) at the full travel d with the pole radius R_p = R_eq²/R_ax (Johnson,
  * Contact Mechanics, 1985, ch. 4), or the case's `meshContactRadius` when given (a run that
- * refines a small contact). Throws FemInputError naming the field for bad input.
+ * refines a small contact), and at most the pad's outer radius. Throws FemInputError naming the field for bad input.
  */
 export function prepareBody(input: SqueezeInput): BodyStage {
   const c = validateSqueezeInput(input);
   const R = c.equatorialRadius;
   const expectedContact = Math.sqrt(((R * R) / c.axialRadius) * c.travel);
-  const contactBand = contactBandOf((c.meshContactRadius ?? expectedContact) / R);
+  // A pad narrower than the plate's contact bounds the contact by its outer radius.
+  const scale = Math.min(c.meshContactRadius ?? expectedContact, padReach(c.pad));
+  const contactBand = contactBandOf(scale / R);
   const key: UnitBodyKey = {
     model: c.model,
     aspect: c.aspect,

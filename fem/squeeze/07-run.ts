@@ -83,9 +83,11 @@ export function regradeRadius(stage: LiftStage, state: SqueezeState): number | n
 /**
  * Prepares `input` (stage 6) and runs its increments (shear optional) and grip search. When the
  * final state or the grip has fewer than MIN_CONTACT_NODES points in contact, or its shear could
- * not be sampled, the case runs once more on a mesh graded to that contact (unless the input
- * fixes `meshContactRadius`). A regrade for the final state serves the whole run; one for the
- * grip alone keeps the increments of the first run and takes the grip from the second.
+ * not be sampled, that state is taken from a second run on a mesh graded to its contact (unless
+ * the input fixes `meshContactRadius`): the increments and final state from a run graded to the
+ * final contact, the grip from one graded to the grip's (the same run when both fall in one
+ * contact-scale band). Each depends only on the first run and its own contact, so a caller can
+ * repeat the grip alone with regradeRadius.
  */
 export function runCase(input: SqueezeInput, withShear: boolean): CaseRun {
   const first = runOnce(input, withShear);
@@ -93,11 +95,23 @@ export function runCase(input: SqueezeInput, withShear: boolean): CaseRun {
   const grip = first.liftability?.grip ?? null;
   const forFinal = regradeRadius(first.stage, first.track[first.track.length - 1].state);
   const forGrip = grip ? regradeRadius(first.stage, grip) : null;
-  if (forFinal === null && forGrip === null) return { ...first, gripStage: null };
-  const target = Math.min(forFinal ?? Infinity, forGrip ?? Infinity);
-  const second = runOnce({ ...input, meshContactRadius: target }, withShear);
-  if (forFinal !== null) return { ...second, gripStage: null };
-  return { ...first, liftability: second.liftability, gripStage: second.stage };
+  const main =
+    forFinal === null ? first : runOnce({ ...input, meshContactRadius: forFinal }, withShear);
+  if (forGrip === null) {
+    return {
+      ...main,
+      liftability: first.liftability,
+      gripStage: main === first ? null : first.stage,
+    };
+  }
+  const R = first.stage.case.equatorialRadius;
+  const shared = forFinal !== null && contactBandOf(forFinal / R) === contactBandOf(forGrip / R);
+  const gripRun = shared ? main : runOnce({ ...input, meshContactRadius: forGrip }, false);
+  return {
+    ...main,
+    liftability: gripRun.liftability,
+    gripStage: gripRun === main ? null : gripRun.stage,
+  };
 }
 
 /** Mesh summary of a stage's body. */

@@ -1,4 +1,11 @@
 import { describe, expect, it } from 'vitest';
+import {
+  contactBandOf,
+  contactScaleOf,
+  edgeBandOf,
+  planOf,
+  type EdgeTarget,
+} from '../../../fem/body/grading';
 import { MESH_LEVEL_PARAMS } from '../../../fem/mesh/mesh-levels';
 import { meshQuality } from '../support/mesh-quality';
 import { quarterEllipseMesh } from '../../../fem/mesh/quarter-ellipse';
@@ -86,4 +93,49 @@ describe('quarter-ellipse mesh', () => {
       }
     });
   }
+});
+
+describe('quarter-ellipse mesh graded to a contact and a pad edge', () => {
+  // Graded plans as the squeeze builds them: small contacts (a = 0.002–0.16 of the radius) and
+  // refined bands at a pad's edge, tiny and large edge radii.
+  const plans: [string, MeshLevel, number, EdgeTarget | null][] = [
+    ['tiny contact', 'normal', 0.002, null],
+    ['1 mm on 80 mm', 'normal', 0.158, null],
+    ['13 mm pad', 'normal', 0.158, { flat: 0.1125, outer: 0.1625, edge: 0.05, maxContact: 0.2 }],
+    [
+      '3 mm pad, 0.1 mm edge',
+      'fine',
+      0.0375,
+      { flat: 0.035, outer: 0.0375, edge: 0.0025, maxContact: 0.2 },
+    ],
+    [
+      'pad inside the core',
+      'coarse',
+      0.1,
+      { flat: 0.005, outer: 0.01, edge: 0.005, maxContact: 0.12 },
+    ],
+  ];
+  it.each(plans)('%s: valid elements that tile the section', (_name, level, a, edge) => {
+    const contact = contactBandOf(a);
+    const band = edge && edgeBandOf(level, contact, edge);
+    const mesh = quarterEllipseMesh(1.2, planOf(level, contact, band ?? null));
+    const q = meshQuality(mesh);
+    // As for the standard levels: positive Jacobians, no corner under ~15° [common practice].
+    expect(q.minDetJ).toBeGreaterThan(0);
+    expect(q.minCornerSine).toBeGreaterThan(0.25);
+    // Surface nodes on the ellipse to round-off, rising from the pole.
+    for (let i = 1; i < mesh.surface.length; i++) {
+      const v = mesh.surface[i];
+      expect(Math.abs(mesh.nodeR[v] ** 2 + (mesh.nodeZ[v] / 1.2) ** 2 - 1)).toBeLessThan(1e-12);
+      expect(mesh.nodeR[v]).toBeGreaterThan(mesh.nodeR[mesh.surface[i - 1]]);
+    }
+    // Near the pole the surface spacing is at most the graded spacing a/N (N = 8, 16, 32 nodes
+    // per contact radius, product mesh specification) with 40 % for the core's outer steps.
+    const perContact = { coarse: 8, normal: 16, fine: 32 }[level];
+    const r = Array.from(mesh.surface, (v) => mesh.nodeR[v]);
+    const within = r.filter((x) => x <= 0.8 * contactScaleOf(contact));
+    for (let i = 1; i < within.length; i++) {
+      expect(within[i] - within[i - 1]).toBeLessThan((1.4 * contactScaleOf(contact)) / perContact);
+    }
+  });
 });

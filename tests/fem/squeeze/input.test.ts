@@ -46,6 +46,13 @@ describe('squeeze input checks name the field', () => {
     ['facing modulus 0', { facingModulus: 0, facingThickness: 0.003 }, /^facingModulus:/],
     ['facing thickness < 0', { facingModulus: 1e6, facingThickness: -1 }, /^facingThickness:/],
     ['facing thickness alone', { facingThickness: 0.003 }, /^facingModulus: .*needed/],
+    ['facing Poisson alone', { facingPoisson: 0.4 }, /^facingPoisson: facingPoisson needs/],
+    [
+      'facing Poisson 0.5',
+      { facingModulus: 1e6, facingThickness: 0.003, facingPoisson: 0.5 },
+      /^facingPoisson: .*less than 0.5/,
+    ],
+    ['mesh contact radius 0', { meshContactRadius: 0 }, /^meshContactRadius: .*greater than zero/],
     ['density alone', { density: 800 }, /^friction: .*needed/],
     ['friction 0', { density: 800, friction: 0 }, /^friction:/],
     ['safety factor < 1', { density: 800, friction: 0.4, safetyFactor: 0.5 }, /^safetyFactor:/],

@@ -50,7 +50,7 @@ describe('pad geometry', () => {
   });
 });
 
-describe('compliant facing (a Winkler layer E_l / t_l in series)', () => {
+describe('compliant facing (an elastic layer in series with the fruit)', () => {
   const rigid = runSqueeze(base);
   it('lowers the peak pressure and spreads the contact', () => {
     const soft = runSqueeze({ ...base, facingModulus: 1e6, facingThickness: 0.003 });
@@ -64,7 +64,8 @@ describe('compliant facing (a Winkler layer E_l / t_l in series)', () => {
     });
     expect(gaps[1]).toBeLessThan(gaps[0]);
     expect(gaps[2]).toBeLessThan(gaps[1]);
-    // E_l/t_l = 3.3e12 Pa/m against a fruit stiffness ~E*/a ≈ 5e8 Pa/m: difference ~1e-4.
+    // Layer stiffness per area ≥ E_l/t_l = 3.3e12 Pa/m against a fruit stiffness ~E*/a ≈
+    // 5e8 Pa/m: difference ~1e-4.
     expect(gaps[2]).toBeLessThan(1e-3);
   });
 });
