@@ -11,7 +11,7 @@ describe('pad facing layer', () => {
     // A thin layer bonded to a rigid base is compressed without lateral strain: foundation
     // modulus K = E_c/t with the confined modulus E_c = E(1 − ν)/((1 + ν)(1 − 2ν)). A rigid sphere
     // pressed by δ into it: p = K(δ − r²/2R), a = √(2Rδ), F = πKRδ² (the elastic foundation
-    // model, K. L. Johnson, Contact Mechanics, 1985, §5.? [from memory]; worked example, computed
+    // model, K. L. Johnson, Contact Mechanics, 1985, ch. 5 [from memory]; worked example, computed
     // from p = K·(gap closed)). The fruit here is 10⁴ times stiffer than the layer (rigid), and
     // the layer is t = 0.05 mm under a contact of a ≈ 0.9 mm (t/a ≈ 0.06).
     const [El, nu, t, d] = [0.3e6, 0.3, 5e-5, 1e-5];
