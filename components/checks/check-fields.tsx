@@ -38,7 +38,7 @@ export function MeasureField({
           onChange={(e) => onChange(e.target.value)}
           aria-invalid={errors?.length ? true : undefined}
           aria-describedby={describedBy}
-          className="num w-32 rounded-md border border-stone-300 bg-white px-2 py-1 text-sm aria-[invalid=true]:border-red-600"
+          className="num w-36 rounded-md border border-stone-300 bg-white px-2 py-1 text-sm aria-[invalid=true]:border-red-600"
         />
         <span className="text-sm text-stone-600">{units.unit(unit)}</span>
       </div>

@@ -31,7 +31,7 @@ function Chart({
   rows: Row[];
   x: [string, string, string];
   y: [string, string, string];
-  mark?: { x: number; y: number } | null;
+  mark?: { x: number; y: number; label?: string } | null;
   hLine?: { y: number; label: string } | null;
   testId: string;
 }) {

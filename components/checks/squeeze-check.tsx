@@ -80,7 +80,9 @@ export function SqueezeCheck({
               {[
                 [
                   'Grip force per pad',
-                  grip ? units.show((grip as Record<string, unknown>).force_n as number, 'N') : 'not lifted',
+                  grip
+                    ? units.show((grip as Record<string, unknown>).force_n as number, 'N')
+                    : 'not lifted',
                 ],
                 [
                   'Travel per pad at the grip',
