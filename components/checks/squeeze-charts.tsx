@@ -144,7 +144,7 @@ export function SqueezeCharts({ result }: { result: SqueezeCheckResult }) {
           hLine={{ y: 1, label: 'margin 1' }}
           mark={
             result.inputs_used.pad_diameter_mm && result.margin
-              ? { x: result.inputs_used.pad_diameter_mm, y: result.margin.value }
+              ? { x: result.inputs_used.pad_diameter_mm, y: result.margin.value, label: 'this pad' }
               : null
           }
         />
