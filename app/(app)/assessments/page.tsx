@@ -135,6 +135,10 @@ export default async function AssessmentsPage({ searchParams }: { searchParams: 
             </li>
           ))}
         </ul>
+        <button type="submit" className="rounded-md border border-stone-300 bg-white px-3 py-1 text-sm">
+          Compare the ticked squeeze checks
+        </button>
+        </form>
       )}
     </section>
   );
