@@ -97,47 +97,60 @@ export default async function AssessmentsPage({ searchParams }: { searchParams: 
           {check || q.cultivar ? ' match these filters' : ' yet: run a check and save it'}.
         </p>
       ) : (
-        <ul
-          className="divide-y divide-stone-200 rounded-lg border border-stone-200 bg-white"
-          data-testid="assessments-list"
-        >
-          {rows.map((a) => (
-            <li
-              key={a.id}
-              className="flex flex-wrap items-baseline justify-between gap-2 p-3 text-sm"
-            >
-              <div className="min-w-0">
-                <Link
-                  href={`/assessments/${a.id}`}
-                  className="font-medium text-leaf-700 underline [overflow-wrap:anywhere]"
-                >
-                  {a.title}
-                </Link>
-                <span className="ml-2 text-xs text-stone-500">
-                  {a.check} check · version {a.version}
-                  {a.cultivarName
-                    ? ` · ${a.cultivarName}, revision ${a.revisionNumber}`
-                    : ' · custom values'}
-                  {everyone ? ` · ${a.ownerName}` : ''}
-                </span>
-                {a.newerRevision ? (
-                  <span className="ml-2 rounded bg-amber-100 px-1.5 text-xs text-amber-900">
-                    newer data: revision {a.newerRevision.number}
+        <form action="/assessments/compare" method="get" className="space-y-2">
+          <ul
+            className="divide-y divide-stone-200 rounded-lg border border-stone-200 bg-white"
+            data-testid="assessments-list"
+          >
+            {rows.map((a) => (
+              <li
+                key={a.id}
+                className="flex flex-wrap items-baseline justify-between gap-2 p-3 text-sm"
+              >
+                <div className="min-w-0">
+                  {a.check === 'squeeze' ? (
+                    <input
+                      type="checkbox"
+                      name="ids"
+                      value={a.id}
+                      aria-label={`Compare ${a.title}`}
+                      className="mr-2"
+                    />
+                  ) : null}
+                  <Link
+                    href={`/assessments/${a.id}`}
+                    className="font-medium text-leaf-700 underline [overflow-wrap:anywhere]"
+                  >
+                    {a.title}
+                  </Link>
+                  <span className="ml-2 text-xs text-stone-500">
+                    {a.check} check · version {a.version}
+                    {a.cultivarName
+                      ? ` · ${a.cultivarName}, revision ${a.revisionNumber}`
+                      : ' · custom values'}
+                    {everyone ? ` · ${a.ownerName}` : ''}
                   </span>
-                ) : null}
-              </div>
-              <div className="num text-right">
-                {a.margin === null ? '—' : `margin ${a.margin.toFixed(2)}`}
-                <span className="block text-xs text-stone-500">
-                  {new Date(a.createdAt).toUTCString()}
-                </span>
-              </div>
-            </li>
-          ))}
-        </ul>
-        <button type="submit" className="rounded-md border border-stone-300 bg-white px-3 py-1 text-sm">
-          Compare the ticked squeeze checks
-        </button>
+                  {a.newerRevision ? (
+                    <span className="ml-2 rounded bg-amber-100 px-1.5 text-xs text-amber-900">
+                      newer data: revision {a.newerRevision.number}
+                    </span>
+                  ) : null}
+                </div>
+                <div className="num text-right">
+                  {a.margin === null ? '—' : `margin ${a.margin.toFixed(2)}`}
+                  <span className="block text-xs text-stone-500">
+                    {new Date(a.createdAt).toUTCString()}
+                  </span>
+                </div>
+              </li>
+            ))}
+          </ul>
+          <button
+            type="submit"
+            className="rounded-md border border-stone-300 bg-white px-3 py-1 text-sm"
+          >
+            Compare the ticked squeeze checks
+          </button>
         </form>
       )}
     </section>
