@@ -1,42 +1,16 @@
 'use client';
 
 import { useSearchParams } from 'next/navigation';
-import { useEffect, useState } from 'react';
-import {
-  getCoreRowModel,
-  getFilteredRowModel,
-  getPaginationRowModel,
-  getSortedRowModel,
-  useReactTable,
-  type ColumnFiltersState,
-  type PaginationState,
-  type SortingState,
-  type Updater,
-} from '@tanstack/react-table';
-import { QUANTITY_KEYS, isQuantity } from '@/lib/properties/quantities';
-import {
-  parseTableQuery,
-  tableQueryString,
-  type SortColumn,
-  type TableQuery,
-} from '@/lib/properties/table-query';
+import { useState } from 'react';
+import { isQuantity } from '@/lib/properties/quantities';
+import { parseTableQuery } from '@/lib/properties/table-query';
 import type { TableRow } from '@/lib/properties/table-rows';
 import { viewCsv } from '@/lib/properties/view-csv';
 import { ColumnPicker } from './column-picker';
-import { COLUMNS, nameMatches } from './table-columns';
 import { TableFilters } from './table-filters';
 import { TableGrid } from './table-grid';
 import { TablePager } from './table-pager';
-
-const resolve = <T,>(u: Updater<T>, old: T): T =>
-  typeof u === 'function' ? (u as (x: T) => T)(old) : u;
-
-function filtersOf(view: TableQuery): ColumnFiltersState {
-  const out: ColumnFiltersState = [];
-  if (view.commodity) out.push({ id: 'commodity', value: view.commodity });
-  if (view.range) out.push({ id: view.range.column, value: [view.range.min, view.range.max] });
-  return out;
-}
+import { usePropertiesTable, useViewInAddress } from './use-properties-table';
 
 function download(csv: string) {
   // The byte-order mark lets spreadsheets read the file as UTF-8 (en dashes, kg/m³).
@@ -60,47 +34,13 @@ export function PropertiesTable({ rows }: { rows: TableRow[] }) {
   // restores the view as it was last left.
   const params = useSearchParams();
   const [view, setView] = useState(() => parseTableQuery(params));
-  const sorting: SortingState = view.sort ? [view.sort] : [];
-  const pagination: PaginationState = { pageIndex: view.pageIndex, pageSize: view.pageSize };
-
-  // TanStack Table is the table engine here; the React Compiler (which this warns for) is off.
-  // eslint-disable-next-line react-hooks/incompatible-library
-  const table = useReactTable({
-    data: rows,
-    columns: COLUMNS,
-    state: {
-      sorting,
-      pagination,
-      globalFilter: view.q,
-      columnFilters: filtersOf(view),
-      columnVisibility: Object.fromEntries(QUANTITY_KEYS.map((q) => [q, view.columns.includes(q)])),
-    },
-    onSortingChange: (u) => {
-      const [next] = resolve(u, sorting);
-      const sort = next ? { id: next.id as SortColumn, desc: next.desc } : null;
-      setView((v) => ({ ...v, sort, pageIndex: 0 }));
-    },
-    onPaginationChange: (u) => setView((v) => ({ ...v, ...resolve(u, pagination) })),
-    globalFilterFn: nameMatches,
-    enableMultiSort: false,
-    autoResetPageIndex: false,
-    getCoreRowModel: getCoreRowModel(),
-    getFilteredRowModel: getFilteredRowModel(),
-    getSortedRowModel: getSortedRowModel(),
-    getPaginationRowModel: getPaginationRowModel(),
-  });
+  const table = usePropertiesTable(rows, view, setView);
+  useViewInAddress(view);
 
   const matching = table.getPrePaginationRowModel().rows;
   const lastPage = Math.max(0, table.getPageCount() - 1);
-  useEffect(() => {
-    if (view.pageIndex > lastPage) setView((v) => ({ ...v, pageIndex: lastPage }));
-  }, [view.pageIndex, lastPage]);
-  useEffect(() => {
-    const url = window.location.pathname + tableQueryString(view);
-    if (url !== window.location.pathname + window.location.search) {
-      window.history.replaceState(null, '', url);
-    }
-  }, [view]);
+  // A page past the end (an old link, a narrower filter) moves to the last page, during render.
+  if (view.pageIndex > lastPage) setView((v) => ({ ...v, pageIndex: lastPage }));
 
   const shownColumns = table
     .getVisibleLeafColumns()

@@ -1,19 +1,16 @@
 import fs from 'node:fs/promises';
-import { ACCOUNTS, expect, test } from './fixtures';
+import { expect, test } from './fixtures';
 import {
   columnTexts,
   gotoHydrated,
   JONATHAN,
   leadingNumber,
-  ownOrigin,
   parseCsv,
   shootBoth,
-  signedInPage,
+  publishFleshModulus,
   slugsShown,
   tableRows,
 } from './property-helpers';
-
-const EDITOR2 = 'editor2@kestrelvale.example';
 
 test.use({ viewport: { width: 1280, height: 900 } });
 
@@ -265,18 +262,6 @@ test('a buyer sees values and sources, and no history, diff, follow or draft con
   expect((await page.goto(`/properties/${JONATHAN}/compare?from=1&to=1`))?.status()).toBe(403);
 });
 
-type ApiValue = Record<string, unknown> & { quantity: string; variant: string; value: number };
-
-/** A revision's value as the draft API takes it back (source by key). */
-const asInput = (v: ApiValue & { source: { key: string } | null }) => ({
-  ...Object.fromEntries(
-    ['quantity', 'variant', 'value', 'low', 'high', 'sd', 'samples', 'method', 'ripeness']
-      .concat(['temperature', 'storage', 'loadingRate', 'probe', 'note', 'isTypicalDefault'])
-      .map((k) => [k, v[k]]),
-  ),
-  sourceKey: v.source?.key ?? null,
-});
-
 test('an engineer compares two revisions: the changed value shows old → new with sources', async ({
   page,
   signInAs,
@@ -284,51 +269,17 @@ test('an engineer compares two revisions: the changed value shows old → new wi
   baseURL,
 }) => {
   // Editor drafts and submits a new flesh modulus; editor2 publishes it (nobody their own).
-  const editor = await signedInPage(browser, ACCOUNTS.editor, baseURL!);
-  const { cultivar } = await (await editor.page.request.get(`/api/cultivars/${JONATHAN}`)).json();
-  const flesh = cultivar.values.find(
-    (v: ApiValue) => v.quantity === 'youngs_modulus' && v.variant === 'flesh',
-  );
-  const created = await editor.page.request.post(`/api/cultivars/${JONATHAN}/revisions`, {
-    data: {},
-    headers: ownOrigin(editor.page),
-  });
-  expect(created.status(), await created.text()).toBe(201);
-  const id = (await created.json()).revision.id;
-  const { revision } = await (await editor.page.request.get(`/api/revisions/${id}`)).json();
-  const values = revision.values.map((v: ApiValue & { source: { key: string } | null }) =>
-    v.quantity === 'youngs_modulus' && v.variant === 'flesh'
-      ? { ...asInput(v), value: 3.05 }
-      : asInput(v),
-  );
-  for (const [method, url, data] of [
-    ['PUT', `/api/revisions/${id}`, { summary: 'Flesh modulus re-read: 3.05 MPa', values }],
-    ['POST', `/api/revisions/${id}/submit`, {}],
-  ] as const) {
-    const r = await editor.page.request.fetch(url, {
-      method,
-      data,
-      headers: ownOrigin(editor.page),
-    });
-    expect(r.status(), await r.text()).toBe(200);
-  }
-  await editor.close();
-  const editor2 = await signedInPage(browser, EDITOR2, baseURL!);
-  const published = await editor2.page.request.post(`/api/revisions/${id}/publish`, {
-    data: {},
-    headers: ownOrigin(editor2.page),
-  });
-  expect(published.status(), await published.text()).toBe(200);
-  await editor2.close();
+  const { before, revision } = await publishFleshModulus(browser, baseURL!, 3.05);
+  const flesh = before.flesh;
 
   await signInAs('engineer');
   await page.goto(`/properties/${JONATHAN}`);
   const form = page.getByTestId('compare-form');
-  await form.getByLabel('Older (before)').selectOption(String(cultivar.revision.number));
+  await form.getByLabel('Older (before)').selectOption(String(before.revisionNumber));
   await form.getByLabel('Newer (after)').selectOption(String(revision.number));
   await form.getByRole('button', { name: 'Compare revisions' }).click();
   await expect(page).toHaveURL(
-    new RegExp(`/compare\\?from=${cultivar.revision.number}&to=${revision.number}$`),
+    new RegExp(`/compare\\?from=${before.revisionNumber}&to=${revision.number}$`),
   );
   const changed = page.locator('[data-testid="diff-row"][data-change="changed"]', {
     hasText: "Young's modulus (flesh)",

@@ -1,5 +1,5 @@
-import { expect, type Browser, type Locator, type Page } from '@playwright/test';
-import { DEMO_PASSWORD } from '../support/accounts';
+import { expect, type APIResponse, type Browser, type Locator, type Page } from '@playwright/test';
+import { ACCOUNTS, DEMO_PASSWORD } from '../support/accounts';
 import { SignInPage } from './pages/sign-in-page';
 import { expectNoSidewaysScroll } from './invitation-helpers';
 
@@ -90,4 +90,70 @@ export async function shootBoth(page: Page, name: string, keep?: Locator) {
     });
   }
   await page.setViewportSize({ width: 1280, height: 900 });
+}
+
+type ApiValue = Record<string, unknown> & {
+  quantity: string;
+  variant: string;
+  value: number;
+  spread: { low: number | null; high: number | null };
+  source: { key: string } | null;
+};
+const isFlesh = (v: ApiValue) => v.quantity === 'youngs_modulus' && v.variant === 'flesh';
+
+/** A revision's value as the draft API takes it back (source by key). */
+const asInput = (v: ApiValue) => ({
+  ...Object.fromEntries(
+    ['quantity', 'variant', 'value', 'low', 'high', 'sd', 'samples', 'method', 'ripeness']
+      .concat(['temperature', 'storage', 'loadingRate', 'probe', 'note', 'isTypicalDefault'])
+      .map((k) => [k, v[k]]),
+  ),
+  sourceKey: v.source?.key ?? null,
+});
+
+async function expectStatus(response: Promise<APIResponse>, status: number) {
+  const r = await response;
+  expect(r.status(), await r.text()).toBe(status);
+  return r.json();
+}
+
+/**
+ * Publish a new revision of Jonathan with another flesh modulus through the JSON API: the
+ * editor drafts, edits and submits it; editor2 publishes it. Returns the published record
+ * before, and the new revision.
+ */
+export async function publishFleshModulus(browser: Browser, baseURL: string, value: number) {
+  const editor = await signedInPage(browser, ACCOUNTS.editor, baseURL);
+  const req = editor.page.request;
+  const headers = ownOrigin(editor.page);
+  const { cultivar } = await expectStatus(req.get(`/api/cultivars/${JONATHAN}`), 200);
+  const created = await expectStatus(
+    req.post(`/api/cultivars/${JONATHAN}/revisions`, { data: {}, headers }),
+    201,
+  );
+  const id = created.revision.id as number;
+  const { revision } = await expectStatus(req.get(`/api/revisions/${id}`), 200);
+  const values = (revision.values as ApiValue[]).map((v) =>
+    isFlesh(v) ? { ...asInput(v), value } : asInput(v),
+  );
+  const data = { summary: `Flesh modulus re-read: ${value} MPa`, values };
+  await expectStatus(req.put(`/api/revisions/${id}`, { data, headers }), 200);
+  await expectStatus(req.post(`/api/revisions/${id}/submit`, { data: {}, headers }), 200);
+  await editor.close();
+  const editor2 = await signedInPage(browser, 'editor2@kestrelvale.example', baseURL);
+  await expectStatus(
+    editor2.page.request.post(`/api/revisions/${id}/publish`, {
+      data: {},
+      headers: ownOrigin(editor2.page),
+    }),
+    200,
+  );
+  await editor2.close();
+  return {
+    before: {
+      revisionNumber: cultivar.revision.number as number,
+      flesh: (cultivar.values as ApiValue[]).find(isFlesh)!,
+    },
+    revision: revision as { number: number },
+  };
 }
