@@ -25,6 +25,7 @@ export {
 export {
   ASPECT_MAX,
   ASPECT_MIN,
+  CACHE_BYTES,
   CACHE_LIMIT,
   clearCondensedBodyCache,
   getCondensedBody,

@@ -25,6 +25,11 @@ export interface FemBody extends CondensedBody {
   surfaceNodes: Int32Array;
   /** mesh node index of each candidate contact node (same order as contactR / contactZ / K) */
   contactNodes: Int32Array;
+  /**
+   * Approximate memory the body holds with what the squeeze caches on it (factor, mesh,
+   * condensed stiffness and compliance, stress influence), bytes
+   */
+  bytes: number;
   /** recover() for several contact-displacement vectors, only at the DOFs `at` (unchecked) */
   recoverAt(ucs: Float64Array[], at: Int32Array): Float64Array[];
   /**
@@ -67,6 +72,9 @@ export function buildCondensedBody(key: UnitBodyKey): FemBody {
     surfaceNodes: mesh.surface,
     contactNodes,
     forceFactor: key.model === 'axisymmetric' ? 1 : 2,
+    // Factor and mesh, K and its compliance, and a stress influence of 4 values per zone element
+    // and force node (about one value per DOF and contact node on a graded mesh).
+    bytes: 8 * (sys.profile + 3 * dofs + 2 * nc * nc + dofs * nc) + 16 * mesh.quads.length,
   };
 }
 

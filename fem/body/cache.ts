@@ -11,15 +11,21 @@ export const ASPECT_MIN = 0.3;
 /** Largest allowed axial/equatorial radius ratio of the unit body. */
 export const ASPECT_MAX = 3;
 
-/** Bodies kept, least recently used dropped first (a normal body holds ≈ 1.5 MB, a fine ≈ 6 MB). */
+/** Bodies kept at most, least recently used dropped first. */
 export const CACHE_LIMIT = 32;
+/**
+ * Memory the cached bodies may hold, bytes (see FemBody.bytes; a graded normal body holds
+ * 2–10 MB, a fine one 10–40 MB): past it the least recently used are dropped, the newest kept.
+ */
+export const CACHE_BYTES = 384 * 2 ** 20;
 const cache = new Map<string, FemBody>();
+let cachedBytes = 0;
 
 /**
  * The unit body (equatorial radius 1 m, E = 1 Pa) condensed onto the axial DOFs of its candidate
  * contact nodes (surface nodes from the pole out to r = 0.6), built once per
  * (model, aspect, poisson, level, contact band, edge band) and cached in memory (up to
- * CACHE_LIMIT bodies, LRU).
+ * CACHE_LIMIT bodies and CACHE_BYTES, LRU).
  * Scale per the CondensedBody contract: axisymmetric K_real = E·R·K, plane strain K_real = E·K
  * per metre of thickness (half slice, see FemBody.forceFactor). Throws FemInputError naming the
  * field for an invalid key. The returned object is shared: do not mutate its arrays or K.
@@ -43,13 +49,19 @@ export function getCondensedBody(key: UnitBodyKey): FemBody {
   }
   const body = buildCondensedBody(valid);
   cache.set(id, body);
-  if (cache.size > CACHE_LIMIT) cache.delete(cache.keys().next().value as string);
+  cachedBytes += body.bytes;
+  while (cache.size > 1 && (cache.size > CACHE_LIMIT || cachedBytes > CACHE_BYTES)) {
+    const oldest = cache.keys().next().value as string;
+    cachedBytes -= (cache.get(oldest) as FemBody).bytes;
+    cache.delete(oldest);
+  }
   return body;
 }
 
 /** Empties the in-memory cache of condensed bodies (tests, memory pressure). */
 export function clearCondensedBodyCache(): void {
   cache.clear();
+  cachedBytes = 0;
 }
 
 function validateKey(key: UnitBodyKey): UnitBodyKey {
