@@ -5,8 +5,16 @@ import { FACING_STRAIN_LIMIT, MIN_CONTACT_NODES, type SqueezeWarning } from './w
 const pct = (x: number) => `${(100 * x).toFixed(0)} %`;
 
 /**
+ * Fraction of the edge radius past the flat beyond which the rounded edge is steep: its slope
+ * s/√(r_e² − s²) passes 4/3 there, far from the small surface slopes that linear contact
+ * theory assumes (Johnson, Contact Mechanics, 1985, ch. 3–5), and the pressure grows without
+ * settling as the mesh is refined.
+ */
+const STEEP_EDGE = 0.8;
+
+/**
  * Warnings for one state (`where`: 'at the grip', 'at the full travel'): the contact on the pad's
- * rounded edge or at its outer edge, too few points in contact, shear that could not be sampled,
+ * rounded edge or on its steep outer part, too few points in contact, shear not sampled,
  * and a facing compressed past FACING_STRAIN_LIMIT. `reach` is the pad's outer radius, m.
  */
 export function stateWarnings(
@@ -17,12 +25,14 @@ export function stateWarnings(
 ): SqueezeWarning[] {
   const out: SqueezeWarning[] = [];
   const flat = c.pad.flatRadius;
-  if (flat !== null && s.contactRadius >= reach * (1 - 1e-9)) {
+  const steep = flat === null ? Infinity : flat + STEEP_EDGE * (reach - flat);
+  if (flat !== null && s.contactRadius >= steep) {
     out.push({
       code: 'pad-edge-contact',
       message:
-        `The contact ${where} reaches the outer edge of the pad: the pressure there rises ` +
-        'sharply, and a larger pad, a larger edge radius or a softer facing would spread the load.',
+        `The contact ${where} reaches the steep outer part of the pad's rounded edge: the ` +
+        'pressure there rises sharply and depends on the mesh, and a larger pad, a larger edge ' +
+        'radius or a softer facing would spread the load.',
     });
   } else if (flat !== null && s.contactRadius > flat) {
     out.push({

@@ -27,6 +27,18 @@ describe('squeeze warnings', () => {
     expect(codes({ ...base, poisson: 0.499 })).not.toContain('near-incompressible');
   });
 
+  it('tells the steep outer part of the rounded edge from its gentle inner part', () => {
+    // 3 mm pad, 0.2 mm edge: the contact (1.49 mm) reaches past the flat (1.3 mm) by more than
+    // 80 % of the edge radius, where the edge's slope passes 4/3; a 13 mm pad with a 2 mm edge
+    // is touched only a quarter of the way onto its rounding.
+    expect(codes({ ...base, padDiameter: 0.003, edgeRadius: 0.0002 })).toContain(
+      'pad-edge-contact',
+    );
+    const wide = codes({ ...base, padDiameter: 0.013 });
+    expect(wide).toContain('edge-contact');
+    expect(wide).not.toContain('pad-edge-contact');
+  });
+
   it('gives every warning a code and a plain message', () => {
     const res = runSqueeze({ ...base, travel: 0.003, padDiameter: 0.006, edgeRadius: 0.0001 });
     expect(res.warnings.length).toBeGreaterThan(1);
