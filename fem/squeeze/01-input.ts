@@ -78,7 +78,7 @@ export interface SqueezeCase {
   /** contact radius the mesh is graded to, m; null = the Hertz estimate at the full travel */
   meshContactRadius: number | null;
   pad: PadGeometry;
-  /** the pad's elastic facing layer; null = rigid pad face */
+  /** the pad's elastic facing layer; null = rigid pad face (replaces the Winkler `facingStiffness`) */
   facing: FacingInput | null;
   lift: LiftInput | null;
 }

@@ -21,7 +21,7 @@ export interface PadSweepPoint {
   shearMargin: number | null;
   /** why there is no grip, or null */
   reason: string | null;
-  /** pad warnings, and those of the grip (or the full travel without one), with codes */
+  /** pad warnings, and those of the grip (or the full travel without one), with codes (were strings) */
   warnings: SqueezeWarning[];
 }
 

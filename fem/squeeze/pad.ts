@@ -19,6 +19,7 @@ export interface PadGeometry {
   edgeRadius: number | null;
   /** radius (m) of the flat part of the face; null for a plate */
   flatRadius: number | null;
+  /** the pad's own warnings (sharp edge), with codes; were plain strings before this edition */
   warnings: SqueezeWarning[];
 }
 

@@ -38,7 +38,10 @@ const cache = new WeakMap<FemBody, ShearField>();
  */
 const ZONE_DEPTH = 0.8;
 
-/** The cached stress influence of `body` (built on first use) from its contact compliance. */
+/**
+ * The cached stress influence of `body` (built on first use) from its contact-node compliance
+ * `contact` (createContactSystem(body.K)); it now acts on forces, not displacements.
+ */
 export function getShearField(body: FemBody, contact: ContactSystem): ShearField {
   const hit = cache.get(body);
   if (hit) return hit;
@@ -153,8 +156,9 @@ export interface ShearUnder {
 /**
  * Largest Tresca shear (σ_max − σ_min)/2 over the samples with r ≤ `radius` (the contact radius,
  * unit body), the hoop (or out-of-plane) stress being the third principal stress; `force` holds
- * the unit body's contact-node forces (real force / stiffness scale, compressive positive). No
- * peak, with the reason, when the contact reaches past the sampled zone or covers no sample.
+ * the contact-node forces of the unit body (real force / (stiffness scale · R), compressive
+ * positive; this edition takes forces where the first took displacements). No peak, with the
+ * reason, when the contact reaches past the sampled zone or covers no sample.
  */
 export function maxShearUnder(field: ShearField, force: Float64Array, radius: number): ShearUnder {
   const nf = field.nodes;
