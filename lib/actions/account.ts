@@ -18,7 +18,7 @@ export async function changePasswordAction(
 }
 
 /** End this user's sessions on every device, this one included. */
-export async function signOutEverywhereAction(_prev: ActionState): Promise<ActionState> {
+export async function signOutEverywhereAction(): Promise<ActionState> {
   return runAction(async () => {
     const actor = await requireActor('account:manage-own');
     await endAllSessions(actor.id, 'sign-out-everywhere');

@@ -16,6 +16,11 @@ import { notifyFollowers } from './follows';
  */
 const EDITABLE: RevisionStatus[] = ['draft', 'returned'];
 
+/** A row without its primary key, to insert as a new row. */
+function withoutId(row: Record<string, unknown>): Record<string, unknown> {
+  return Object.fromEntries(Object.entries(row).filter(([key]) => key !== 'id'));
+}
+
 async function loadRevision(trx: Knex.Transaction, id: number) {
   const row = await trx('property_revisions').where({ id }).first();
   if (!row) throw new NotFoundError('No such revision.');
@@ -69,7 +74,7 @@ export async function createDraft(actor: Actor, slug: string, summary?: string |
       const copied = await trx('revision_values').where({ revision_id: base }).orderBy('position');
       if (copied.length) {
         await trx('revision_values').insert(
-          copied.map(({ id: _old, ...v }) => ({ ...v, revision_id: id })),
+          copied.map((v) => ({ ...withoutId(v), revision_id: id })),
         );
       }
     }

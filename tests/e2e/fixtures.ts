@@ -11,10 +11,10 @@ export const test = base.extend<{
   shell: AppShell;
   signInAs: (role: Role) => Promise<void>;
 }>({
-  signInPage: async ({ page }, use) => use(new SignInPage(page)),
-  shell: async ({ page }, use) => use(new AppShell(page)),
-  signInAs: async ({ signInPage }, use) =>
-    use((role) => signInPage.signIn(ACCOUNTS[role], DEMO_PASSWORD)),
+  signInPage: async ({ page }, provide) => provide(new SignInPage(page)),
+  shell: async ({ page }, provide) => provide(new AppShell(page)),
+  signInAs: async ({ signInPage }, provide) =>
+    provide((role) => signInPage.signIn(ACCOUNTS[role], DEMO_PASSWORD)),
 });
 
 export { expect } from '@playwright/test';

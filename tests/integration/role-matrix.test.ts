@@ -138,7 +138,7 @@ const ACTIONS: Row[] = [
   {
     name: 'action signOutEverywhereAction',
     expect: ALL_OK(200),
-    call: async () => (await signOutEverywhereAction(initialActionState)).status,
+    call: async () => (await signOutEverywhereAction()).status,
   },
   {
     name: 'action updateUserAction',
