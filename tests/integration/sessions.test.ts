@@ -10,7 +10,6 @@ import * as me from '@/app/api/me/route';
 import * as password from '@/app/api/account/password/route';
 import * as nextauth from '@/app/api/auth/[...nextauth]/route';
 import { signOutEverywhereAction } from '@/lib/actions/account';
-import { initialActionState } from '@/lib/actions/initial-state';
 
 // No session mock here: the real next-auth JWT cookie goes through the real callbacks.
 vi.mock('next/cache', () => ({ revalidatePath: vi.fn(), revalidateTag: vi.fn() }));
