@@ -2,6 +2,7 @@ import {
   findLiftability,
   liftStateAt,
   prepareLift,
+  regradeRadius,
   type IncrementTrack,
   type LiftStage,
   type SqueezeInput,
@@ -56,6 +57,12 @@ export function gripMargin(input: SqueezeInput, hint: GripHint = {}): GripSample
   const track = [solved.get(k - 1), solved.get(k)].filter((t): t is IncrementTrack => !!t);
   const grip = findLiftability(stage, track)?.grip;
   if (!grip) return { ...none, increment: k, active: warm };
+  // As runSqueeze: a grip with too few points in contact is found again on a mesh graded to it.
+  const regrade = input.meshContactRadius === undefined ? regradeRadius(stage, grip) : null;
+  if (regrade !== null) {
+    const again = gripMargin({ ...input, meshContactRadius: regrade }, { increment: k });
+    return { ...again, active: warm };
+  }
   return {
     margin: grip.bruiseMargin,
     shearMargin: grip.shearMargin,
