@@ -1,5 +1,5 @@
 import type { Knex } from 'knex';
-import { QUANTITIES } from '../lib/properties/quantities';
+import { valueRow } from '../lib/properties/value-row';
 import { revisionValueSchema } from '../lib/validation/revisions';
 import { COMMODITIES } from './property-data/commodities';
 import { SOURCES } from './property-data/sources';
@@ -95,27 +95,7 @@ export async function seed(knex: Knex): Promise<void> {
           const sourceId = v.sourceKey ? sourceIds.get(v.sourceKey) : null;
           if (v.sourceKey && !sourceId)
             throw new Error(`seed value ${cv.slug}: unknown source ${v.sourceKey}`);
-          return {
-            revision_id: revisionId,
-            quantity: v.quantity,
-            variant: v.variant,
-            value: v.value,
-            unit: QUANTITIES[v.quantity].unit,
-            low: v.low,
-            high: v.high,
-            sd: v.sd,
-            samples: v.samples,
-            method: v.method,
-            ripeness: v.ripeness,
-            temperature: v.temperature,
-            storage: v.storage,
-            loading_rate: v.loadingRate,
-            probe: v.probe,
-            note: v.note,
-            is_typical_default: v.isTypicalDefault,
-            source_id: sourceId ?? null,
-            position,
-          };
+          return valueRow(v, revisionId, position, sourceId ?? null);
         }),
       );
       await knex('cultivars')

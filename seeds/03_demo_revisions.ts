@@ -1,5 +1,5 @@
 import type { Knex } from 'knex';
-import { QUANTITIES } from '../lib/properties/quantities';
+import { valueRow } from '../lib/properties/value-row';
 import { revisionValueSchema } from '../lib/validation/revisions';
 
 /**
@@ -80,31 +80,12 @@ async function userId(trx: Knex.Transaction, email: string): Promise<number> {
 }
 
 /** The demo value in the stored shape, checked with the same rules as an editor's form. */
-function demoValueRow(demo: DemoRevision, sourceId: number) {
+function demoValue(demo: DemoRevision) {
   const parsed = revisionValueSchema.safeParse({ ...demo.value, sourceKey: DEMO_SOURCE.key });
   if (!parsed.success) {
     throw new Error(`demo value ${demo.cultivar}: ${parsed.error.issues.map((i) => i.message)}`);
   }
-  const v = parsed.data;
-  return {
-    quantity: v.quantity,
-    variant: v.variant,
-    value: v.value,
-    unit: QUANTITIES[v.quantity].unit,
-    low: v.low,
-    high: v.high,
-    sd: v.sd,
-    samples: v.samples,
-    method: v.method,
-    ripeness: v.ripeness,
-    temperature: v.temperature,
-    storage: v.storage,
-    loading_rate: v.loadingRate,
-    probe: v.probe,
-    note: v.note,
-    is_typical_default: false,
-    source_id: sourceId,
-  };
+  return parsed.data;
 }
 
 async function insertDemo(trx: Knex.Transaction, demo: DemoRevision, sourceId: number) {
@@ -140,7 +121,7 @@ async function insertDemo(trx: Knex.Transaction, demo: DemoRevision, sourceId: n
       delete copy.id;
       return copy;
     }),
-    { ...demoValueRow(demo, sourceId), revision_id: revisionId, position: copied.length },
+    valueRow(demoValue(demo), revisionId, copied.length, sourceId),
   ]);
 }
 

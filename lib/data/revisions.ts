@@ -3,7 +3,8 @@ import type { Knex } from 'knex';
 import { db } from '@/lib/db';
 import { assertCan, type Actor } from '@/lib/auth/actor';
 import { ConflictError, ForbiddenError, NotFoundError, ValidationError } from '@/lib/errors';
-import { QUANTITIES, type RevisionStatus } from '@/lib/properties/quantities';
+import type { RevisionStatus } from '@/lib/properties/quantities';
+import { valueRow } from '@/lib/properties/value-row';
 import { parseInput } from '@/lib/validation/parse';
 import { draftUpdateSchema, reviewCommentSchema } from '@/lib/validation/revisions';
 import { recordAudit } from './audit-trail';
@@ -125,27 +126,9 @@ export async function updateDraft(actor: Actor, id: number, input: unknown) {
     await trx('revision_values').where({ revision_id: id }).delete();
     if (change.values.length) {
       await trx('revision_values').insert(
-        change.values.map((v, position) => ({
-          revision_id: id,
-          quantity: v.quantity,
-          variant: v.variant,
-          value: v.value,
-          unit: QUANTITIES[v.quantity].unit,
-          low: v.low,
-          high: v.high,
-          sd: v.sd,
-          samples: v.samples,
-          method: v.method,
-          ripeness: v.ripeness,
-          temperature: v.temperature,
-          storage: v.storage,
-          loading_rate: v.loadingRate,
-          probe: v.probe,
-          note: v.note,
-          is_typical_default: v.isTypicalDefault,
-          source_id: v.sourceKey ? sourceId.get(v.sourceKey)! : null,
-          position,
-        })),
+        change.values.map((v, position) =>
+          valueRow(v, id, position, v.sourceKey ? sourceId.get(v.sourceKey)! : null),
+        ),
       );
     }
     await recordAudit(trx, {

@@ -9,10 +9,10 @@ export function assertLengthWithin(request: Request, limit: number): void {
   if (Number.isFinite(declared) && declared > limit) throw new PayloadTooLargeError(limit);
 }
 
-/** Read the body as text, stopping (413) as soon as it passes the limit, whatever it declared. */
-export async function readText(request: Request, limit = JSON_BODY_LIMIT): Promise<string> {
+/** Read the body's bytes, stopping (413) as soon as they pass the limit, whatever it declared. */
+export async function readBytes(request: Request, limit: number): Promise<Buffer> {
   assertLengthWithin(request, limit);
-  if (!request.body) return '';
+  if (!request.body) return Buffer.alloc(0);
   const reader = request.body.getReader();
   const chunks: Uint8Array[] = [];
   let size = 0;
@@ -26,7 +26,12 @@ export async function readText(request: Request, limit = JSON_BODY_LIMIT): Promi
     }
     chunks.push(value);
   }
-  return Buffer.concat(chunks).toString('utf8');
+  return Buffer.concat(chunks);
+}
+
+/** Read the body as UTF-8 text within the limit (see readBytes). */
+export async function readText(request: Request, limit = JSON_BODY_LIMIT): Promise<string> {
+  return (await readBytes(request, limit)).toString('utf8');
 }
 
 /** Read a JSON body; malformed JSON is a 400, an oversized one a 413. The caller validates the shape. */

@@ -1,28 +1,15 @@
-import { PayloadTooLargeError, ValidationError } from '@/lib/errors';
+import { ValidationError } from '@/lib/errors';
+import { readBytes } from '@/lib/http/body';
 
 /**
  * A multipart body read with a hard limit whatever Content-Length said (a chunked upload declares
  * none), then handed to the platform's multipart parser.
  */
 export async function readUploadForm(request: Request, limit: number): Promise<FormData> {
-  const chunks: Uint8Array[] = [];
-  let size = 0;
-  if (request.body) {
-    const reader = request.body.getReader();
-    for (;;) {
-      const { done, value } = await reader.read();
-      if (done) break;
-      size += value.byteLength;
-      if (size > limit) {
-        await reader.cancel();
-        throw new PayloadTooLargeError(limit);
-      }
-      chunks.push(value);
-    }
-  }
+  const body = await readBytes(request, limit);
   const type = request.headers.get('content-type') ?? '';
   try {
-    return await new Response(Buffer.concat(chunks), {
+    return await new Response(new Uint8Array(body), {
       headers: { 'content-type': type },
     }).formData();
   } catch {

@@ -1,5 +1,4 @@
-import { PayloadTooLargeError } from '@/lib/errors';
-import { assertLengthWithin } from '@/lib/http/body';
+import { readBytes } from '@/lib/http/body';
 import { formObject } from '@/lib/validation/form';
 import { fileError, PhotoTooLargeError } from './errors';
 import { fileNameProblem } from './fields';
@@ -9,26 +8,6 @@ export interface Upload {
   bytes: Buffer;
   /** The text fields (caption, credit, anything else sent), for the caller's schema. */
   fields: Record<string, string>;
-}
-
-/** The body's bytes, stopping with a 413 as soon as they pass the limit, whatever was declared. */
-async function readBytes(request: Request, limit: number): Promise<Buffer> {
-  assertLengthWithin(request, limit);
-  if (!request.body) return Buffer.alloc(0);
-  const reader = request.body.getReader();
-  const chunks: Uint8Array[] = [];
-  let size = 0;
-  for (;;) {
-    const { done, value } = await reader.read();
-    if (done) break;
-    size += value.byteLength;
-    if (size > limit) {
-      await reader.cancel();
-      throw new PayloadTooLargeError(limit);
-    }
-    chunks.push(value);
-  }
-  return Buffer.concat(chunks);
 }
 
 async function parseForm(body: Buffer, contentType: string): Promise<FormData> {
