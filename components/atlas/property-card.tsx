@@ -2,6 +2,7 @@ import Link from 'next/link';
 import type { Actor } from '@/lib/auth/actor';
 import { cardRows, type CardRow } from '@/lib/atlas/card-rows';
 import { getCultivar } from '@/lib/data/cultivars';
+import { getUnitSystem } from '@/lib/data/users';
 
 function Citation({ row, citedKeys }: { row: CardRow; citedKeys: ReadonlySet<string> }) {
   if (!row.citation) return null;
@@ -29,7 +30,7 @@ export async function PropertyCard({
   citedKeys?: ReadonlySet<string>;
 }) {
   const record = await getCultivar(actor, cultivar);
-  const rows = cardRows(record);
+  const rows = cardRows(record, await getUnitSystem(actor));
   const published = record.published;
   return (
     <aside

@@ -1,6 +1,7 @@
 import type { SourceRef } from '@/lib/data/property-rows';
-import { formatValue, type DiffRow, type DiffValue } from '@/lib/properties/diff';
+import { type DiffRow, type DiffValue } from '@/lib/properties/diff';
 import { shortCitation } from '@/lib/properties/table-rows';
+import { ValueText } from '@/components/units/value-text';
 
 const ROW_TONE: Record<DiffRow['change'], string> = {
   added: 'bg-leaf-50',
@@ -36,7 +37,11 @@ function Values({
   return (
     <ul className="space-y-1">
       {values.map((v, i) => {
-        const text = <span className="num">{formatValue(v)}</span>;
+        const text = (
+          <span className="num">
+            <ValueText value={v} />
+          </span>
+        );
         return (
           <li key={i}>
             {mark === 'old' ? (

@@ -1,4 +1,5 @@
 import type { TableValue } from '@/lib/properties/table-rows';
+import { ValueText } from '@/components/units/value-text';
 
 /** A full stop after a text, unless it already ends in one (or in ? or !). */
 const stop = (text: string) => (/[.!?]$/.test(text.trim()) ? '' : '.');
@@ -10,7 +11,11 @@ export function SourceSummary({ label, value }: { label: string; value: TableVal
     <>
       <span className="block font-medium text-stone-900">
         {label}
-        {value.variant ? ` (${value.variant})` : ''}: <span className="num">{value.text}</span>.
+        {value.variant ? ` (${value.variant})` : ''}:{' '}
+        <span className="num">
+          <ValueText value={value} />
+        </span>
+        .
       </span>
       {value.isTypicalDefault ? (
         <span className="mt-1 block text-clay-700">

@@ -3,6 +3,7 @@
 import { useId, useLayoutEffect, useRef, useState, type CSSProperties } from 'react';
 import type { TableValue } from '@/lib/properties/table-rows';
 import { SourceSummary } from './source-summary';
+import { ValueText } from '@/components/units/value-text';
 
 const GAP = 2;
 const WIDTH = 288;
@@ -56,7 +57,7 @@ export function ValueButton({ label, value }: { label: string; value: TableValue
         }}
         className="num rounded px-1 text-left text-sm whitespace-nowrap text-stone-900 underline decoration-stone-300 decoration-dotted underline-offset-4 hover:bg-leaf-50 focus:outline-none focus-visible:ring-2 focus-visible:ring-leaf-600"
       >
-        {value.text}
+        <ValueText value={value} />
       </button>
       <span
         role="tooltip"

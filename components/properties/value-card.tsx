@@ -1,7 +1,7 @@
 import type { RevisionValue } from '@/lib/data/property-rows';
-import { formatValue } from '@/lib/properties/diff';
 import { conditionsOf } from '@/lib/properties/table-rows';
 import { SourceCitation } from './source-citation';
+import { ValueText } from '@/components/units/value-text';
 
 /** One published value: the number with unit and spread, its conditions and its source. */
 export function ValueCard({ value }: { value: RevisionValue }) {
@@ -9,7 +9,9 @@ export function ValueCard({ value }: { value: RevisionValue }) {
   return (
     <li className="rounded-md border border-stone-200 bg-white p-3" data-testid="value-card">
       <p className="flex flex-wrap items-baseline gap-x-2 gap-y-1">
-        <span className="num text-base font-semibold text-stone-900">{formatValue(value)}</span>
+        <span className="num text-base font-semibold text-stone-900">
+          <ValueText value={value} />
+        </span>
         {value.variant ? (
           <span className="rounded bg-stone-100 px-1.5 text-xs text-stone-700">
             {value.variant}

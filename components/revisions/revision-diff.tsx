@@ -1,4 +1,5 @@
-import { formatValue, type DiffRow, type DiffValue } from '@/lib/properties/diff';
+import { type DiffRow, type DiffValue } from '@/lib/properties/diff';
+import { ValueText } from '@/components/units/value-text';
 
 const CHANGE: Record<DiffRow['change'], { text: string; tone: string }> = {
   added: { text: 'Added', tone: 'bg-leaf-50 text-leaf-900' },
@@ -15,7 +16,7 @@ function Values({ values }: { values: DiffValue[] }) {
     <>
       {values.map((v, i) => (
         <span key={i} className="num block">
-          {formatValue(v)}
+          <ValueText value={v} />
           {v.sourceKey ? <span className="text-xs text-stone-500"> [{v.sourceKey}]</span> : null}
         </span>
       ))}

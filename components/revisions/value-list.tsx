@@ -1,7 +1,7 @@
 import type { RevisionValue } from '@/lib/data/property-rows';
-import { formatValue } from '@/lib/properties/diff';
 import { QUANTITIES } from '@/lib/properties/quantities';
 import { citation } from './format';
+import { ValueText } from '@/components/units/value-text';
 
 const CONDITIONS: [keyof RevisionValue, string][] = [
   ['method', 'Method'],
@@ -26,7 +26,7 @@ function ValueItem({ v }: { v: RevisionValue }) {
           {v.variant ? ` (${v.variant})` : ''}
         </span>
         <span className="num">
-          {formatValue(v)}
+          <ValueText value={v} />
           {v.samples !== null ? `, n = ${v.samples}` : ''}
         </span>
       </div>

@@ -1,7 +1,8 @@
 import type { CultivarRecord } from '@/lib/data/cultivars';
-import { formatValue } from '@/lib/properties/diff';
 import { QUANTITIES, type Quantity } from '@/lib/properties/quantities';
 import { shortCitation } from './citations';
+import { formatValueIn } from '@/lib/properties/format-units';
+import type { UnitSystem } from '@/lib/units';
 
 /** The quantities a handling reader looks for first; a missing one is said to be missing. */
 export const KEY_QUANTITIES: Quantity[] = [
@@ -30,7 +31,7 @@ function conditionsOf(v: CultivarRecord['values'][number]): string | null {
 }
 
 /** Every published value in catalogue order, then each key quantity that has none. */
-export function cardRows(record: CultivarRecord): CardRow[] {
+export function cardRows(record: CultivarRecord, system: UnitSystem = 'si'): CardRow[] {
   const order = Object.keys(QUANTITIES);
   const values = [...record.values].sort(
     (a, b) => order.indexOf(a.quantity) - order.indexOf(b.quantity),
@@ -38,7 +39,7 @@ export function cardRows(record: CultivarRecord): CardRow[] {
   const rows: CardRow[] = values.map((v) => ({
     quantity: v.quantity,
     label: QUANTITIES[v.quantity].label + (v.variant ? ` (${v.variant})` : ''),
-    value: formatValue(v),
+    value: formatValueIn(v, system),
     conditions: conditionsOf(v),
     citation: v.source ? shortCitation(v.source) : v.isTypicalDefault ? 'typical default' : null,
     sourceKey: v.source?.key ?? null,

@@ -3,6 +3,7 @@ import type { Actor } from '@/lib/auth/actor';
 import { getCultivar, type CommodityRef } from '@/lib/data/cultivars';
 import type { SourceRef } from '@/lib/data/property-rows';
 import type { Article } from './articles';
+import { getUnitSystem } from '@/lib/data/users';
 import { cardRows, type CardRow } from './card-rows';
 import { getAtlasArticle } from './entries';
 import { getSourcesByKeys } from './sources';
@@ -22,11 +23,13 @@ export async function getHandlingSheet(actor: Actor, slug: string): Promise<Hand
   const records = await Promise.all(
     found.article.frontmatter.keyCultivars.map((c) => getCultivar(actor, c)),
   );
+  // Values on the sheet (and its PDF) in the reader's own units.
+  const system = await getUnitSystem(actor);
   const cultivars = records.map((r) => ({
     slug: r.slug,
     name: r.name,
     revision: r.published?.number ?? null,
-    rows: cardRows(r),
+    rows: cardRows(r, system),
   }));
   const valueKeys = cultivars.flatMap((c) =>
     c.rows.flatMap((r) => (r.sourceKey ? [r.sourceKey] : [])),

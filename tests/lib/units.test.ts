@@ -44,3 +44,22 @@ describe('display units', () => {
     expect(formatMeasure(0.35, '–', 'si')).toBe('0.35');
   });
 });
+
+describe('values with their spread in the reader units', () => {
+  it('converts the value and both ends of the range, and a standard deviation', async () => {
+    const { formatValueIn } = await import('@/lib/properties/format-units');
+    // 2.52 MPa = 365.5 psi; 2.36 → 342.3; 3.28 → 475.7 (NIST SP 811 factor 6.894757e-3 MPa/psi).
+    expect(formatValueIn({ value: 2.52, unit: 'MPa', low: 2.36, high: 3.28, sd: null }, 'us')).toBe(
+      '365.5 psi (342.3–475.7)',
+    );
+    expect(formatValueIn({ value: 80, unit: 'mm', low: null, high: null, sd: 5 }, 'us')).toBe(
+      '3.15 in ± 0.1969',
+    );
+    expect(formatValueIn({ value: 0.35, unit: '–', low: null, high: null, sd: null }, 'us')).toBe(
+      '0.35',
+    );
+    expect(formatValueIn({ value: 2.52, unit: 'MPa', low: 2.36, high: 3.28, sd: null }, 'si')).toBe(
+      '2.52 MPa (2.36–3.28)',
+    );
+  });
+});
