@@ -44,7 +44,10 @@ test('stack check: deepest safe fill and a chart of pressure with depth', async 
   await expect(page.getByTestId('deepest-safe')).toContainText('mm');
   await expect(page.getByTestId('stack-chart')).toBeVisible();
   await page.setViewportSize({ width: 390, height: 844 });
-  expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
+  // Charts shrink on the next resize-observer tick: poll until the layout settles.
+  await expect
+    .poll(() => page.evaluate(() => document.documentElement.scrollWidth))
+    .toBeLessThanOrEqual(390);
   await page.screenshot({ path: 'tests/artifacts/check-stack-phone.png', fullPage: true });
 });
 

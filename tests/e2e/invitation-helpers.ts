@@ -18,10 +18,16 @@ export async function latestLinkTo(page: Page, email: string): Promise<string> {
   return link!;
 }
 
-/** The page is no wider than the viewport: nothing sticks out sideways on a phone. */
+/**
+ * The page is no wider than the viewport: nothing sticks out sideways on a phone. Polled, since
+ * charts resize on the next resize-observer tick after the viewport changes.
+ */
 export async function expectNoSidewaysScroll(page: Page, width = 390) {
-  const scrollWidth = await page.evaluate(() => document.documentElement.scrollWidth);
-  expect(scrollWidth, 'document scroll width').toBeLessThanOrEqual(width);
+  await expect
+    .poll(() => page.evaluate(() => document.documentElement.scrollWidth), {
+      message: 'document scroll width',
+    })
+    .toBeLessThanOrEqual(width);
 }
 
 /** The element is shown and lies wholly inside the viewport's width. */
