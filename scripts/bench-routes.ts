@@ -12,39 +12,43 @@ import autocannon from 'autocannon';
 
 const PORT = Number(process.env.BENCH_PORT ?? 3390);
 const ORIGIN = `http://127.0.0.1:${PORT}`;
-const ROUTES: Record<string, unknown> = {
-  '/api/checks/drop': {
-    modulusMpa: 3,
-    poisson: 0.35,
-    diameterMm: 80,
-    massG: 200,
-    heightMm: 150,
-    surface: 'steel',
-  },
-  '/api/checks/stack': {
-    modulusMpa: 3,
-    poisson: 0.35,
-    diameterMm: 80,
-    massG: 200,
-    staticThresholdKpa: 100,
-    binLengthMm: 1200,
-    binWidthMm: 1000,
-    fillDepthMm: 600,
-  },
-  '/api/checks/squeeze': {
-    modulusMpa: 3,
-    poisson: 0.35,
-    diameterMm: 80,
-    massG: 200,
-    staticThresholdKpa: 100,
-    padDiameterMm: 20,
-    padEdgeMm: 2,
-    friction: 0.5,
-    safetyFactor: 2,
-    accelerationMs2: 2,
-    maxTravelMm: 2,
-  },
+const SQUEEZE = {
+  modulusMpa: 3,
+  poisson: 0.35,
+  diameterMm: 80,
+  massG: 200,
+  staticThresholdKpa: 100,
+  padDiameterMm: 20,
+  padEdgeMm: 2,
+  friction: 0.5,
+  safetyFactor: 2,
+  accelerationMs2: 2,
+  maxTravelMm: 2,
 };
+/** [label, route, body]: the squeeze alone (grip point, slip map) and with its 12-pad sweep. */
+const CASES: [string, string, unknown][] = [
+  [
+    'drop',
+    '/api/checks/drop',
+    { modulusMpa: 3, poisson: 0.35, diameterMm: 80, massG: 200, heightMm: 150, surface: 'steel' },
+  ],
+  [
+    'stack',
+    '/api/checks/stack',
+    {
+      modulusMpa: 3,
+      poisson: 0.35,
+      diameterMm: 80,
+      massG: 200,
+      staticThresholdKpa: 100,
+      binLengthMm: 1200,
+      binWidthMm: 1000,
+      fillDepthMm: 600,
+    },
+  ],
+  ['squeeze', '/api/checks/squeeze', { ...SQUEEZE, sweep: false }],
+  ['squeeze + pad sweep', '/api/checks/squeeze', SQUEEZE],
+];
 
 async function waitFor(url: string, ms = 90_000) {
   const until = Date.now() + ms;
@@ -119,7 +123,7 @@ try {
   console.log(
     'route                   | 200 sequential p50 / p95 | 20 concurrent p50 / p95 | errors | page load under load',
   );
-  for (const [route, body] of Object.entries(ROUTES)) {
+  for (const [label, route, body] of CASES) {
     const probe = await fetch(ORIGIN + route, {
       method: 'POST',
       headers: { 'content-type': 'application/json', cookie, origin: ORIGIN },
@@ -130,7 +134,7 @@ try {
     const par = await load(route, body, cookie, 20, 400);
     const page = await pageWhileLoaded(route, body, cookie);
     const row = [
-      route.padEnd(23),
+      label.padEnd(23),
       `${seq.latency.p50} / ${seq.latency.p97_5}`.padStart(24),
       `${par.latency.p50} / ${par.latency.p97_5}`.padStart(23),
       String(seq.non2xx + par.non2xx + seq.errors + par.errors).padStart(6),
