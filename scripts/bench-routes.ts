@@ -121,7 +121,7 @@ try {
   const cookie = await signIn();
   console.log('route latency (ms), built app on loopback, engineer signed in');
   console.log(
-    'route                   | 200 sequential p50 / p95 | 20 concurrent p50 / p95 | errors | page load under load',
+    'check                   | 200 sequential p50 / p95 | 20 concurrent p50 / p95 | errors | page load under load',
   );
   for (const [label, route, body] of CASES) {
     const probe = await fetch(ORIGIN + route, {
