@@ -3,23 +3,26 @@
 import { useState } from 'react';
 import type { DropCheckResult } from '@/lib/checks/drop';
 import { DROP_SURFACE_KEYS, DROP_SURFACES, type DropSurface } from '@/lib/checks/surfaces';
-import { CultivarSelect, MeasureField, publishedHint, type CultivarOption } from './check-fields';
+import { CultivarSelect, type CultivarOption } from './check-fields';
+import {
+  CheckFormError,
+  FRUIT_FIELDS,
+  FruitFieldset,
+  MeasureFields,
+  type FieldSpec,
+} from './measure-fields';
 import { DropCharts } from './drop-charts';
 import { MarginPanel } from './margin-panel';
 import { SaveAssessment } from './save-assessment';
 import { CheckWarnings, UsedValues } from './used-values';
-import { numberOrUndefined, useCheck } from './use-check';
+import { siFields, useCheck } from './use-check';
 import { initialText } from './initial-text';
-import { FIELD_UNITS } from './field-units';
 import { useUnits } from '@/components/units/units-provider';
 
-const FRUIT_FIELDS = [
-  ['modulusMpa', "Young's modulus", 'MPa'],
-  ['poisson', "Poisson's ratio", '–'],
-  ['diameterMm', 'Diameter', 'mm'],
-  ['massG', 'Mass', 'g'],
-  ['staticThresholdKpa', 'Static bruise threshold', 'kPa'],
-] as const;
+const PAD_FIELDS: readonly FieldSpec[] = [
+  ['padModulusMpa', 'Padding modulus'],
+  ['padThicknessMm', 'Padding thickness'],
+];
 
 export function DropCheck({
   cultivars,
@@ -42,15 +45,17 @@ export function DropCheck({
     ),
   );
   const set = (key: string) => (value: string) => setText((t) => ({ ...t, [key]: value }));
-  const body: Record<string, unknown> = { surface, ...(cultivar && { cultivar }) };
-  for (const [key, value] of Object.entries(text)) {
-    if (!key.startsWith('pad') || surface === 'foam')
-      body[key] = numberOrUndefined(value, (v) => units.fromDisplay(v, FIELD_UNITS[key] ?? '–'));
-  }
+  const body: Record<string, unknown> = {
+    surface,
+    ...(cultivar && { cultivar }),
+    ...siFields(text, units.fromDisplay, (key) => !key.startsWith('pad') || surface === 'foam'),
+  };
   const { result, pending, message, fieldErrors } = useCheck<DropCheckResult>(
     '/api/checks/drop',
     body,
   );
+  const fields = { text, set, fieldErrors };
+  const option = cultivars.find((o) => o.slug === cultivar);
   const used = result?.inputs_used;
   return (
     <div className="grid gap-6 lg:grid-cols-[minmax(0,20rem)_minmax(0,1fr)]">
@@ -61,13 +66,7 @@ export function DropCheck({
           onChange={setCultivar}
           errors={fieldErrors.cultivar}
         />
-        <MeasureField
-          label="Drop height"
-          unit="mm"
-          value={text.heightMm ?? ''}
-          onChange={set('heightMm')}
-          errors={fieldErrors.heightMm}
-        />
+        <MeasureFields fields={[['heightMm', 'Drop height']]} state={fields} />
         <div className="space-y-1">
           <label htmlFor="drop-surface" className="block text-sm font-medium">
             Surface
@@ -86,53 +85,9 @@ export function DropCheck({
           </select>
           <p className="text-xs text-stone-500">{DROP_SURFACES[surface].basis}</p>
         </div>
-        {surface === 'foam' ? (
-          <>
-            <MeasureField
-              label="Padding modulus"
-              unit="MPa"
-              value={text.padModulusMpa ?? ''}
-              onChange={set('padModulusMpa')}
-              errors={fieldErrors.padModulusMpa}
-            />
-            <MeasureField
-              label="Padding thickness"
-              unit="mm"
-              value={text.padThicknessMm ?? ''}
-              onChange={set('padThicknessMm')}
-              errors={fieldErrors.padThicknessMm}
-            />
-          </>
-        ) : null}
-        <fieldset className="space-y-3 rounded-md border border-stone-200 p-3">
-          <legend className="px-1 text-xs font-medium uppercase tracking-wide text-stone-600">
-            Fruit {cultivar ? '(leave empty to use the published value)' : ''}
-          </legend>
-          {FRUIT_FIELDS.map(([key, label, unit]) => (
-            <MeasureField
-              key={key}
-              label={label}
-              unit={unit}
-              value={text[key] ?? ''}
-              onChange={set(key)}
-              errors={fieldErrors[key]}
-              placeholder={publishedHint(
-                cultivars.find((o) => o.slug === cultivar),
-                key,
-                (v) => units.toDisplay(v, FIELD_UNITS[key] ?? '–'),
-              )}
-            />
-          ))}
-        </fieldset>
-        {message ? (
-          <p
-            className="rounded-md bg-red-50 px-3 py-2 text-sm text-red-800"
-            data-testid="form-error"
-            aria-live="polite"
-          >
-            {message}
-          </p>
-        ) : null}
+        {surface === 'foam' ? <MeasureFields fields={PAD_FIELDS} state={fields} /> : null}
+        <FruitFieldset fields={FRUIT_FIELDS} state={fields} option={option} />
+        <CheckFormError message={message} />
       </form>
       <div className="min-w-0 space-y-5">
         <MarginPanel

@@ -5,7 +5,6 @@ import type { FacingPreset } from '@/lib/checks/facings';
 import type { SqueezeCheckResult } from '@/lib/checks/squeeze';
 import { useUnits } from '@/components/units/units-provider';
 import type { CultivarOption } from './check-fields';
-import { FIELD_UNITS } from './field-units';
 import { initialText } from './initial-text';
 import { MarginPanel } from './margin-panel';
 import { SaveAssessment } from './save-assessment';
@@ -13,7 +12,7 @@ import { SlipMap } from './slip-map';
 import { SqueezeCharts } from './squeeze-charts';
 import { SqueezeForm } from './squeeze-form';
 import { SqueezeProbability } from './squeeze-probability';
-import { numberOrUndefined, useCheck } from './use-check';
+import { siFields, useCheck } from './use-check';
 import { CheckWarnings, UsedValues } from './used-values';
 
 export function SqueezeCheck({
@@ -39,11 +38,11 @@ export function SqueezeCheck({
     ),
   );
   const set = (key: string) => (value: string) => setText((t) => ({ ...t, [key]: value }));
-  const body: Record<string, unknown> = { facing, ...(cultivar && { cultivar }) };
-  for (const [key, value] of Object.entries(text)) {
-    if (!key.startsWith('facing') || facing === 'custom')
-      body[key] = numberOrUndefined(value, (v) => units.fromDisplay(v, FIELD_UNITS[key] ?? '–'));
-  }
+  const body: Record<string, unknown> = {
+    facing,
+    ...(cultivar && { cultivar }),
+    ...siFields(text, units.fromDisplay, (key) => !key.startsWith('facing') || facing === 'custom'),
+  };
   const { result, pending, message, fieldErrors } = useCheck<SqueezeCheckResult>(
     '/api/checks/squeeze',
     body,

@@ -1,11 +1,10 @@
 'use client';
 
 import { FACING_KEYS, FACING_PRESETS, type FacingPreset } from '@/lib/checks/facings';
-import { CultivarSelect, MeasureField, publishedHint, type CultivarOption } from './check-fields';
-import { FIELD_UNITS } from './field-units';
-import { useUnits } from '@/components/units/units-provider';
+import { CultivarSelect, type CultivarOption } from './check-fields';
+import { CheckFormError, FruitFieldset, MeasureFields, type FieldSpec } from './measure-fields';
 
-const FRUIT = [
+const FRUIT: readonly FieldSpec[] = [
   ['modulusMpa', "Young's modulus"],
   ['poisson', "Poisson's ratio"],
   ['diameterMm', 'Diameter (equatorial)'],
@@ -14,14 +13,19 @@ const FRUIT = [
   ['densityKgM3', 'Density'],
   ['staticThresholdKpa', 'Static bruise threshold'],
   ['friction', 'Friction coefficient'],
-] as const;
-const GRIP = [
-  ['padDiameterMm', 'Pad diameter', ''],
-  ['padEdgeMm', 'Pad edge radius', ''],
+];
+const GRIP: readonly FieldSpec[] = [
+  ['padDiameterMm', 'Pad diameter'],
+  ['padEdgeMm', 'Pad edge radius'],
   ['safetyFactor', 'Safety factor on weight', 'our default 2'],
   ['accelerationMs2', 'Peak acceleration of the move', 'upward, beyond gravity'],
   ['maxTravelMm', 'Maximum travel per pad', 'at most 15 % of the axial radius'],
-] as const;
+];
+const FACING: readonly FieldSpec[] = [
+  ['facingModulusMpa', 'Facing modulus'],
+  ['facingThicknessMm', 'Facing thickness'],
+  ['facingPoisson', "Facing Poisson's ratio", 'empty: 0.45'],
+];
 
 export interface SqueezeFormProps {
   cultivars: CultivarOption[];
@@ -37,20 +41,8 @@ export interface SqueezeFormProps {
 
 /** The squeeze check's inputs: fruit (or a cultivar's published values), pads and the move. */
 export function SqueezeForm(p: SqueezeFormProps) {
-  const units = useUnits();
   const option = p.cultivars.find((o) => o.slug === p.cultivar);
-  const field = (key: string, label: string, hint?: string) => (
-    <MeasureField
-      key={key}
-      label={label}
-      unit={FIELD_UNITS[key] ?? '–'}
-      hint={hint || undefined}
-      value={p.text[key] ?? ''}
-      onChange={p.set(key)}
-      errors={p.fieldErrors[key]}
-      placeholder={publishedHint(option, key, (v) => units.toDisplay(v, FIELD_UNITS[key] ?? '–'))}
-    />
-  );
+  const state = { text: p.text, set: p.set, fieldErrors: p.fieldErrors };
   return (
     <form className="space-y-3" onSubmit={(e) => e.preventDefault()} aria-label="Squeeze inputs">
       <CultivarSelect
@@ -63,7 +55,7 @@ export function SqueezeForm(p: SqueezeFormProps) {
         <legend className="px-1 text-xs font-medium uppercase tracking-wide text-stone-600">
           Grip
         </legend>
-        {GRIP.map(([key, label, hint]) => field(key, label, hint))}
+        <MeasureFields fields={GRIP} state={state} />
         <div className="space-y-1">
           <label htmlFor="squeeze-facing" className="block text-sm font-medium">
             Pad facing
@@ -85,29 +77,10 @@ export function SqueezeForm(p: SqueezeFormProps) {
             {p.fieldErrors.facing?.join(' ')}
           </p>
         </div>
-        {p.facing === 'custom' ? (
-          <>
-            {field('facingModulusMpa', 'Facing modulus')}
-            {field('facingThicknessMm', 'Facing thickness')}
-            {field('facingPoisson', "Facing Poisson's ratio", 'empty: 0.45')}
-          </>
-        ) : null}
+        {p.facing === 'custom' ? <MeasureFields fields={FACING} state={state} /> : null}
       </fieldset>
-      <fieldset className="space-y-3 rounded-md border border-stone-200 p-3">
-        <legend className="px-1 text-xs font-medium uppercase tracking-wide text-stone-600">
-          Fruit {p.cultivar ? '(leave empty to use the published value)' : ''}
-        </legend>
-        {FRUIT.map(([key, label]) => field(key, label))}
-      </fieldset>
-      {p.message ? (
-        <p
-          className="rounded-md bg-red-50 px-3 py-2 text-sm text-red-800"
-          data-testid="form-error"
-          aria-live="polite"
-        >
-          {p.message}
-        </p>
-      ) : null}
+      <FruitFieldset fields={FRUIT} state={state} option={option} />
+      <CheckFormError message={p.message} />
     </form>
   );
 }

@@ -2,36 +2,34 @@
 
 import { useState } from 'react';
 import type { StackCheckResult } from '@/lib/checks/stack';
-import { CultivarSelect, MeasureField, publishedHint, type CultivarOption } from './check-fields';
+import { CultivarSelect, type CultivarOption } from './check-fields';
+import {
+  CheckFormError,
+  FRUIT_FIELDS,
+  FruitFieldset,
+  MeasureFields,
+  type FieldSpec,
+} from './measure-fields';
 import { MarginPanel } from './margin-panel';
 import { SaveAssessment } from './save-assessment';
 import { StackCharts } from './stack-charts';
 import { CheckWarnings, UsedValues } from './used-values';
-import { numberOrUndefined, useCheck } from './use-check';
+import { siFields, useCheck } from './use-check';
 import { initialText } from './initial-text';
-import { FIELD_UNITS } from './field-units';
 import { useUnits } from '@/components/units/units-provider';
 
-const BIN_FIELDS = [
-  ['binLengthMm', 'Bin inside length', 'mm', ''],
-  ['binWidthMm', 'Bin inside width', 'mm', ''],
-  ['fillDepthMm', 'Fill depth', 'mm', ''],
-  ['bulkDensityKgM3', 'Bulk density', 'kg/m³', 'empty: published, else 60 % of the fruit density'],
+const BIN_FIELDS: readonly FieldSpec[] = [
+  ['binLengthMm', 'Bin inside length'],
+  ['binWidthMm', 'Bin inside width'],
+  ['fillDepthMm', 'Fill depth'],
+  ['bulkDensityKgM3', 'Bulk density', 'empty: published, else 60 % of the fruit density'],
   [
     'wallFriction',
     'Wall friction coefficient',
-    '–',
     'empty: published (plywood or wood), else 0.4 typical',
   ],
-  ['lateralRatio', 'Lateral pressure ratio K', '–', 'empty: published, else 0.4 typical'],
-] as const;
-const FRUIT_FIELDS = [
-  ['modulusMpa', "Young's modulus", 'MPa'],
-  ['poisson', "Poisson's ratio", '–'],
-  ['diameterMm', 'Diameter', 'mm'],
-  ['massG', 'Mass', 'g'],
-  ['staticThresholdKpa', 'Static bruise threshold', 'kPa'],
-] as const;
+  ['lateralRatio', 'Lateral pressure ratio K', 'empty: published, else 0.4 typical'],
+];
 
 export function StackCheck({
   cultivars,
@@ -53,13 +51,16 @@ export function StackCheck({
     ),
   );
   const set = (key: string) => (value: string) => setText((t) => ({ ...t, [key]: value }));
-  const body: Record<string, unknown> = { ...(cultivar && { cultivar }) };
-  for (const [key, value] of Object.entries(text))
-    body[key] = numberOrUndefined(value, (v) => units.fromDisplay(v, FIELD_UNITS[key] ?? '–'));
+  const body: Record<string, unknown> = {
+    ...(cultivar && { cultivar }),
+    ...siFields(text, units.fromDisplay),
+  };
   const { result, pending, message, fieldErrors } = useCheck<StackCheckResult>(
     '/api/checks/stack',
     body,
   );
+  const fields = { text, set, fieldErrors };
+  const option = cultivars.find((o) => o.slug === cultivar);
   const used = result?.inputs_used;
   return (
     <div className="grid gap-6 lg:grid-cols-[minmax(0,20rem)_minmax(0,1fr)]">
@@ -70,46 +71,9 @@ export function StackCheck({
           onChange={setCultivar}
           errors={fieldErrors.cultivar}
         />
-        {BIN_FIELDS.map(([key, label, unit, hint]) => (
-          <MeasureField
-            key={key}
-            label={label}
-            unit={unit}
-            hint={hint}
-            value={text[key] ?? ''}
-            onChange={set(key)}
-            errors={fieldErrors[key]}
-          />
-        ))}
-        <fieldset className="space-y-3 rounded-md border border-stone-200 p-3">
-          <legend className="px-1 text-xs font-medium uppercase tracking-wide text-stone-600">
-            Fruit {cultivar ? '(leave empty to use the published value)' : ''}
-          </legend>
-          {FRUIT_FIELDS.map(([key, label, unit]) => (
-            <MeasureField
-              key={key}
-              label={label}
-              unit={unit}
-              value={text[key] ?? ''}
-              onChange={set(key)}
-              errors={fieldErrors[key]}
-              placeholder={publishedHint(
-                cultivars.find((o) => o.slug === cultivar),
-                key,
-                (v) => units.toDisplay(v, FIELD_UNITS[key] ?? '–'),
-              )}
-            />
-          ))}
-        </fieldset>
-        {message ? (
-          <p
-            className="rounded-md bg-red-50 px-3 py-2 text-sm text-red-800"
-            data-testid="form-error"
-            aria-live="polite"
-          >
-            {message}
-          </p>
-        ) : null}
+        <MeasureFields fields={BIN_FIELDS} state={fields} />
+        <FruitFieldset fields={FRUIT_FIELDS} state={fields} option={option} />
+        <CheckFormError message={message} />
       </form>
       <div className="min-w-0 space-y-5">
         <MarginPanel

@@ -1,6 +1,7 @@
 'use client';
 
 import { useEffect, useRef, useState } from 'react';
+import { FIELD_UNITS } from './field-units';
 
 export interface CheckState<R> {
   result: R | null;
@@ -76,4 +77,18 @@ export function numberOrUndefined(
   if (trimmed === '') return undefined;
   const n = Number(trimmed);
   return Number.isFinite(n) ? toSI(n) : trimmed;
+}
+
+/** The form's figures (text in the reader's units) as the SI numbers the route takes. */
+export function siFields(
+  text: Record<string, string>,
+  fromDisplay: (value: number, unit: string) => number,
+  keep: (key: string) => boolean = () => true,
+): Record<string, unknown> {
+  const out: Record<string, unknown> = {};
+  for (const [key, value] of Object.entries(text)) {
+    if (keep(key))
+      out[key] = numberOrUndefined(value, (v) => fromDisplay(v, FIELD_UNITS[key] ?? '–'));
+  }
+  return out;
 }

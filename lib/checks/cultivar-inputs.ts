@@ -53,6 +53,29 @@ function citation(v: RevisionValue): string | null {
   return `${who}${v.source.year ? ` ${v.source.year}` : ''}`;
 }
 
+/** Which variants a check takes, best first: the whole fruit's modulus, the equatorial size. */
+export const PREFERRED_VARIANTS: Partial<Record<Quantity, string[]>> = {
+  youngs_modulus: ['apparent', 'flesh'],
+  diameter: ['', 'equatorial', 'axial'],
+};
+
+/** The first value of a quantity among `values`, of the given variants in preference order. */
+export function pickValue(
+  values: RevisionValue[],
+  quantity: Quantity,
+  variants = PREFERRED_VARIANTS[quantity],
+): RevisionValue | undefined {
+  const candidates = values.filter((v) => v.quantity === quantity);
+  return variants
+    ? variants.map((want) => candidates.find((v) => v.variant === want)).find(Boolean)
+    : candidates[0];
+}
+
+/** The form of a value a check used, with where it came from. */
+export function enteredValue(value: number, unit: string): UsedValue {
+  return { value, unit, origin: 'entered', source: null, low: null, high: null, sd: null };
+}
+
 /** The first published value of a quantity (optionally of some variants, in preference order). */
 export function publishedValue(
   pinned: PinnedCultivar | null,
@@ -60,10 +83,7 @@ export function publishedValue(
   variants?: string[],
 ): UsedValue | null {
   if (!pinned) return null;
-  const candidates = pinned.values.filter((v) => v.quantity === quantity);
-  const pick = variants
-    ? variants.map((want) => candidates.find((v) => v.variant === want)).find(Boolean)
-    : candidates[0];
+  const pick = pickValue(pinned.values, quantity, variants);
   if (!pick) return null;
   return {
     value: pick.value,
@@ -84,17 +104,7 @@ export function chooseValue(
   published: UsedValue | null,
   unit: string,
 ): UsedValue {
-  if (entered !== undefined) {
-    return {
-      value: entered,
-      unit,
-      origin: 'entered',
-      source: null,
-      low: null,
-      high: null,
-      sd: null,
-    };
-  }
+  if (entered !== undefined) return enteredValue(entered, unit);
   if (published) return published;
   throw new ValidationError(`${label} is needed.`, {
     [field]: [`${label} has no published value for this cultivar: enter one (${unit}).`],

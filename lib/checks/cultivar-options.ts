@@ -1,6 +1,7 @@
 import 'server-only';
 import type { Actor } from '@/lib/auth/actor';
 import { listPublishedCultivars } from '@/lib/data/cultivars';
+import { pickValue } from './cultivar-inputs';
 import type { RevisionValue } from '@/lib/data/property-rows';
 import type { Quantity } from '@/lib/properties/quantities';
 
@@ -13,21 +14,19 @@ export interface CultivarPrefill extends Record<string, number | undefined> {
   staticThresholdKpa?: number;
 }
 
-const FIELDS: [keyof CultivarPrefill, Quantity, string[]?][] = [
-  ['modulusMpa', 'youngs_modulus', ['apparent', 'flesh']],
+const FIELDS: [keyof CultivarPrefill, Quantity][] = [
+  ['modulusMpa', 'youngs_modulus'],
   ['poisson', 'poisson_ratio'],
-  ['diameterMm', 'diameter', ['', 'equatorial', 'axial']],
+  ['diameterMm', 'diameter'],
   ['massG', 'mass'],
   ['staticThresholdKpa', 'static_bruise_threshold'],
 ];
 
+/** The figures a check would take from these values (the same choice as resolveFruit). */
 function prefillOf(values: RevisionValue[]): CultivarPrefill {
   const out: CultivarPrefill = {};
-  for (const [field, quantity, variants] of FIELDS) {
-    const of = values.filter((v) => v.quantity === quantity);
-    const pick = variants
-      ? variants.map((w) => of.find((v) => v.variant === w)).find(Boolean)
-      : of[0];
+  for (const [field, quantity] of FIELDS) {
+    const pick = pickValue(values, quantity);
     if (pick) out[field] = pick.value;
   }
   return out;
@@ -47,4 +46,11 @@ export async function cultivarOptions(actor: Actor) {
     return { slug: c.slug, label, prefill, complete };
   });
   return options.sort((a, b) => Number(b.complete) - Number(a.complete));
+}
+
+/** The cultivar a check page starts on: the one asked for, else the first with every figure. */
+export function initialCultivar(options: { slug: string; complete: boolean }[], wanted?: string) {
+  return (
+    options.find((o) => o.slug === wanted)?.slug ?? options.find((o) => o.complete)?.slug ?? ''
+  );
 }

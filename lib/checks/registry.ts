@@ -1,19 +1,17 @@
 import 'server-only';
 import type { Actor } from '@/lib/auth/actor';
+import type { CheckNameValue } from './check-names';
 import { runDropCheck } from './drop';
 import { runSqueezeCheck } from './squeeze';
 import { runStackCheck } from './stack';
 
-/** Every check an assessment can save, by name; each validates its own inputs. */
+type Runner = (actor: Actor, input: unknown) => Promise<{ pinned: unknown }>;
+
+/** Every check an assessment can save, one per name of ./check-names; each validates its inputs. */
 export const CHECK_RUNNERS = {
   drop: runDropCheck,
   stack: runStackCheck,
   squeeze: runSqueezeCheck,
-} satisfies Record<string, (actor: Actor, input: unknown) => Promise<{ pinned: unknown }>>;
+} satisfies Record<CheckNameValue, Runner>;
 
-export type CheckName = keyof typeof CHECK_RUNNERS;
-export const CHECK_NAMES = Object.keys(CHECK_RUNNERS) as CheckName[];
-
-// The plain list in ./check-names must name the same checks (checked at compile time).
-type Same<A, B> = [A] extends [B] ? ([B] extends [A] ? true : never) : never;
-export const CHECK_LISTS_AGREE: Same<CheckName, import('./check-names').CheckNameValue> = true;
+export type CheckName = CheckNameValue;

@@ -60,12 +60,12 @@ function massOf(entry: FruitEntry, pinned: PinnedCultivar | null, diameter: Used
 /** The fruit's properties for a check: typed values first, then the cultivar's published ones. */
 export async function resolveFruit(actor: Actor, entry: FruitEntry): Promise<ResolvedFruit> {
   const pinned = entry.cultivar ? await pinCultivar(actor, entry.cultivar) : null;
-  const modulus = publishedValue(pinned, 'youngs_modulus', ['apparent', 'flesh']);
+  const modulus = publishedValue(pinned, 'youngs_modulus');
   const diameterMm = chooseValue(
     'diameterMm',
     'Diameter',
     entry.diameterMm,
-    publishedValue(pinned, 'diameter', ['', 'equatorial', 'axial']),
+    publishedValue(pinned, 'diameter'),
     'mm',
   );
   const threshold = publishedValue(pinned, 'static_bruise_threshold');

@@ -2,7 +2,7 @@ import 'server-only';
 import type { Actor } from '@/lib/auth/actor';
 import { parseInput } from '@/lib/validation/parse';
 import { stackCheckSchema } from '@/lib/validation/checks';
-import { publishedValue, type UsedValue } from './cultivar-inputs';
+import { enteredValue, publishedValue, type UsedValue } from './cultivar-inputs';
 import { resolveFruit } from './resolve-fruit';
 import { deepestSafeFill, stackAt, type StackSI } from './stack-model';
 import { verdictOf } from './verdict';
@@ -15,15 +15,6 @@ const typical = (value: number, why: string): UsedValue => ({
   unit: '–',
   origin: 'typical default',
   source: why,
-  low: null,
-  high: null,
-  sd: null,
-});
-const entered = (value: number, unit: string): UsedValue => ({
-  value,
-  unit,
-  origin: 'entered',
-  source: null,
   low: null,
   high: null,
   sd: null,
@@ -41,7 +32,7 @@ export async function runStackCheck(actor: Actor, raw: unknown) {
     f.massG.value / 1000 / ((4 / 3) * Math.PI * (f.diameterMm.value / 2000) ** 3);
   const bulk =
     input.bulkDensityKgM3 !== undefined
-      ? entered(input.bulkDensityKgM3, 'kg/m³')
+      ? enteredValue(input.bulkDensityKgM3, 'kg/m³')
       : (publishedValue(p, 'bulk_density') ?? {
           ...typical(
             round(PACKING_FRACTION * fruitDensity, 3),
@@ -51,7 +42,7 @@ export async function runStackCheck(actor: Actor, raw: unknown) {
         });
   const wall =
     input.wallFriction !== undefined
-      ? entered(input.wallFriction, '–')
+      ? enteredValue(input.wallFriction, '–')
       : (publishedValue(p, 'friction_coefficient', ['plywood', 'wood']) ??
         typical(
           0.4,
@@ -59,7 +50,7 @@ export async function runStackCheck(actor: Actor, raw: unknown) {
         ));
   const ratio =
     input.lateralRatio !== undefined
-      ? entered(input.lateralRatio, '–')
+      ? enteredValue(input.lateralRatio, '–')
       : (publishedValue(p, 'lateral_pressure_ratio') ??
         typical(0.4, 'Typical Janssen ratio K for a bulk of round fruit; no published source.'));
   const s: StackSI = {

@@ -1,0 +1,88 @@
+'use client';
+
+import { useUnits } from '@/components/units/units-provider';
+import { MeasureField, publishedHint, type CultivarOption } from './check-fields';
+import { FIELD_UNITS } from './field-units';
+
+/** A field of a check form: its key in the route's input, its label, an optional hint. */
+export type FieldSpec = readonly [key: string, label: string, hint?: string];
+
+export interface FieldsState {
+  text: Record<string, string>;
+  set: (key: string) => (value: string) => void;
+  fieldErrors: Record<string, string[]>;
+}
+
+/**
+ * Number fields in the reader's units (the SI unit comes from FIELD_UNITS); with a cultivar, each
+ * empty field shows the published figure it falls back to.
+ */
+export function MeasureFields({
+  fields,
+  state,
+  option,
+}: {
+  fields: readonly FieldSpec[];
+  state: FieldsState;
+  option?: CultivarOption;
+}) {
+  const units = useUnits();
+  return fields.map(([key, label, hint]) => {
+    const unit = FIELD_UNITS[key] ?? '–';
+    return (
+      <MeasureField
+        key={key}
+        label={label}
+        unit={unit}
+        hint={hint || undefined}
+        value={state.text[key] ?? ''}
+        onChange={state.set(key)}
+        errors={state.fieldErrors[key]}
+        placeholder={publishedHint(option, key, (v) => units.toDisplay(v, unit))}
+      />
+    );
+  });
+}
+
+/** The fruit's figures: a cultivar's published values, or the user's own. */
+export function FruitFieldset({
+  fields,
+  state,
+  option,
+}: {
+  fields: readonly FieldSpec[];
+  state: FieldsState;
+  option?: CultivarOption;
+}) {
+  return (
+    <fieldset className="space-y-3 rounded-md border border-stone-200 p-3">
+      <legend className="px-1 text-xs font-medium uppercase tracking-wide text-stone-600">
+        Fruit {option ? '(leave empty to use the published value)' : ''}
+      </legend>
+      <MeasureFields fields={fields} state={state} option={option} />
+    </fieldset>
+  );
+}
+
+/** The route's form-level message (the field ones sit beside their fields). */
+export function CheckFormError({ message }: { message: string | null }) {
+  if (!message) return null;
+  return (
+    <p
+      className="rounded-md bg-red-50 px-3 py-2 text-sm text-red-800"
+      data-testid="form-error"
+      aria-live="polite"
+    >
+      {message}
+    </p>
+  );
+}
+
+/** The fruit fields the drop and stack checks share. */
+export const FRUIT_FIELDS: readonly FieldSpec[] = [
+  ['modulusMpa', "Young's modulus"],
+  ['poisson', "Poisson's ratio"],
+  ['diameterMm', 'Diameter'],
+  ['massG', 'Mass'],
+  ['staticThresholdKpa', 'Static bruise threshold'],
+];
