@@ -41,6 +41,7 @@ export {
 export * from './closed-form';
 export { solveContact, type ContactOptions, type ContactSolution } from './solver/active-set';
 export { createContactSystem, type ContactSystem } from './solver/compliance';
+export { monotoneRoot, type RootBracket, type RootTolerance } from './solver/monotone-root';
 
 // The squeeze pipeline, fem/squeeze/, one stage per numbered file; each stage prepares and calls
 // only the stage before it: 01 input → 02 body → 03 contact → 04 pressure → 05 shear →
@@ -83,6 +84,7 @@ export {
   prepareLift,
   profileOf,
   runIncrements,
+  GRIP_RATIO_TOLERANCE,
   GRIP_TOLERANCE,
   type GripPoint,
   type IncrementTrack,
@@ -95,20 +97,14 @@ export {
   regradeRadius,
   runCase,
   runSqueeze,
+  squeezeResultOf,
   squeezeWarnings,
   type CaseRun,
   type MeshSummary,
   type SqueezeResult,
 } from './squeeze/07-run';
 export { sweepPadDiameters, type PadSweepPoint } from './squeeze/08-sweep';
-export {
-  bisectGrip,
-  fruitMass,
-  liftRatio,
-  margin,
-  requiredHoldLoad,
-  type GripRule,
-} from './squeeze/grip';
+export { fruitMass, liftRatio, margin, requiredHoldLoad, type GripRule } from './squeeze/grip';
 export { hertzComparison, type HertzComparison, type HertzFigures } from './squeeze/hertz';
 export {
   createPad,
@@ -159,7 +155,7 @@ export {
   type SlipMap,
   type SlipNode,
 } from './squeeze/slip-superposition';
-export { slipMapAtGrip, slipMapAtTravel, type GripSlipMap } from './squeeze/slip-map';
+export { slipMapAtGrip, slipMapAtTravel, slipMapOfRun, type GripSlipMap } from './squeeze/slip-map';
 export { randomStream, splitMix64, xoshiro128ss, type RandomStream } from './probability/prng';
 export {
   samplerOf,

@@ -1,6 +1,6 @@
-import { CholeskyDecomposition, Matrix } from 'ml-matrix';
 import { FemConvergenceError, FemInputError } from '../errors';
 import type { ContactSystem } from './compliance';
+import { solveSubmatrixSpd } from './dense-cholesky';
 
 /** Options of one contact solve. */
 export interface ContactOptions {
@@ -53,7 +53,7 @@ export function solveContact(system: ContactSystem, options: ContactOptions): Co
   let added = 0;
   let released = 0;
   for (let iteration = 1; iteration <= maxIterations; iteration++) {
-    const p = solveActive(system.compliance, facing, q, active);
+    const p = solveActive(system, facing, q, active);
     const s = gapsUnder(system, facing, q, p);
     const flips = violations(active, reachable, p, s, tolS);
     if (flips.length === 0) {
@@ -102,10 +102,12 @@ function gapsUnder(
 function addCompliance(system: ContactSystem, p: Float64Array, start: Float64Array): Float64Array {
   const n = system.size;
   const C = system.flat;
+  const loaded: number[] = [];
+  for (let j = 0; j < n; j++) if (p[j] !== 0) loaded.push(j);
   const out = new Float64Array(n);
   for (let i = 0; i < n; i++) {
     let v = start[i];
-    for (let j = 0; j < n; j++) if (p[j] !== 0) v += C[i * n + j] * p[j];
+    for (const j of loaded) v += C[i * n + j] * p[j];
     out[i] = v;
   }
   return out;
@@ -141,7 +143,7 @@ function closeActive(
 
 /** Forces on the active set with every active gap closed: (C + D_f)_AA p_A = −q_A. */
 function solveActive(
-  C: Matrix,
+  system: ContactSystem,
   facing: Float64Array,
   q: Float64Array,
   active: Uint8Array,
@@ -150,17 +152,9 @@ function solveActive(
   active.forEach((a, i) => a && idx.push(i));
   const p = new Float64Array(active.length);
   if (idx.length === 0) return p;
-  const sub = C.selection(idx, idx);
-  const rhs = new Matrix(idx.length, 1);
-  idx.forEach((i, k) => {
-    sub.set(k, k, sub.get(k, k) + facing[i]);
-    rhs.set(k, 0, -q[i]);
-  });
-  const chol = new CholeskyDecomposition(sub);
-  if (!chol.isPositiveDefinite()) {
-    throw new FemConvergenceError('contact submatrix lost positive definiteness');
-  }
-  const x = chol.solve(rhs);
-  idx.forEach((i, k) => (p[i] = x.get(k, 0)));
+  const rhs = Float64Array.from(idx, (i) => -q[i]);
+  const x = solveSubmatrixSpd(system.flat, system.size, idx, facing, rhs);
+  if (!x) throw new FemConvergenceError('contact submatrix lost positive definiteness');
+  idx.forEach((i, k) => (p[i] = x[k]));
   return p;
 }

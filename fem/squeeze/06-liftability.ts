@@ -10,7 +10,8 @@ import {
   type SqueezeState,
   type StateAt,
 } from './05-shear';
-import { bisectGrip, fruitMass, liftRatio, margin, requiredHoldLoad, type GripRule } from './grip';
+import { monotoneRoot } from '../solver/monotone-root';
+import { fruitMass, liftRatio, margin, requiredHoldLoad, type GripRule } from './grip';
 
 /** The shear stage plus the grip rule; `rule` is null without liftability inputs. */
 export interface LiftStage extends ShearStage {
@@ -52,8 +53,16 @@ export interface Liftability {
   reason: string | null;
 }
 
-/** Bisection tolerance on the grip travel, as a fraction of the requested travel. */
+/** Tolerance on the grip travel, as a fraction of the requested travel. */
 export const GRIP_TOLERANCE = 1e-5;
+
+/**
+ * Tolerance on the lift ratio at the grip: the search aims at a ratio of 1 + 1e-10 (so a re-solve
+ * at the grip travel, whose force differs by round-off of order 1e-15, still lifts) and stops
+ * once the ratio is within 1e-9 above 1, or the travel bracket is narrower than GRIP_TOLERANCE.
+ */
+export const GRIP_RATIO_TOLERANCE = 1e-9;
+const GRIP_RATIO_AIM = 1e-10;
 
 /** Prepares the shear stage (stage 5) and the grip rule of the case's liftability inputs. */
 export function prepareLift(input: SqueezeInput): LiftStage {
@@ -99,7 +108,10 @@ export function profileOf(stage: LiftStage, pressure: Float64Array): PressurePoi
   return Array.from(stage.r, (r, i) => ({ r, pressure: pressure[i] }));
 }
 
-/** Liftability from the increments: bisects between the bracketing increments for the grip. */
+/**
+ * Liftability from the increments: the grip travel is searched between the bracketing increments
+ * (the lift ratio is 0 at zero travel, where the pads only touch).
+ */
 export function findLiftability(stage: LiftStage, track: IncrementTrack[]): Liftability | null {
   const { rule } = stage;
   const lift = stage.case.lift;
@@ -113,9 +125,15 @@ export function findLiftability(stage: LiftStage, track: IncrementTrack[]): Lift
     return { ...base, grip: null, reason };
   }
   const lo = k === 0 ? 0 : track[k - 1].travel;
+  const fLo = k === 0 ? 0 : (track[k - 1].state.liftRatio ?? 0);
   const warm = k === 0 ? undefined : track[k - 1].active;
   const ratioAt = (d: number) => liftStateAt(stage, d, warm, false).state.liftRatio ?? 0;
-  const travel = bisectGrip(ratioAt, lo, track[k].travel, GRIP_TOLERANCE * stage.case.travel);
+  const travel = monotoneRoot(
+    ratioAt,
+    1 + GRIP_RATIO_AIM,
+    { lo, hi: track[k].travel, fLo, fHi: track[k].state.liftRatio ?? 0 },
+    { xTol: GRIP_TOLERANCE * stage.case.travel, fTol: GRIP_RATIO_TOLERANCE - GRIP_RATIO_AIM },
+  );
   const { state, pressure } = liftStateAt(stage, travel, warm, true);
   const grip: GripPoint = {
     ...state,

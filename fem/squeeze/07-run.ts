@@ -153,7 +153,12 @@ export function squeezeWarnings(
  * @throws FemInputError (field named) for bad input; FemConvergenceError if contact does not settle
  */
 export function runSqueeze(input: SqueezeInput): SqueezeResult {
-  const { stage, track, liftability, gripStage } = runCase(input, true);
+  return squeezeResultOf(runCase(input, true));
+}
+
+/** The squeeze result of a case already run with shear (runCase(input, true)), as runSqueeze. */
+export function squeezeResultOf(run: CaseRun): SqueezeResult {
+  const { stage, track, liftability, gripStage } = run;
   const last = track[track.length - 1];
   const c = stage.case;
   const grip = liftability?.grip ?? null;

@@ -1,5 +1,4 @@
 import { STANDARD_GRAVITY } from '../constants';
-import { FemConvergenceError } from '../errors';
 import type { BodyModel } from '../types';
 
 /**
@@ -40,26 +39,6 @@ export function requiredHoldLoad(rule: GripRule): number {
  */
 export function liftRatio(padForce: number, rule: GripRule): number {
   return (rule.friction * 2 * padForce) / requiredHoldLoad(rule);
-}
-
-/**
- * Least travel in [lo, hi] (m) with ratio ≥ 1, by bisection, given ratio(lo) < 1 ≤ ratio(hi) and
- * a ratio that does not decrease with travel. Stops when the bracket is narrower than `tol` (m).
- * Returns the upper end, so the grip found always satisfies the rule.
- */
-export function bisectGrip(
-  ratioAt: (travel: number) => number,
-  lo: number,
-  hi: number,
-  tol: number,
-): number {
-  for (let i = 0; i < 200; i++) {
-    if (hi - lo <= tol) return hi;
-    const mid = (lo + hi) / 2;
-    if (ratioAt(mid) >= 1) hi = mid;
-    else lo = mid;
-  }
-  throw new FemConvergenceError('grip bisection did not narrow the bracket');
 }
 
 /** Margin = allowed / actual (> 1 is safe), or null when either is missing or the actual is zero. */

@@ -9,6 +9,7 @@ import {
   requirePositive,
   runCase,
   STANDARD_GRAVITY,
+  type CaseRun,
   type LiftStage,
   type SqueezeInput,
 } from '../index';
@@ -77,7 +78,18 @@ export function slipMapAtTravel(
  * @throws FemInputError naming the field (density and friction are needed)
  */
 export function slipMapAtGrip(input: SqueezeInput, tangentialLoad?: number): GripSlipMap {
-  const { stage, liftability } = runCase(input, false);
+  return slipMapOfRun(runCase(input, false), tangentialLoad);
+}
+
+/**
+ * The slip map at the grip point of a case already run (runCase), as slipMapAtGrip, so a caller
+ * that has the squeeze does not solve it again. The map is taken on the body the grip was found
+ * on (the regraded one when the run regraded for the grip's contact).
+ * @throws FemInputError naming the field (density and friction are needed)
+ */
+export function slipMapOfRun(run: CaseRun, tangentialLoad?: number): GripSlipMap {
+  const { liftability } = run;
+  const stage = run.gripStage ?? run.stage;
   const lift = stage.case.lift;
   if (!liftability || !lift) {
     throw new FemInputError('density', 'density and friction are needed for the slip map');

@@ -1,4 +1,4 @@
-import { FemConvergenceError, requireNonNegative, requirePositive } from '../index';
+import { monotoneRoot, requireNonNegative, requirePositive } from '../index';
 
 /** Normal contact at one load: force P (N, N/m in plane strain), radius a (m), nodal pressure (Pa). */
 export interface NormalContactState {
@@ -39,7 +39,7 @@ export interface SlipMap {
   nodes: SlipNode[];
 }
 
-/** Loading history: the normal contact at parameter s in (0, sMax], force rising with s. */
+/** Loading history: the normal contact at parameter s in (0, sMax], force rising with s from 0. */
 export type ContactHistory = (s: number) => NormalContactState;
 
 /**
@@ -48,7 +48,7 @@ export type ContactHistory = (s: number) => NormalContactState;
  * and pages [from memory]): under a tangential load T applied after the normal load P, the
  * traction is q = μ[p(r) − p*(r)], p* the normal pressure of the same bodies at the smaller load
  * whose contact radius is the stick radius c. Then ∫q dA = μ(P − P*) = T fixes P* = P − T/μ, and
- * c is the contact radius of the history at P*, found by bisection on s. Assumes Coulomb
+ * c is the contact radius of the history at P*, found by a bracketed secant search on s. Assumes Coulomb
  * friction, normal–tangential uncoupling (Mindlin's approximation: exact for elastically similar
  * bodies; for a rigid pad it drops a coupling ∝ (1 − 2ν), nil as ν → 0.5 [from memory]) and a
  * contact that grows with load. Gross sliding exactly when T ≥ μP: c = 0 and
@@ -72,7 +72,7 @@ export function ciavarellaJager(
   let stick: NormalContactState;
   if (grossSliding) stick = { force: 0, contactRadius: 0, pressure: new Float64Array(r.length) };
   else if (T === 0) stick = current;
-  else stick = history(bisectForce(history, stickForce, sMax));
+  else stick = history(stickParameter(history, stickForce, sMax, P));
   const c = grossSliding ? 0 : Math.min(stick.contactRadius, a);
   const nodes = Array.from(r, (ri, i): SlipNode => {
     const p = current.pressure[i];
@@ -94,15 +94,22 @@ export function ciavarellaJager(
   };
 }
 
-/** Parameter s in (0, sMax] whose force is `target` (≤ the force at sMax), to 1e-12 of sMax. */
-function bisectForce(history: ContactHistory, target: number, sMax: number): number {
-  let lo = 0;
-  let hi = sMax;
-  for (let i = 0; i < 200; i++) {
-    if (hi - lo <= 1e-12 * sMax) return hi;
-    const mid = (lo + hi) / 2;
-    if (history(mid).force >= target) hi = mid;
-    else lo = mid;
-  }
-  throw new FemConvergenceError('stick-radius bisection did not narrow the bracket');
+/**
+ * Least parameter s in (0, sMax] whose force reaches `target` (0 < target ≤ the force at sMax):
+ * the history starts unloaded (no force at s = 0). Stops within 1e-12 of the target force (a
+ * Hertz contact radius then within about 3e-13 of itself, as a ∝ P^{1/3}) or a bracket of
+ * 1e-12 sMax.
+ */
+function stickParameter(
+  history: ContactHistory,
+  target: number,
+  sMax: number,
+  forceAtMax: number,
+): number {
+  return monotoneRoot(
+    (s) => history(s).force,
+    target,
+    { lo: 0, hi: sMax, fLo: 0, fHi: forceAtMax },
+    { xTol: 1e-12 * sMax, fTol: 1e-12 * target },
+  );
 }

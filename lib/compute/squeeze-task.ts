@@ -3,11 +3,13 @@
  * point, the pad sweep, the slip map at the grip, and the Monte Carlo probability of bruising.
  */
 import {
+  runCase,
   runMonteCarlo,
-  runSqueeze,
-  slipMapAtGrip,
+  slipMapOfRun,
   squeezeResultJson,
+  squeezeResultOf,
   sweepPadDiameters,
+  type GripSlipMap,
   type SqueezeInput,
   type Spreads,
 } from '@/fem';
@@ -35,8 +37,7 @@ function sweepJson(input: SqueezeInput, diameters: number[]) {
   return { points, smallest_safe_pad_mm: safe?.pad_diameter_mm ?? null };
 }
 
-function slipJson(input: SqueezeInput) {
-  const s = slipMapAtGrip(input);
+function slipJson(s: GripSlipMap) {
   if (!s.map) return { holds: null, reason: s.reason };
   const m = s.map;
   return {
@@ -58,7 +59,9 @@ function slipJson(input: SqueezeInput) {
 }
 
 export function squeezeTask({ input, sweep }: SqueezeTaskInput) {
-  const result = runSqueeze(input);
+  // One run serves the result and the slip map at its grip.
+  const run = runCase(input, true);
+  const result = squeezeResultOf(run);
   const grip = result.liftability?.grip ?? null;
   return {
     model: squeezeResultJson(result),
@@ -66,7 +69,7 @@ export function squeezeTask({ input, sweep }: SqueezeTaskInput) {
       ? grip.profile.map((p) => ({ r_mm: mm(p.r), pressure_kpa: kpa(p.pressure) }))
       : null,
     sweep: sweep && grip ? sweepJson(input, sweep) : null,
-    slip: grip ? slipJson(input) : null,
+    slip: grip ? slipJson(slipMapOfRun(run)) : null,
   };
 }
 

@@ -52,7 +52,7 @@ describe('liftability of the two-pad grip', () => {
     expect(lift.mass).toBeCloseTo(mass, 12);
   });
 
-  it('the grip travel is where the ratio reaches 1, within the bisection tolerance', () => {
+  it('the grip travel is where the ratio reaches 1, within the search tolerance', () => {
     const grip = lift.grip!;
     expect(grip).not.toBeNull();
     const tol = GRIP_TOLERANCE * base.travel;

@@ -34,7 +34,8 @@ describe('Ciavarella–Jäger partial slip on a closed-form Hertz pressure', () 
     'stick radius is Cattaneo–Mindlin at T/μP = %s',
     (u) => {
       const m = map(u * mu * P);
-      // 2e-12 of a: the bisection on the radius stops at 1e-12 of a; observed ≤ 7.4e-13 a.
+      // 2e-12 of a: the stick-force search stops within 1e-12 of P* (a ∝ P^{1/3} moves by a
+      // third of that) or a bracket of 1e-12 of a.
       expect(Math.abs(m.stickRadius - cattaneo(u * mu * P))).toBeLessThan(2e-12 * a);
       expect(m.grossSliding).toBe(false);
       expect(m.slipAnnulus).toEqual({ inner: m.stickRadius, outer: a });

@@ -22,7 +22,7 @@ describe('margin versus pad diameter', () => {
   it('agrees with a single squeeze run at each diameter', () => {
     sweep.forEach((p, i) => {
       const one = runSqueeze({ ...base, padDiameter: diameters[i] }).liftability!.grip!;
-      // Same computation path (identical increments and bisection): equal to round-off.
+      // Same computation path (identical increments and grip search): equal to round-off.
       expect(p.bruiseMargin as number).toBeCloseTo(one.bruiseMargin as number, 9);
       expect(p.gripTravel as number).toBeCloseTo(one.travel, 12);
     });
