@@ -3,6 +3,7 @@ import CredentialsProvider from 'next-auth/providers/credentials';
 import { attemptSignIn } from '@/lib/auth/sign-in';
 import { signInContext } from '@/lib/auth/sign-in-context';
 import { endAllSessions, getSessionUser } from '@/lib/data/users';
+import { decodeSessionToken, encodeSessionToken } from '@/lib/auth/session-token';
 import { clientAddress } from '@/lib/http/client-address';
 import { isHttpsApp } from '@/lib/http/origin';
 import { signInSchema } from '@/lib/validation/users';
@@ -17,6 +18,7 @@ class SessionRevoked extends Error {
 
 export const authOptions: NextAuthOptions = {
   session: { strategy: 'jwt', maxAge: 8 * 3600 },
+  jwt: { encode: encodeSessionToken, decode: decodeSessionToken },
   useSecureCookies: isHttpsApp(),
   pages: { signIn: '/sign-in', error: '/sign-in' },
   providers: [
