@@ -46,9 +46,13 @@ export function solveContact(system: ContactSystem, options: ContactOptions): Co
   const q = gap.map((g) => g - travel);
   const reachable = q.map((v) => (Number.isFinite(v) ? 1 : 0));
   const active = startingSet(q, reachable, options.initialActive);
-  const tolS = 1e-10 * Math.max(...q.filter(Number.isFinite).map(Math.abs), travel);
+  let scale = travel;
+  for (const v of q) if (Number.isFinite(v) && Math.abs(v) > scale) scale = Math.abs(v);
+  const tolS = 1e-10 * scale;
   const maxIterations = options.maxIterations ?? 2 * n + 20;
-  const seen = new Set<string>();
+  // Sets already tried, by a 32-bit hash: a collision only switches to Murty's rule early,
+  // which still converges.
+  const seen = new Set<number>();
   let murty = false;
   let added = 0;
   let released = 0;
@@ -65,13 +69,20 @@ export function solveContact(system: ContactSystem, options: ContactOptions): Co
       else added++;
       active[i] = active[i] ? 0 : 1;
     }
-    const key = active.join('');
+    const key = hashSet(active);
     if (seen.has(key)) murty = true;
     seen.add(key);
   }
   throw new FemConvergenceError(
     `contact active set did not settle within ${maxIterations} iterations (travel ${travel} m)`,
   );
+}
+
+/** FNV-1a hash of an active set (T. Fowler, L. C. Noll, K.-P. Vo, 1991 [from memory]). */
+function hashSet(active: Uint8Array): number {
+  let h = 0x811c9dc5;
+  for (let i = 0; i < active.length; i++) h = Math.imul(h ^ active[i], 0x01000193);
+  return h >>> 0;
 }
 
 /** The warm-start set if given, else the nodes the travel would make penetrate; never unreachable ones. */
@@ -121,7 +132,9 @@ function violations(
   s: Float64Array,
   tolS: number,
 ): number[] {
-  const tolP = 1e-10 * Math.max(...p.map(Math.abs));
+  let largest = 0;
+  for (const v of p) if (Math.abs(v) > largest) largest = Math.abs(v);
+  const tolP = 1e-10 * largest;
   const flips: number[] = [];
   for (let i = 0; i < active.length; i++) {
     if (active[i] && p[i] < -tolP) flips.push(i);
