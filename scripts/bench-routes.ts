@@ -2,7 +2,6 @@
  * Route latency against the built app on loopback (autocannon): a fresh seeded database, the
  * app server, an engineer signed in; then for each check route 200 sequential requests and 20
  * concurrent connections (400 requests), and a page load timed while the concurrent run is on.
- * Squeeze requests each ask for a different pad (see bodies()).
  * Needs `next build` first. Run: `npx tsx scripts/bench-routes.ts`.
  * Targets (squeeze): warm p50 ≤ 50 ms, p95 ≤ 200 ms at 20 concurrent.
  */
@@ -26,12 +25,18 @@ const SQUEEZE = {
   accelerationMs2: 2,
   maxTravelMm: 2,
 };
-/** [label, route, body]: the squeeze alone (grip point, slip map) and with its 12-pad sweep. */
-const CASES: [string, string, unknown][] = [
+/**
+ * [label, route, body, a new pad each request]: the squeeze alone (grip point, slip map) on one
+ * case — warm: its bodies are cached, but every request is solved afresh (there is no result
+ * cache) — then with a new pad each request (bodies built as pads cross mesh bands), and with
+ * the page's 12-pad sweep.
+ */
+const CASES: [string, string, unknown, boolean][] = [
   [
     'drop',
     '/api/checks/drop',
     { modulusMpa: 3, poisson: 0.35, diameterMm: 80, massG: 200, heightMm: 150, surface: 'steel' },
+    false,
   ],
   [
     'stack',
@@ -46,9 +51,11 @@ const CASES: [string, string, unknown][] = [
       binWidthMm: 1000,
       fillDepthMm: 600,
     },
+    false,
   ],
-  ['squeeze', '/api/checks/squeeze', { ...SQUEEZE, sweep: false }],
-  ['squeeze + pad sweep', '/api/checks/squeeze', SQUEEZE],
+  ['squeeze, one case', '/api/checks/squeeze', { ...SQUEEZE, sweep: false }, false],
+  ['squeeze, new pad each', '/api/checks/squeeze', { ...SQUEEZE, sweep: false }, true],
+  ['squeeze + pad sweep', '/api/checks/squeeze', SQUEEZE, false],
 ];
 
 async function waitFor(url: string, ms = 90_000) {
@@ -93,34 +100,72 @@ async function signIn(): Promise<string> {
 }
 
 /**
- * Each request of a squeeze run grips with a pad 0.01 mm wider than the one before (from 15 mm),
- * so no two requests of a run ask for the same case and nothing can answer from a cache.
+ * With `vary`, each request grips with a pad 0.01 mm wider than the one before (from 15 mm), so
+ * no two requests of a run ask for the same case.
  */
-function bodies(body: unknown): () => string {
+function bodies(body: unknown, vary: boolean): () => string {
   let n = 0;
-  const squeeze = body !== null && typeof body === 'object' && 'padDiameterMm' in body;
   return () =>
-    JSON.stringify(squeeze ? { ...body, padDiameterMm: 15 + (n++ % 1000) * 0.01 } : body);
+    JSON.stringify(vary ? { ...(body as object), padDiameterMm: 15 + (n++ % 1000) * 0.01 } : body);
 }
 
-function load(route: string, body: unknown, cookie: string, connections: number, amount: number) {
-  const next = bodies(body);
-  return autocannon({
-    url: ORIGIN + route,
-    connections,
-    amount,
-    requests: [
+interface Run {
+  p50: number;
+  p95: number;
+  /** non-2xx answers and socket errors */
+  failed: number;
+  /** completed requests per second */
+  rate: number;
+}
+
+/** Nearest-rank percentile of sorted values. */
+const percentile = (sorted: number[], p: number) =>
+  sorted[Math.max(0, Math.ceil((p / 100) * sorted.length) - 1)];
+
+/** Runs `amount` requests over `connections`; percentiles from every response time recorded. */
+function load(
+  [route, body, vary]: [string, unknown, boolean],
+  cookie: string,
+  connections: number,
+  amount: number,
+): Promise<Run> {
+  const next = bodies(body, vary);
+  const times: number[] = [];
+  const started = performance.now();
+  return new Promise((resolve, reject) => {
+    const instance = autocannon(
       {
-        method: 'POST',
-        headers: { 'content-type': 'application/json', cookie, origin: ORIGIN },
-        setupRequest: (req) => ({ ...req, body: next() }),
+        url: ORIGIN + route,
+        connections,
+        amount,
+        requests: [
+          {
+            method: 'POST',
+            headers: { 'content-type': 'application/json', cookie, origin: ORIGIN },
+            setupRequest: (req) => ({ ...req, body: next() }),
+          },
+        ],
       },
-    ],
+      (error, result) => {
+        if (error) return reject(error);
+        const sorted = times.sort((a, b) => a - b);
+        resolve({
+          p50: percentile(sorted, 50),
+          p95: percentile(sorted, 95),
+          failed: result.non2xx + result.errors,
+          rate: (result.requests.total * 1000) / (performance.now() - started),
+        });
+      },
+    );
+    instance.on('response', (_client, _status, _bytes, ms) => times.push(ms));
   });
 }
 
-async function pageWhileLoaded(route: string, body: unknown, cookie: string): Promise<number> {
-  const running = load(route, body, cookie, 20, 200);
+async function pageWhileLoaded(
+  request: [string, unknown, boolean],
+  cookie: string,
+): Promise<number> {
+  const running = load(request, cookie, 20, 200);
   await new Promise((r) => setTimeout(r, 300));
   const t = performance.now();
   await fetch(`${ORIGIN}/checks`, { headers: { cookie } });
@@ -138,28 +183,30 @@ try {
   const cookie = await signIn();
   console.log('route latency (ms), built app on loopback, engineer signed in');
   console.log(
-    'check                   | 200 sequential p50 / p95 | 20 concurrent p50 / p95 | errors | page load under load',
+    'check                   | 200 sequential p50 / p95 | 20 concurrent p50 / p95 | req/s   | errors | page load under load',
   );
-  for (const [label, route, body] of CASES) {
+  for (const [label, route, body, vary] of CASES) {
     const probe = await fetch(ORIGIN + route, {
       method: 'POST',
       headers: { 'content-type': 'application/json', cookie, origin: ORIGIN },
       body: JSON.stringify(body),
     });
     if (probe.status === 404) continue; // a check not built yet
-    const seq = await load(route, body, cookie, 1, 200);
-    const par = await load(route, body, cookie, 20, 400);
-    const page = await pageWhileLoaded(route, body, cookie);
+    const request: [string, unknown, boolean] = [route, body, vary];
+    const seq = await load(request, cookie, 1, 200);
+    const par = await load(request, cookie, 20, 400);
+    const page = await pageWhileLoaded(request, cookie);
     const row = [
       label.padEnd(23),
-      `${seq.latency.p50} / ${seq.latency.p97_5}`.padStart(24),
-      `${par.latency.p50} / ${par.latency.p97_5}`.padStart(23),
-      String(seq.non2xx + par.non2xx + seq.errors + par.errors).padStart(6),
+      `${seq.p50.toFixed(0)} / ${seq.p95.toFixed(0)}`.padStart(24),
+      `${par.p50.toFixed(0)} / ${par.p95.toFixed(0)}`.padStart(23),
+      `${par.rate.toFixed(0)}`.padStart(7),
+      String(seq.failed + par.failed).padStart(6),
       `${page.toFixed(0)} ms`.padStart(20),
     ];
     console.log(row.join(' | '));
   }
-  console.log('(autocannon reports p97.5 as its nearest percentile above p95)');
+  console.log('(percentiles by nearest rank over every response time; req/s at 20 concurrent)');
 } finally {
   server.kill('SIGTERM');
   for (const f of fs.readdirSync('data').filter((f) => f.startsWith(`e2e-${PORT}`))) {

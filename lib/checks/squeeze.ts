@@ -3,27 +3,20 @@ import type { Actor } from '@/lib/auth/actor';
 import { runTask } from '@/lib/compute/pool';
 import type { SqueezeTaskResult } from '@/lib/compute/squeeze-task';
 import { parseInput } from '@/lib/validation/parse';
-import { squeezeCheckSchema } from '@/lib/validation/checks';
+import { squeezeCheckSchema, type SqueezeCheckInput } from '@/lib/validation/checks';
 import { FACING_PRESETS } from './facings';
-import { resolveSqueeze, sweepDiameters } from './squeeze-inputs';
-import { verdictOf } from './verdict';
+import { resolveSqueeze, sweepDiameters, type ResolvedSqueeze } from './squeeze-inputs';
+import type { Verdict } from './verdict';
 
 /**
  * The squeeze check: two opposed pads grip the fruit; the finite-element squeeze (in a worker
- * thread) finds the travel at which the grip lifts it, and the bruise margin there.
+ * thread) finds the travel at which the grip lifts it, and the bruise margin there. The answer
+ * comes back from the worker as the JSON text of `{ result }` (see squeezeCheckTask).
  */
-export async function runSqueezeCheck(actor: Actor, raw: unknown) {
-  const input = parseInput(squeezeCheckSchema, raw);
-  const r = await resolveSqueeze(actor, input);
-  const out = await runTask<SqueezeTaskResult>('squeeze', {
-    input: r.model,
-    sweep: input.sweep ? sweepDiameters(input, r.fruit.diameterMm.value) : null,
-  });
-  const grip = out.model.liftability?.grip ?? null;
-  const margin = grip?.bruise_margin ?? null;
+/** The figures resolved on the main thread that open the answer: the pinned revision, inputs used. */
+function headOf(r: ResolvedSqueeze, input: SqueezeCheckInput) {
   const p = r.fruit.pinned;
   return {
-    check: 'squeeze' as const,
     pinned: p && {
       cultivar: p.slug,
       name: p.name,
@@ -49,15 +42,29 @@ export async function runSqueezeCheck(actor: Actor, raw: unknown) {
       acceleration_m_s2: input.accelerationMs2,
       max_travel_mm: input.maxTravelMm,
     },
-    margin: margin === null ? null : { value: margin, basis: 'static', verdict: verdictOf(margin) },
-    ...out,
-    warnings: [
-      ...out.model.warnings.map((w) => w.message),
-      ...(r.fruit.staticThresholdKpa
-        ? []
-        : ['No static bruise threshold: enter one to get a bruise margin.']),
-    ],
   };
 }
 
-export type SqueezeCheckResult = Awaited<ReturnType<typeof runSqueezeCheck>>;
+export async function squeezeCheckJson(actor: Actor, raw: unknown): Promise<string> {
+  const input = parseInput(squeezeCheckSchema, raw);
+  const r = await resolveSqueeze(actor, input);
+  const head = headOf(r, input);
+  return runTask<string>('squeeze-check', {
+    input: r.model,
+    sweep: input.sweep ? sweepDiameters(input, r.fruit.diameterMm.value) : null,
+    head,
+    inputWarnings: r.fruit.staticThresholdKpa
+      ? []
+      : ['No static bruise threshold: enter one to get a bruise margin.'],
+  });
+}
+
+export type SqueezeCheckResult = { check: 'squeeze' } & ReturnType<typeof headOf> & {
+    margin: { value: number; basis: 'static'; verdict: Verdict } | null;
+    warnings: string[];
+  } & SqueezeTaskResult;
+
+/** The squeeze check's result as an object (assessments, re-runs). */
+export async function runSqueezeCheck(actor: Actor, raw: unknown): Promise<SqueezeCheckResult> {
+  return (JSON.parse(await squeezeCheckJson(actor, raw)) as { result: SqueezeCheckResult }).result;
+}

@@ -16,6 +16,12 @@ import { runComputeTask, type Progress } from './task-table';
 const WORKER = path.join(process.cwd(), 'dist', 'compute-worker.mjs');
 const globalForPool = globalThis as unknown as { tenderlinePool?: Piscina | null };
 
+/** Worker threads: TENDERLINE_COMPUTE_THREADS when set (a whole number ≥ 1), else one per core. */
+function threads(): number {
+  const set = Number(process.env.TENDERLINE_COMPUTE_THREADS);
+  return Number.isInteger(set) && set >= 1 ? set : Math.max(1, os.availableParallelism());
+}
+
 function pool(): Piscina | null {
   if (globalForPool.tenderlinePool !== undefined) return globalForPool.tenderlinePool;
   const inline = process.env.TENDERLINE_INLINE_COMPUTE === '1' || !fs.existsSync(WORKER);
@@ -23,7 +29,7 @@ function pool(): Piscina | null {
     ? null
     : new Piscina({
         filename: WORKER,
-        maxThreads: Math.max(1, os.availableParallelism()),
+        maxThreads: threads(),
         idleTimeout: 60_000,
       });
   return globalForPool.tenderlinePool;

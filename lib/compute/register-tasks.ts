@@ -1,13 +1,16 @@
 // Registers the model tasks (pure fem/ work) so the worker and the inline fallback know them.
 import {
   probabilityTask,
+  squeezeCheckTask,
   squeezeTask,
   type ProbabilityTaskInput,
+  type SqueezeCheckTaskInput,
   type SqueezeTaskInput,
 } from './squeeze-task';
 import { registerTask } from './task-table';
 
 registerTask('squeeze', (input) => squeezeTask(input as SqueezeTaskInput));
+registerTask('squeeze-check', (input) => squeezeCheckTask(input as SqueezeCheckTaskInput));
 registerTask('squeeze-probability', (input, progress) =>
   probabilityTask(input as ProbabilityTaskInput, progress),
 );
