@@ -1,5 +1,6 @@
 import { getToken } from 'next-auth/jwt';
 import { NextResponse, type NextRequest } from 'next/server';
+import { decodeSessionToken } from '@/lib/auth/session-token';
 import { crossSiteMessage, crossSiteReason, isHttpsApp } from '@/lib/http/origin';
 import { contentSecurityPolicy, HSTS } from '@/lib/http/security-headers';
 
@@ -46,7 +47,11 @@ export default async function proxy(request: NextRequest) {
     if (problem) return problem;
   }
   if (!isApi && !PUBLIC_PAGES.some((p) => p.test(pathname))) {
-    const token = await getToken({ req: request, secureCookie: isHttpsApp() });
+    const token = await getToken({
+      req: request,
+      secureCookie: isHttpsApp(),
+      decode: decodeSessionToken,
+    });
     if (!token) {
       const signIn = new URL('/sign-in', request.url);
       signIn.searchParams.set('callbackUrl', pathname + request.nextUrl.search);
