@@ -55,13 +55,27 @@ function dynamicLimits(f: ResolvedFruit, fruit: FruitSI, surface: DropSurface) {
   });
 }
 
+/** The lowest published safe height of a surface first; each surface worked out once per check. */
+function limitsOf(f: ResolvedFruit, fruit: FruitSI) {
+  const known = new Map<DropSurface, ReturnType<typeof dynamicLimits>>();
+  return (surface: DropSurface) => {
+    let limits = known.get(surface);
+    if (!limits) {
+      limits = dynamicLimits(f, fruit, surface).sort((a, b) => a.heightM - b.heightM);
+      known.set(surface, limits);
+    }
+    return limits;
+  };
+}
+
 function safeHeights(
   f: ResolvedFruit,
   fruit: FruitSI,
   pad: { modulusMpa: number; thicknessMm: number } | undefined,
+  limitsFor: ReturnType<typeof limitsOf>,
 ) {
   return DROP_SURFACE_KEYS.filter((s) => s !== 'foam' || pad).map((surface) => {
-    const limits = dynamicLimits(f, fruit, surface).sort((a, b) => a.heightM - b.heightM);
+    const limits = limitsFor(surface);
     const staticKpa = f.staticThresholdKpa?.value;
     const staticM = staticKpa
       ? heightForPressure(fruit, surfaceSI(surface, fruit, pad), staticKpa * 1000)
@@ -104,7 +118,8 @@ export async function runDropCheck(actor: Actor, raw: unknown) {
   const surface = surfaceSI(input.surface, fruit, pad);
   const heightM = input.heightMm / 1000;
   const impact = impactAt(fruit, surface, heightM);
-  const limits = dynamicLimits(f, fruit, input.surface).sort((a, b) => a.heightM - b.heightM);
+  const limitsFor = limitsOf(f, fruit);
+  const limits = limitsFor(input.surface);
   const dynamicMargin = limits[0] ? limits[0].heightM / heightM : null;
   const staticMargin = f.staticThresholdKpa
     ? (f.staticThresholdKpa.value * 1000) / impact.peakPressure
@@ -174,7 +189,7 @@ export async function runDropCheck(actor: Actor, raw: unknown) {
             threshold_kpa: f.staticThresholdKpa!.value,
             source: f.staticThresholdKpa!.source,
           },
-    safe_heights: safeHeights(f, fruit, pad),
+    safe_heights: safeHeights(f, fruit, pad, limitsFor),
     series: series(fruit, surface, heightM),
     warnings,
     units: {
