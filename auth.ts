@@ -3,7 +3,7 @@ import CredentialsProvider from 'next-auth/providers/credentials';
 import { attemptSignIn } from '@/lib/auth/sign-in';
 import { signInContext } from '@/lib/auth/sign-in-context';
 import { endAllSessions, getSessionUser } from '@/lib/data/users';
-import { decodeSessionToken, encodeSessionToken } from '@/lib/auth/session-token';
+import { decodeSessionToken, encodeSessionToken, SESSION_MAX_AGE } from '@/lib/auth/session-token';
 import { clientAddress } from '@/lib/http/client-address';
 import { isHttpsApp } from '@/lib/http/origin';
 import { signInSchema } from '@/lib/validation/users';
@@ -17,8 +17,10 @@ class SessionRevoked extends Error {
 }
 
 export const authOptions: NextAuthOptions = {
-  session: { strategy: 'jwt', maxAge: 8 * 3600 },
-  jwt: { encode: encodeSessionToken, decode: decodeSessionToken },
+  session: { strategy: 'jwt', maxAge: SESSION_MAX_AGE },
+  // The token expires with the session: next-auth would otherwise seal it for 30 days whatever
+  // the cookie lifetime, so a copied cookie value would outlive the cookie.
+  jwt: { encode: encodeSessionToken, decode: decodeSessionToken, maxAge: SESSION_MAX_AGE },
   useSecureCookies: isHttpsApp(),
   pages: { signIn: '/sign-in', error: '/sign-in' },
   providers: [

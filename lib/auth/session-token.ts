@@ -11,6 +11,9 @@ import type { JWT, JWTDecodeParams, JWTEncodeParams } from 'next-auth/jwt';
  */
 const keys = new Map<string, Uint8Array>();
 
+/** How long a session cookie lasts from its last renewal, seconds (one working shift). */
+export const SESSION_MAX_AGE = 8 * 3600;
+
 function keyOf(secret: string | Buffer, salt: string): Uint8Array {
   const id = `${salt}\u0000${secret.toString()}`;
   let key = keys.get(id);
@@ -27,7 +30,7 @@ const now = () => Math.floor(Date.now() / 1000);
 export async function encodeSessionToken({
   token,
   secret,
-  maxAge = 30 * 24 * 3600,
+  maxAge = SESSION_MAX_AGE,
   salt = '',
 }: JWTEncodeParams): Promise<string> {
   return new EncryptJWT({ ...token })

@@ -6,6 +6,7 @@ import { authOptions } from '@/auth';
 import { getActiveActor } from '@/lib/data/users';
 import { UnauthenticatedError } from '@/lib/errors';
 import { assertCan, type Actor } from './actor';
+import { readSessionClaims } from './session-claims';
 import { can, type Capability } from './roles';
 
 /**
@@ -21,9 +22,18 @@ export const getCurrentActor = cache(async (): Promise<Actor | null> => {
   return getActiveActor(id, generation);
 });
 
+/**
+ * The signed-in user for route handlers and server actions: the session cookie decrypted once
+ * (readSessionClaims), then the account and its session generation read fresh from the database.
+ */
+const getRequestActor = cache(async (): Promise<Actor | null> => {
+  const claims = await readSessionClaims();
+  return claims ? getActiveActor(claims.id, claims.generation) : null;
+});
+
 /** For route handlers and server actions: the actor, or a 401/403 AppError. */
 export async function requireActor(capability?: Capability): Promise<Actor> {
-  const actor = await getCurrentActor();
+  const actor = await getRequestActor();
   if (!actor) throw new UnauthenticatedError();
   if (capability) assertCan(actor, capability);
   return actor;

@@ -1,9 +1,10 @@
 import { vi, beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import { NextRequest } from 'next/server';
-import { setRequestHeaders } from '../support/request';
+import { requestState, setRequestHeaders } from '../support/request';
 import { freshDatabase, userId } from '../support/db';
 import { ACCOUNTS, DEMO_PASSWORD } from '../support/accounts';
 import { cookiesOf, csrf, getNextAuth, postCredentials } from '../support/next-auth';
+import { decodeSessionToken } from '@/lib/auth/session-token';
 import { db } from '@/lib/db';
 import { getActiveActor, updateUser } from '@/lib/data/users';
 import * as me from '@/app/api/me/route';
@@ -123,5 +124,61 @@ describe('sessions end when they should', () => {
     expect(await meStatus(a)).toBe(401);
     expect(await meStatus(b)).toBe(401);
     expect(await meStatus(someoneElse)).toBe(200);
+  });
+});
+
+describe('the session cookie read of routes and actions', () => {
+  const NAME = 'next-auth.session-token';
+  const tokenOf = (cookie: string) =>
+    cookie
+      .split('; ')
+      .find((c) => c.startsWith(`${NAME}=`))!
+      .slice(NAME.length + 1);
+  beforeAll(async () => {
+    await freshDatabase();
+  });
+  beforeEach(async () => {
+    await db('sign_in_limits').delete();
+    vi.useRealTimers();
+  });
+
+  it('leaves a fresh cookie alone and renews one over an hour old, with the same claims', async () => {
+    const cookie = await signIn(ACCOUNTS.engineer);
+    expect(await meStatus(cookie)).toBe(200);
+    expect(requestState.setCookies).toEqual([]);
+    // Two hours on: inside the 8-hour lifetime, past the one-hour renewal age.
+    vi.useFakeTimers({ toFake: ['Date'], now: Date.now() + 2 * 3600e3 });
+    expect(await meStatus(cookie)).toBe(200);
+    expect(requestState.setCookies.map((c) => c.name)).toEqual([NAME]);
+    const renewed = requestState.setCookies[0];
+    expect(renewed.options).toMatchObject({ httpOnly: true, sameSite: 'lax', path: '/' });
+    const secret = process.env.NEXTAUTH_SECRET!;
+    const before = (await decodeSessionToken({ token: tokenOf(cookie), secret }))!;
+    const after = (await decodeSessionToken({ token: renewed.value, secret }))!;
+    expect({ sub: after.sub, gen: after.gen, role: after.role }).toEqual({
+      sub: before.sub,
+      gen: before.gen,
+      role: before.role,
+    });
+    // Whole seconds: the new expiry is 8 h from the faked now, two hours after the first.
+    expect(Number(after.exp) - Number(before.exp)).toBeGreaterThanOrEqual(2 * 3600 - 2);
+  });
+
+  it('refuses an expired cookie, a damaged one and none at all, and joins a chunked one', async () => {
+    const cookie = await signIn(ACCOUNTS.engineer);
+    const token = tokenOf(cookie);
+    const others = cookie
+      .split('; ')
+      .filter((c) => !c.startsWith(`${NAME}=`))
+      .join('; ');
+    expect(
+      await meStatus(`${others}; ${NAME}.0=${token.slice(0, 100)}; ${NAME}.1=${token.slice(100)}`),
+    ).toBe(200);
+    expect(await meStatus(`${others}; ${NAME}=${token.slice(0, -4)}AAAA`)).toBe(401);
+    expect(await meStatus(others)).toBe(401);
+    // Nine hours on: past the 8-hour lifetime (and next-auth's 15 s leeway).
+    vi.useFakeTimers({ toFake: ['Date'], now: Date.now() + 9 * 3600e3 });
+    expect(await meStatus(cookie)).toBe(401);
+    vi.useRealTimers();
   });
 });

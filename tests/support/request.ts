@@ -5,7 +5,11 @@ import { vi } from 'vitest';
  * next/headers outside a Next request: tests say which headers (and cookies) the current request
  * carries. next-auth's route handler and server actions read them from here.
  */
-export const requestState: { headers: Headers } = { headers: new Headers() };
+export const requestState: {
+  headers: Headers;
+  /** cookies the code under test set on its answer, in order */
+  setCookies: { name: string; value: string; options: Record<string, unknown> }[];
+} = { headers: new Headers(), setCookies: [] };
 
 function parseCookies(header: string | null) {
   return (header ?? '')
@@ -22,7 +26,13 @@ const fakeHeaders = {
   headers: async () => requestState.headers,
   cookies: async () => {
     const all = parseCookies(requestState.headers.get('cookie'));
-    return { get: (name: string) => all.find((c) => c.name === name), getAll: () => all };
+    return {
+      get: (name: string) => all.find((c) => c.name === name),
+      getAll: () => all,
+      set: (name: string, value: string, options: Record<string, unknown> = {}) => {
+        requestState.setCookies.push({ name, value, options });
+      },
+    };
   },
 };
 
@@ -41,4 +51,5 @@ require.cache[id] = stand;
 /** The headers the next server action or next-auth call sees (for example a foreign Origin). */
 export function setRequestHeaders(init: Record<string, string> = {}) {
   requestState.headers = new Headers(init);
+  requestState.setCookies = [];
 }

@@ -2,7 +2,7 @@ import { vi } from 'vitest';
 import { setRequestHeaders } from './request';
 
 /**
- * Only next-auth's cookie reading is replaced: tests say who is signed in, and everything after
+ * Only the session cookie reading is replaced (next-auth's for pages, ours for routes and actions): tests say who is signed in, and everything after
  * that (the database lookup of the user, the capability table, the handler) runs for real.
  * The mock stands for a freshly signed-in, valid token: it carries the user's current session
  * generation (tests/integration/sessions.test.ts runs the real token checks).
@@ -26,6 +26,19 @@ vi.mock('next-auth', async (importOriginal) => {
             user: { id: String(sessionState.userId), generation: await generationOf() },
             expires: new Date(Date.now() + 3600e3).toISOString(),
           },
+    ),
+  };
+});
+
+// The same stand-in for the cookie read of route handlers and server actions.
+vi.mock('@/lib/auth/session-claims', async (importOriginal) => {
+  const actual = await importOriginal<typeof import('@/lib/auth/session-claims')>();
+  return {
+    ...actual,
+    readSessionClaims: vi.fn(async () =>
+      sessionState.userId == null
+        ? null
+        : { id: sessionState.userId, generation: await generationOf() },
     ),
   };
 });
