@@ -1,3 +1,4 @@
+import os from 'node:os';
 import { isMainThread } from 'node:worker_threads';
 
 /** Task name → pure function (input, progress) → answer. Filled in as checks move to workers. */
@@ -5,8 +6,8 @@ export type Progress = (fraction: number) => void;
 type Task = (input: unknown, progress: Progress) => unknown;
 
 const TASKS: Record<string, Task> = {
-  /** A trivial task that proves the pool works end to end, and where it ran. */
-  echo: (input) => ({ input, mainThread: isMainThread }),
+  /** A trivial task that proves the pool works end to end, where it ran and at what priority. */
+  echo: (input) => ({ input, mainThread: isMainThread, nice: os.getPriority(0) }),
 };
 
 export type ComputeTask = string;

@@ -19,7 +19,7 @@ if (
   nice <= 19
 ) {
   try {
-    os.setPriority(0, nice);
+    os.setPriority(0, Math.max(os.getPriority(0), nice));
   } catch {
     // not permitted here: run at the normal priority
   }
