@@ -170,15 +170,14 @@ export function maxShearUnder(field: ShearField, force: Float64Array, radius: nu
     return { peak: null, reason: 'no stress sample lies under the contact' };
   }
   let count = 0;
-  const loaded = new Int32Array(nf);
-  for (let j = 0; j < nf; j++) if (force[j] !== 0) loaded[count++] = j;
-  return (
-    peakUnder(field, force, loaded.subarray(0, count), radius, PEAK_DEPTH * radius) ??
-    peakUnder(field, force, loaded.subarray(0, count), radius, Infinity) ?? {
-      peak: null,
-      reason: null,
-    }
-  );
+  const all = new Int32Array(nf);
+  for (let j = 0; j < nf; j++) if (force[j] !== 0) all[count++] = j;
+  const loaded = all.subarray(0, count);
+  // A sample lies under the contact (checked above), so the search over all depths finds one.
+  const peak =
+    peakUnder(field, force, loaded, radius, PEAK_DEPTH * radius) ??
+    peakUnder(field, force, loaded, radius, Infinity)!;
+  return { peak, reason: null };
 }
 
 /**
@@ -198,7 +197,7 @@ function peakUnder(
   loaded: Int32Array,
   radius: number,
   maxDepth: number,
-): ShearUnder | null {
+): ShearPeak | null {
   const nf = field.nodes;
   const inf = field.influence;
   let best: ShearPeak | null = null;
@@ -225,5 +224,5 @@ function peakUnder(
     if (best === null) best = { shear: 0, depth: 0, r: 0 };
     if (shear > best.shear) Object.assign(best, { shear, depth: field.depth[s], r: field.r[s] });
   }
-  return best && { peak: best, reason: null };
+  return best;
 }

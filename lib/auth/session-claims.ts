@@ -7,6 +7,15 @@ import { decodeSessionToken, encodeSessionToken, SESSION_MAX_AGE } from './sessi
 const RENEW_AFTER = 3600;
 
 const cookieName = () => `${isHttpsApp() ? '__Secure-' : ''}next-auth.session-token`;
+/** A cookie next-auth split into `name.0`, `name.1`, …, joined in order; undefined without one. */
+function joinChunks(all: { name: string; value: string }[], name: string): string | undefined {
+  const index = (c: { name: string }) => Number(c.name.slice(name.length + 1));
+  const chunks = all
+    .filter((c) => c.name.startsWith(`${name}.`) && /^\d+$/.test(c.name.slice(name.length + 1)))
+    .sort((a, b) => index(a) - index(b));
+  return chunks.map((c) => c.value).join('') || undefined;
+}
+
 const secret = () => process.env.NEXTAUTH_SECRET ?? process.env.AUTH_SECRET;
 
 /**
@@ -20,18 +29,15 @@ const secret = () => process.env.NEXTAUTH_SECRET ?? process.env.AUTH_SECRET;
 export async function readSessionClaims(): Promise<{ id: number; generation: number } | null> {
   const store = await cookies();
   const name = cookieName();
-  const chunks = store
-    .getAll()
-    .filter((c) => c.name.startsWith(`${name}.`) && /^\d+$/.test(c.name.slice(name.length + 1)))
-    .sort((a, b) => Number(a.name.slice(name.length + 1)) - Number(b.name.slice(name.length + 1)));
-  const raw = store.get(name)?.value ?? (chunks.map((c) => c.value).join('') || undefined);
+  const whole = store.get(name)?.value;
+  const raw = whole ?? joinChunks(store.getAll(), name);
   const key = secret();
   if (!raw || !key) return null;
   const token = await decodeSessionToken({ token: raw, secret: key }).catch(() => null);
   const id = Number(token?.sub);
   const generation = Number(token?.gen);
   if (!token || !Number.isInteger(id) || id <= 0 || !Number.isInteger(generation)) return null;
-  if (Math.floor(Date.now() / 1000) - Number(token.iat ?? 0) > RENEW_AFTER && !chunks.length) {
+  if (whole && Math.floor(Date.now() / 1000) - Number(token.iat ?? 0) > RENEW_AFTER) {
     const claims = { ...token };
     for (const stamp of ['iat', 'exp', 'jti'] as const) delete claims[stamp];
     const value = await encodeSessionToken({ token: claims, secret: key, maxAge: SESSION_MAX_AGE });

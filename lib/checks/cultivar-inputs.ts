@@ -27,6 +27,19 @@ export interface PinnedCultivar {
 }
 
 /** The published revision of a cultivar, or a 400 on the `cultivar` field. */
+/** The pinned revision as a check's answer names it (so an assessment can reproduce it). */
+export function pinnedSummary(p: PinnedCultivar | null) {
+  return (
+    p && {
+      cultivar: p.slug,
+      name: p.name,
+      commodity: p.commodity,
+      revision_id: p.revisionId,
+      revision_number: p.revisionNumber,
+    }
+  );
+}
+
 export async function pinCultivar(actor: Actor, slug: string): Promise<PinnedCultivar> {
   const record = await getCultivar(actor, slug).catch(() => null);
   if (!record) {

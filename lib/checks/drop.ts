@@ -10,6 +10,7 @@ import {
   surfaceSI,
   type FruitSI,
 } from './drop-model';
+import { pinnedSummary } from './cultivar-inputs';
 import { resolveFruit, type ResolvedFruit } from './resolve-fruit';
 import { DROP_SURFACE_KEYS, DROP_SURFACES, type DropSurface } from './surfaces';
 import { verdictOf } from './verdict';
@@ -138,13 +139,7 @@ export async function runDropCheck(actor: Actor, raw: unknown) {
   const margin = dynamicMargin ?? staticMargin;
   return {
     check: 'drop' as const,
-    pinned: f.pinned && {
-      cultivar: f.pinned.slug,
-      name: f.pinned.name,
-      commodity: f.pinned.commodity,
-      revision_id: f.pinned.revisionId,
-      revision_number: f.pinned.revisionNumber,
-    },
+    pinned: pinnedSummary(f.pinned),
     inputs_used: {
       modulus_mpa: f.modulusMpa,
       poisson_ratio: f.poisson,

@@ -4,6 +4,7 @@ import { runTask } from '@/lib/compute/pool';
 import type { SqueezeTaskResult } from '@/lib/compute/squeeze-task';
 import { parseInput } from '@/lib/validation/parse';
 import { squeezeCheckSchema, type SqueezeCheckInput } from '@/lib/validation/checks';
+import { pinnedSummary } from './cultivar-inputs';
 import { FACING_PRESETS } from './facings';
 import { resolveSqueeze, sweepDiameters, type ResolvedSqueeze } from './squeeze-inputs';
 import type { Verdict } from './verdict';
@@ -15,15 +16,8 @@ import type { Verdict } from './verdict';
  */
 /** The figures resolved on the main thread that open the answer: the pinned revision, inputs used. */
 function headOf(r: ResolvedSqueeze, input: SqueezeCheckInput) {
-  const p = r.fruit.pinned;
   return {
-    pinned: p && {
-      cultivar: p.slug,
-      name: p.name,
-      commodity: p.commodity,
-      revision_id: p.revisionId,
-      revision_number: p.revisionNumber,
-    },
+    pinned: pinnedSummary(r.fruit.pinned),
     inputs_used: {
       modulus_mpa: r.fruit.modulusMpa,
       poisson_ratio: r.fruit.poisson,

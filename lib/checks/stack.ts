@@ -2,7 +2,7 @@ import 'server-only';
 import type { Actor } from '@/lib/auth/actor';
 import { parseInput } from '@/lib/validation/parse';
 import { stackCheckSchema } from '@/lib/validation/checks';
-import { enteredValue, publishedValue, type UsedValue } from './cultivar-inputs';
+import { enteredValue, pinnedSummary, publishedValue, type UsedValue } from './cultivar-inputs';
 import { resolveFruit } from './resolve-fruit';
 import { deepestSafeFill, stackAt, type StackSI } from './stack-model';
 import { verdictOf } from './verdict';
@@ -92,13 +92,7 @@ export async function runStackCheck(actor: Actor, raw: unknown) {
   }
   return {
     check: 'stack' as const,
-    pinned: p && {
-      cultivar: p.slug,
-      name: p.name,
-      commodity: p.commodity,
-      revision_id: p.revisionId,
-      revision_number: p.revisionNumber,
-    },
+    pinned: pinnedSummary(p),
     inputs_used: {
       modulus_mpa: f.modulusMpa,
       poisson_ratio: f.poisson,

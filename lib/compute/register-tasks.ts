@@ -2,14 +2,11 @@
 import {
   probabilityTask,
   squeezeCheckTask,
-  squeezeTask,
   type ProbabilityTaskInput,
   type SqueezeCheckTaskInput,
-  type SqueezeTaskInput,
 } from './squeeze-task';
 import { registerTask } from './task-table';
 
-registerTask('squeeze', (input) => squeezeTask(input as SqueezeTaskInput));
 registerTask('squeeze-check', (input) => squeezeCheckTask(input as SqueezeCheckTaskInput));
 registerTask('squeeze-probability', (input, progress) =>
   probabilityTask(input as ProbabilityTaskInput, progress),
