@@ -11,6 +11,7 @@ const nextConfig = {
     'rate-limiter-flexible',
     '@react-pdf/renderer',
     'piscina',
+    'esbuild',
   ],
   // Enables forbidden() and app/forbidden.tsx for the 403 page.
   experimental: { authInterrupts: true },

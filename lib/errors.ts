@@ -69,3 +69,11 @@ export class RateLimitError extends AppError {
     this.retryAfterSeconds = retryAfterSeconds;
   }
 }
+
+/** The client went away before the answer was ready; the work was dropped or stopped. */
+export class AbortedError extends AppError {
+  constructor() {
+    // 499: the status proxies log for a request its client closed; the client never reads it.
+    super(499, 'aborted', 'The request was abandoned before its answer was ready.');
+  }
+}

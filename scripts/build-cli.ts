@@ -17,7 +17,7 @@ export async function buildCli(outdir = path.join(root, 'dist')): Promise<string
       tenderline: path.join(root, 'scripts/fem.ts'),
       bench: path.join(root, 'scripts/bench.ts'),
       // The app's worker threads for the model (lib/compute/pool.ts loads it).
-      'compute-worker': path.join(root, 'lib/compute/worker-entry.ts'),
+      'compute-worker': path.join(root, 'lib/checks/worker.ts'),
     },
     outdir,
     outExtension: { '.js': '.mjs' },

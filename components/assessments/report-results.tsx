@@ -3,11 +3,11 @@ import { Measure } from '@/components/units/measure';
 import { DropCharts } from '@/components/checks/drop-charts';
 import { SlipMap } from '@/components/checks/slip-map';
 import { SqueezeCharts } from '@/components/checks/squeeze-charts';
-import type { SqueezeCheckResult } from '@/lib/checks/squeeze';
+import type { SqueezeCheckResult } from '@/lib/checks/squeeze/check';
 import { StackCharts } from '@/components/checks/stack-charts';
 import { CheckWarnings, UsedValues, type UsedValueView } from '@/components/checks/used-values';
-import type { DropCheckResult } from '@/lib/checks/drop';
-import type { StackCheckResult } from '@/lib/checks/stack';
+import type { DropCheckResult } from '@/lib/checks/drop/check';
+import type { StackCheckResult } from '@/lib/checks/stack/check';
 
 type Used = Record<string, UsedValueView | null | number | string>;
 const LABELS: Record<string, string> = {

@@ -1,7 +1,7 @@
 'use client';
 
 import { useState } from 'react';
-import type { DropCheckResult } from '@/lib/checks/drop';
+import type { DropCheckResult } from '@/lib/checks/drop/check';
 import { DROP_SURFACE_KEYS, DROP_SURFACES, type DropSurface } from '@/lib/checks/surfaces';
 import { CultivarSelect, type CultivarOption } from './check-fields';
 import {

@@ -1,7 +1,7 @@
 'use client';
 
 import { useUnits } from '@/components/units/units-provider';
-import type { SqueezeCheckResult } from '@/lib/checks/squeeze';
+import type { SqueezeCheckResult } from '@/lib/checks/squeeze/check';
 
 type Slip = NonNullable<SqueezeCheckResult['slip']>;
 const STATE_COLOUR = { stick: '#2f5f2c', slip: '#d97706', open: '#d6d3d1' } as const;

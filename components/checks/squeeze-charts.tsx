@@ -12,7 +12,7 @@ import {
   YAxis,
 } from 'recharts';
 import { useUnits } from '@/components/units/units-provider';
-import type { SqueezeCheckResult } from '@/lib/checks/squeeze';
+import type { SqueezeCheckResult } from '@/lib/checks/squeeze/check';
 
 const tick = (v: number) => String(Number(v.toPrecision(3)));
 type Row = Record<string, number | null>;

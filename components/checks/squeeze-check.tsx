@@ -2,7 +2,7 @@
 
 import { useState } from 'react';
 import type { FacingPreset } from '@/lib/checks/facings';
-import type { SqueezeCheckResult } from '@/lib/checks/squeeze';
+import type { SqueezeCheckResult } from '@/lib/checks/squeeze/check';
 import { useUnits } from '@/components/units/units-provider';
 import type { CultivarOption } from './check-fields';
 import { initialText } from './initial-text';

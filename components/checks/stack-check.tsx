@@ -1,7 +1,7 @@
 'use client';
 
 import { useState } from 'react';
-import type { StackCheckResult } from '@/lib/checks/stack';
+import type { StackCheckResult } from '@/lib/checks/stack/check';
 import { CultivarSelect, type CultivarOption } from './check-fields';
 import {
   CheckFormError,

@@ -1,9 +1,9 @@
 import 'server-only';
 import type { Actor } from '@/lib/auth/actor';
 import type { CheckNameValue } from './check-names';
-import { runDropCheck } from './drop';
-import { runSqueezeCheck } from './squeeze';
-import { runStackCheck } from './stack';
+import { runDropCheck } from './drop/check';
+import { runSqueezeCheck } from './squeeze/check';
+import { runStackCheck } from './stack/check';
 
 type Runner = (actor: Actor, input: unknown) => Promise<{ pinned: unknown }>;
 

@@ -1,54 +1,113 @@
-import 'server-only';
-import fs from 'node:fs';
-import os from 'node:os';
-import path from 'node:path';
 import { MessageChannel } from 'node:worker_threads';
 import { Piscina } from 'piscina';
-import './register-tasks';
-import { runComputeTask, type Progress } from './task-table';
+import { AbortedError } from '@/lib/errors';
+import type { Progress, TaskAnswer, TaskInput, TaskTable } from './task-table';
+import { unwrap, type Outcome } from './wire';
+
+export interface PoolOptions<T extends TaskTable> {
+  /** The built worker module, or how to build it (once, on the first task). */
+  filename: string | (() => Promise<string>);
+  threads: number;
+  /** Runs the tasks on the calling thread instead of in workers (tests that ask for it). */
+  inline?: T;
+}
+
+export interface RunOptions {
+  onProgress?: Progress;
+  /** Aborting it drops a queued task, or stops the thread running it. */
+  signal?: AbortSignal;
+  /**
+   * Tasks with the same key go to the same thread while it is free, so a thread's in-memory
+   * cache (the condensed unit bodies of the model) serves them instead of being rebuilt by each.
+   */
+  affinity?: string;
+}
+
+/** FNV-1a hash of a string, as a whole number ≥ 0. */
+function hash(text: string): number {
+  let h = 0x811c9dc5;
+  for (let i = 0; i < text.length; i++) h = Math.imul(h ^ text.charCodeAt(i), 0x01000193);
+  return h >>> 0;
+}
 
 /**
- * The model is CPU-bound: solves run in worker threads so the server keeps answering pages and
- * other requests while they compute. One thread per core (at least one); requests queue beyond.
- * Without the built worker (development without `npm run build:cli`, or unit tests) the task
- * runs inline on the calling thread.
+ * Model work off the main thread. One single-thread piscina pool per thread, so a task can be
+ * sent to the thread whose cache holds its body: the key's own thread when it is idle, else an
+ * idle one, else (all busy) the key's own queue.
  */
-const WORKER = path.join(process.cwd(), 'dist', 'compute-worker.mjs');
-const globalForPool = globalThis as unknown as { tenderlinePool?: Piscina | null };
+export class ComputePool<T extends TaskTable> {
+  private lanes: Piscina[] = [];
+  private ready: Promise<Piscina[]> | null = null;
+  private readonly busy: number[];
+  private readonly inline?: T;
 
-/** Worker threads: TENDERLINE_COMPUTE_THREADS when set (a whole number ≥ 1), else one per core. */
-function threads(): number {
-  const set = Number(process.env.TENDERLINE_COMPUTE_THREADS);
-  return Number.isInteger(set) && set >= 1 ? set : Math.max(1, os.availableParallelism());
-}
+  constructor(private readonly options: PoolOptions<T>) {
+    this.inline = options.inline;
+    this.busy = Array.from({ length: Math.max(1, options.threads) }, () => 0);
+  }
 
-function pool(): Piscina | null {
-  if (globalForPool.tenderlinePool !== undefined) return globalForPool.tenderlinePool;
-  const inline = process.env.TENDERLINE_INLINE_COMPUTE === '1' || !fs.existsSync(WORKER);
-  globalForPool.tenderlinePool = inline
-    ? null
-    : new Piscina({
-        filename: WORKER,
-        maxThreads: threads(),
-        idleTimeout: 60_000,
-      });
-  return globalForPool.tenderlinePool;
-}
+  private start(): Promise<Piscina[]> {
+    this.ready ??= (async () => {
+      const f = this.options.filename;
+      const filename = typeof f === 'string' ? f : await f();
+      this.lanes = this.busy.map(
+        () => new Piscina({ filename, minThreads: 0, maxThreads: 1, idleTimeout: 60_000 }),
+      );
+      return this.lanes;
+    })();
+    return this.ready;
+  }
 
-/** Run a task off the main thread (or inline), with progress from 0 to 1. */
-export async function runTask<T>(task: string, input: unknown, onProgress?: Progress): Promise<T> {
-  const p = pool();
-  if (!p) return (await runComputeTask(task, input, onProgress ?? (() => {}))) as T;
-  // A progress channel only when someone listens: making and transferring one costs the main
-  // thread about half a millisecond a task.
-  if (!onProgress) return (await p.run({ task, input })) as T;
-  const { port1, port2 } = new MessageChannel();
-  port1.on('message', (m: { progress?: number }) => {
-    if (typeof m.progress === 'number') onProgress(m.progress);
-  });
-  try {
-    return (await p.run({ task, input, port: port2 }, { transferList: [port2] })) as T;
-  } finally {
-    port1.close();
+  private lane(affinity: string | undefined): number {
+    const own = affinity === undefined ? -1 : hash(affinity) % this.busy.length;
+    if (own >= 0 && this.busy[own] === 0) return own;
+    const idle = this.busy.indexOf(0);
+    if (idle >= 0) return idle;
+    if (own >= 0) return own;
+    return this.busy.indexOf(Math.min(...this.busy));
+  }
+
+  /** Run task `name`; a refusal of the model comes back as its typed error. */
+  async run<K extends keyof T & string>(
+    name: K,
+    input: TaskInput<T, K>,
+    options: RunOptions = {},
+  ): Promise<TaskAnswer<T, K>> {
+    if (options.signal?.aborted) throw new AbortedError();
+    if (this.inline) {
+      const progress = options.onProgress ?? (() => {});
+      return (await this.inline[name](input, progress)) as TaskAnswer<T, K>;
+    }
+    const lanes = await this.start();
+    const i = this.lane(options.affinity);
+    this.busy[i]++;
+    // A progress channel only when someone listens: making and transferring one costs the main
+    // thread about half a millisecond a task.
+    const channel = options.onProgress ? new MessageChannel() : null;
+    channel?.port1.on('message', (m: { progress?: number }) => {
+      if (typeof m.progress === 'number') options.onProgress?.(m.progress);
+    });
+    try {
+      const outcome = (await lanes[i].run(
+        { input, ...(channel && { port: channel.port2 }) },
+        {
+          name,
+          signal: options.signal ?? null,
+          ...(channel && { transferList: [channel.port2] }),
+        },
+      )) as Outcome<TaskAnswer<T, K>>;
+      return unwrap(outcome);
+    } catch (error) {
+      if (options.signal?.aborted) throw new AbortedError();
+      throw error;
+    } finally {
+      this.busy[i]--;
+      channel?.port1.close();
+    }
+  }
+
+  /** Stops every thread (tests, shutdown). */
+  async close(): Promise<void> {
+    await Promise.all(this.lanes.map((l) => l.close({ force: true })));
   }
 }

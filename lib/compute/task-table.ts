@@ -1,23 +1,28 @@
-import os from 'node:os';
-import { isMainThread } from 'node:worker_threads';
+/**
+ * The contract between the code that asks for model work and the worker threads that do it.
+ * A task table maps a task name to a pure function (input, progress) → answer; the worker module
+ * exports one named function per task (piscina's `name` option picks it), and the same table
+ * runs inline where worker threads are switched off.
+ */
+import type { Outcome } from './wire';
 
-/** Task name → pure function (input, progress) → answer. Filled in as checks move to workers. */
+/** Reports the fraction of a long task that is done, 0 … 1. */
 export type Progress = (fraction: number) => void;
-type Task = (input: unknown, progress: Progress) => unknown;
 
-const TASKS: Record<string, Task> = {
-  /** A trivial task that proves the pool works end to end, where it ran and at what priority. */
-  echo: (input) => ({ input, mainThread: isMainThread, nice: os.getPriority(0) }),
+// `any` in the constraint only: every concrete table keeps its own input and answer types.
+// eslint-disable-next-line @typescript-eslint/no-explicit-any
+export type TaskTable = Record<string, (input: any, progress: Progress) => unknown>;
+
+export type TaskInput<T extends TaskTable, K extends keyof T> = Parameters<T[K]>[0];
+export type TaskAnswer<T extends TaskTable, K extends keyof T> = Awaited<ReturnType<T[K]>>;
+
+/** What a worker function receives: the input, and a port for `{ progress }` messages. */
+export interface TaskMessage<I> {
+  input: I;
+  port?: { postMessage(value: unknown): void };
+}
+
+/** The worker module's shape for a table: one named function per task, answering an outcome. */
+export type WorkerModule<T extends TaskTable> = {
+  [K in keyof T]: (message: TaskMessage<TaskInput<T, K>>) => Promise<Outcome<TaskAnswer<T, K>>>;
 };
-
-export type ComputeTask = string;
-
-export function registerTask(name: string, task: Task): void {
-  TASKS[name] = task;
-}
-
-export async function runComputeTask(name: string, input: unknown, progress: Progress) {
-  const task = Object.hasOwn(TASKS, name) ? TASKS[name] : undefined;
-  if (!task) throw new Error(`unknown compute task ${name}`);
-  return task(input, progress);
-}

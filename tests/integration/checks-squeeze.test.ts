@@ -122,7 +122,19 @@ describe('squeeze bad input: 400 with a field message', () => {
     ],
     ['unknown facing', { ...FRUIT, maxTravelMm: 1, facing: 'velvet' }, 'facing'],
     ['unknown cultivar', { cultivar: 'no-such', maxTravelMm: 1 }, 'cultivar'],
-    ['travel beyond the model', { ...FRUIT, maxTravelMm: 20 }, 'travel'],
+    // The model's own refusals, named by the form's field (they used to say `travel`, and in a
+    // worker thread lost their type altogether and answered 500).
+    ['travel beyond the model', { ...FRUIT, maxTravelMm: 20 }, 'maxTravelMm'],
+    [
+      'a custom 70 mm fruit at 20 mm travel',
+      { ...FRUIT, diameterMm: 70, maxTravelMm: 20 },
+      'maxTravelMm',
+    ],
+    [
+      'a 20 mm axial diameter on a 70 mm fruit',
+      { ...FRUIT, axialMm: 20, diameterMm: 70, maxTravelMm: 1 },
+      'axialMm',
+    ],
   ];
   for (const [name, body, field] of cases) {
     it(name, async () => {
@@ -132,6 +144,27 @@ describe('squeeze bad input: 400 with a field message', () => {
       expect(json.fieldErrors?.[field]?.[0], JSON.stringify(json)).toMatch(/\w/);
     });
   }
+  it('the travel limit is stated for this fruit: 15 % of the axial radius', async () => {
+    // 80 mm fruit: axial radius 40 mm, 15 % of it 6 mm (the model's small-strain cap).
+    const res = await post(squeeze, { ...FRUIT, maxTravelMm: 20 });
+    const message = (await res.json()).fieldErrors.maxTravelMm[0];
+    expect(message).toMatch(/Maximum travel per pad/);
+    expect(message).toMatch(/at most 6 mm for this fruit/);
+  });
+  it('the seeded cherry tomato at the page’s default 2 mm travel: 400 on the travel, not 500', async () => {
+    // Forme, 24.95 mm across (Polat et al. 2007): 15 % of a 12.5 mm radius is 1.87 mm < 2 mm.
+    const res = await post(squeeze, {
+      cultivar: 'cherry-tomato-forme',
+      modulusMpa: 1,
+      poisson: 0.4,
+      padDiameterMm: 20,
+      padEdgeMm: 2,
+      maxTravelMm: 2,
+    });
+    const json = await res.json();
+    expect(res.status, JSON.stringify(json)).toBe(400);
+    expect(json.fieldErrors.maxTravelMm[0]).toMatch(/at most 1\.87 mm/);
+  });
   it('a cultivar with only a draft is refused', async () => {
     const [commodity] = await db('commodities').select('id').limit(1);
     await db('cultivars').insert({

@@ -8,6 +8,6 @@ if (process.env.TEST_DATABASE_URL) {
 }
 process.env.NEXTAUTH_SECRET ??= 'unit-test-secret';
 process.env.APP_URL = 'http://tenderline.test';
-// The model runs inline in tests (the built worker may be older than the code under test);
-// tests/lib/compute/pool.test.ts runs the real worker threads.
+// The model runs inline in the unit leg, so tests may spy on it; `npm run test:pool` runs the
+// check suites again against the real worker threads (the built dist/ bundle).
 process.env.TENDERLINE_INLINE_COMPUTE ??= '1';

@@ -3,7 +3,7 @@ import { CompareChart } from '@/components/assessments/compare-charts';
 import { PageTitle } from '@/components/ui/page-title';
 import { Measure } from '@/components/units/measure';
 import { requirePageActor } from '@/lib/auth/session';
-import type { SqueezeCheckResult } from '@/lib/checks/squeeze';
+import type { SqueezeCheckResult } from '@/lib/checks/squeeze/check';
 import { getAssessment, type Assessment } from '@/lib/data/assessments';
 import { NotFoundError, ValidationError } from '@/lib/errors';
 import { titleFor } from '@/lib/page-title';

@@ -1,6 +1,6 @@
 import { NextResponse } from 'next/server';
 import { requireActor } from '@/lib/auth/session';
-import { runStackCheck } from '@/lib/checks/stack';
+import { runStackCheck } from '@/lib/checks/stack/check';
 import { handle, readJson } from '@/lib/http/handler';
 
 /** The stack check: JSON inputs in mm, g, MPa, kPa; JSON results with unit-named keys. */

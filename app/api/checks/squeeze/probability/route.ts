@@ -1,5 +1,5 @@
 import { requireActor } from '@/lib/auth/session';
-import { streamSqueezeProbability } from '@/lib/checks/squeeze-probability';
+import { streamSqueezeProbability } from '@/lib/checks/squeeze/probability';
 import { handle, readJson } from '@/lib/http/handler';
 
 /**
@@ -8,7 +8,7 @@ import { handle, readJson } from '@/lib/http/handler';
  */
 export const POST = handle(async (request) => {
   const actor = await requireActor('checks:run');
-  const stream = await streamSqueezeProbability(actor, await readJson(request));
+  const stream = await streamSqueezeProbability(actor, await readJson(request), request.signal);
   return new Response(stream, {
     headers: { 'Content-Type': 'application/x-ndjson; charset=utf-8' },
   });

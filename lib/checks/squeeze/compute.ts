@@ -1,5 +1,5 @@
 /**
- * The squeeze check's model work, pure and off the main thread: the squeeze with its grip
+ * The squeeze check's model work, pure and run in a worker thread: the squeeze with its grip
  * point, the pad sweep, the slip map at the grip, and the Monte Carlo probability of bruising.
  */
 import {
@@ -13,7 +13,8 @@ import {
   type SqueezeInput,
   type Spreads,
 } from '@/fem';
-import { verdictOf } from '@/lib/checks/verdict';
+import { verdictOf } from '../verdict';
+import type { SqueezeHead } from './head';
 
 const r4 = (v: number | null | undefined) =>
   v == null || !Number.isFinite(v) ? null : Number(v.toPrecision(4));
@@ -78,27 +79,25 @@ export type SqueezeTaskResult = ReturnType<typeof squeezeTask>;
 
 export interface SqueezeCheckTaskInput extends SqueezeTaskInput {
   /** the figures the main thread resolved (pinned revision, inputs used), placed first */
-  head: Record<string, unknown>;
+  head: SqueezeHead;
   /** warnings of the inputs, after the model's own */
   inputWarnings: string[];
 }
 
-/**
- * The whole squeeze check answer as the JSON text of `{ result }`: built and serialised in the
- * worker, so the main thread neither copies the result object across threads nor serialises it
- * (together about half a millisecond of main-thread time a request).
- */
-export function squeezeCheckTask({ head, inputWarnings, ...task }: SqueezeCheckTaskInput): string {
+/** The whole squeeze check answer, built in the worker from the model run and the head. */
+export function squeezeCheckTask({ head, inputWarnings, ...task }: SqueezeCheckTaskInput) {
   const out = squeezeTask(task);
   const margin = out.model.liftability?.grip?.bruise_margin ?? null;
-  const result = {
+  return {
     check: 'squeeze' as const,
     ...head,
-    margin: margin === null ? null : { value: margin, basis: 'static', verdict: verdictOf(margin) },
+    margin:
+      margin === null
+        ? null
+        : { value: margin, basis: 'static' as const, verdict: verdictOf(margin) },
     ...out,
     warnings: [...out.model.warnings.map((w) => w.message), ...inputWarnings],
   };
-  return JSON.stringify({ result });
 }
 
 export interface ProbabilityTaskInput {

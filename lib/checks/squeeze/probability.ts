@@ -1,12 +1,14 @@
 import 'server-only';
 import type { MonteCarloResult } from '@/fem';
 import type { Actor } from '@/lib/auth/actor';
-import { runTask } from '@/lib/compute/pool';
 import { ValidationError } from '@/lib/errors';
 import { errorPayload } from '@/lib/http/error-map';
 import { parseInput } from '@/lib/validation/parse';
 import { probabilityCheckSchema, squeezeCheckSchema } from '@/lib/validation/checks';
-import { resolveSqueeze, spreadsOf } from './squeeze-inputs';
+import { checkPool } from '../compute';
+import { bodyKey } from './check';
+import { toFormError } from './fields';
+import { resolveSqueeze, spreadsOf } from './resolve';
 
 const r3 = (v: number | null) => (v === null ? null : Number(v.toPrecision(3)));
 
@@ -40,6 +42,7 @@ function summary(m: MonteCarloResult, without: string[]) {
 export async function streamSqueezeProbability(
   actor: Actor,
   raw: unknown,
+  signal?: AbortSignal,
 ): Promise<ReadableStream<Uint8Array>> {
   const { samples, seed, ...rest } = (raw ?? {}) as Record<string, unknown>;
   const options = parseInput(probabilityCheckSchema, { samples, seed });
@@ -58,19 +61,24 @@ export async function streamSqueezeProbability(
         controller.enqueue(encoder.encode(`${JSON.stringify(value)}\n`));
       let last = 0;
       try {
-        const result = await runTask<MonteCarloResult>(
-          'squeeze-probability',
+        const result = await checkPool().run(
+          'squeezeProbability',
           { base: resolved.model, spreads, samples: options.samples, seed: options.seed },
-          (f) => {
-            if (f - last >= 0.05 || f === 1) {
-              last = f;
-              send({ progress: Number(f.toFixed(3)) });
-            }
+          {
+            signal,
+            affinity: `${bodyKey(resolved.model)}|${input.mesh}`,
+            onProgress: (f) => {
+              if (f - last >= 0.05 || f === 1) {
+                last = f;
+                send({ progress: Number(f.toFixed(3)) });
+              }
+            },
           },
         );
         send({ result: summary(result, without) });
       } catch (error) {
-        const p = errorPayload(error);
+        if (signal?.aborted) return controller.close();
+        const p = errorPayload(toFormError(error, { axialMm: resolved.axialMm }));
         send({ error: p.message, fieldErrors: p.fieldErrors });
       }
       controller.close();

@@ -2,10 +2,10 @@ import 'server-only';
 import type { Actor } from '@/lib/auth/actor';
 import { parseInput } from '@/lib/validation/parse';
 import { stackCheckSchema } from '@/lib/validation/checks';
-import { enteredValue, pinnedSummary, publishedValue, type UsedValue } from './cultivar-inputs';
-import { resolveFruit } from './resolve-fruit';
-import { deepestSafeFill, stackAt, type StackSI } from './stack-model';
-import { verdictOf } from './verdict';
+import { enteredValue, pinnedSummary, publishedValue, type UsedValue } from '../cultivar-inputs';
+import { resolveFruit } from '../resolve-fruit';
+import { deepestSafeFill, stackAt, type StackSI } from './model';
+import { verdictOf } from '../verdict';
 
 const round = (x: number, digits = 4) => Number(x.toPrecision(digits));
 

@@ -3,17 +3,11 @@ import type { Actor } from '@/lib/auth/actor';
 import type { RevisionValue } from '@/lib/data/property-rows';
 import { parseInput } from '@/lib/validation/parse';
 import { dropCheckSchema } from '@/lib/validation/checks';
-import {
-  heightForEnergy,
-  heightForPressure,
-  impactAt,
-  surfaceSI,
-  type FruitSI,
-} from './drop-model';
-import { pinnedSummary } from './cultivar-inputs';
-import { resolveFruit, type ResolvedFruit } from './resolve-fruit';
-import { DROP_SURFACE_KEYS, DROP_SURFACES, type DropSurface } from './surfaces';
-import { verdictOf } from './verdict';
+import { heightForEnergy, heightForPressure, impactAt, surfaceSI, type FruitSI } from './model';
+import { pinnedSummary } from '../cultivar-inputs';
+import { resolveFruit, type ResolvedFruit } from '../resolve-fruit';
+import { DROP_SURFACE_KEYS, DROP_SURFACES, type DropSurface } from '../surfaces';
+import { verdictOf } from '../verdict';
 
 const round = (x: number, digits = 4) => Number(x.toPrecision(digits));
 

@@ -6,7 +6,7 @@ import {
   STANDARD_GRAVITY,
   type HertzImpactState,
 } from '@/fem';
-import { DROP_SURFACES, type DropSurface } from './surfaces';
+import { DROP_SURFACES, type DropSurface } from '../surfaces';
 
 /** The falling fruit in SI units. */
 export interface FruitSI {

@@ -1,0 +1,48 @@
+import 'server-only';
+import type { Actor } from '@/lib/auth/actor';
+import { parseInput } from '@/lib/validation/parse';
+import { squeezeCheckSchema } from '@/lib/validation/checks';
+import { checkPool } from '../compute';
+import type { TaskAnswer } from '@/lib/compute/task-table';
+import type { CheckTasks } from '../tasks';
+import { toFormError } from './fields';
+import { squeezeHead } from './head';
+import { resolveSqueeze, sweepDiameters } from './resolve';
+
+export type SqueezeCheckResult = TaskAnswer<CheckTasks, 'squeezeCheck'>;
+
+/** The cache key of the model's unit body (shape, ν, mesh): runs of one body share a thread. */
+export function bodyKey(m: { equatorialRadius: number; axialRadius?: number; poisson: number }) {
+  const aspect = (m.axialRadius ?? m.equatorialRadius) / m.equatorialRadius;
+  return `${aspect.toPrecision(6)}|${m.poisson}`;
+}
+
+/**
+ * The squeeze check: two opposed pads grip the fruit; the finite-element squeeze (in a worker
+ * thread) finds the travel at which the grip lifts it, and the bruise margin there. A refusal of
+ * the model becomes a 400 on the form's field.
+ */
+export async function runSqueezeCheck(
+  actor: Actor,
+  raw: unknown,
+  signal?: AbortSignal,
+): Promise<SqueezeCheckResult> {
+  const input = parseInput(squeezeCheckSchema, raw);
+  const r = await resolveSqueeze(actor, input);
+  try {
+    return await checkPool().run(
+      'squeezeCheck',
+      {
+        input: r.model,
+        sweep: input.sweep ? sweepDiameters(input, r.fruit.diameterMm.value) : null,
+        head: squeezeHead(r, input),
+        inputWarnings: r.fruit.staticThresholdKpa
+          ? []
+          : ['No static bruise threshold: enter one to get a bruise margin.'],
+      },
+      { signal, affinity: `${bodyKey(r.model)}|${input.mesh}` },
+    );
+  } catch (error) {
+    throw toFormError(error, { axialMm: r.axialMm });
+  }
+}

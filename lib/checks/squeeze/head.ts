@@ -1,0 +1,31 @@
+import type { SqueezeCheckInput } from '@/lib/validation/checks';
+import { pinnedSummary } from '../cultivar-inputs';
+import { FACING_PRESETS } from '../facings';
+import type { ResolvedSqueeze } from './resolve';
+
+/** The figures resolved on the main thread that open the answer: the pinned revision, inputs used. */
+export function squeezeHead(r: ResolvedSqueeze, input: SqueezeCheckInput) {
+  return {
+    pinned: pinnedSummary(r.fruit.pinned),
+    inputs_used: {
+      modulus_mpa: r.fruit.modulusMpa,
+      poisson_ratio: r.fruit.poisson,
+      diameter_mm: r.fruit.diameterMm,
+      axial_diameter_mm: r.axialMm,
+      mass_g: r.fruit.massG,
+      density_kg_m3: r.density,
+      friction: r.friction,
+      static_bruise_threshold_kpa: r.fruit.staticThresholdKpa,
+      failure_stress_kpa: r.failureStress,
+      pad_diameter_mm: input.padDiameterMm ?? null,
+      pad_edge_mm: input.padEdgeMm ?? null,
+      facing: input.facing,
+      facing_basis: FACING_PRESETS[input.facing].basis,
+      safety_factor: input.safetyFactor,
+      acceleration_m_s2: input.accelerationMs2,
+      max_travel_mm: input.maxTravelMm,
+    },
+  };
+}
+
+export type SqueezeHead = ReturnType<typeof squeezeHead>;
