@@ -4,6 +4,7 @@
  * magnitudes. Every function documents its units and sign conventions where it is declared.
  */
 export { STANDARD_GRAVITY } from './constants';
+export { MODEL_VERSION } from './version';
 export { FemConvergenceError, FemInputError } from './errors';
 export {
   BODY_MODELS,

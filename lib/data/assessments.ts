@@ -1,11 +1,12 @@
 import 'server-only';
+import type { Knex } from 'knex';
 import { db } from '@/lib/db';
 import { assertCan, type Actor } from '@/lib/auth/actor';
 import { can } from '@/lib/auth/roles';
 import { NotFoundError } from '@/lib/errors';
-import { CHECK_RUNNERS, type CheckName } from '@/lib/checks/registry';
+import type { CheckNameValue } from '@/lib/validation/check-names';
 import { parseInput } from '@/lib/validation/parse';
-import { assessmentListSchema, assessmentSchema } from '@/lib/validation/assessments';
+import { assessmentListSchema } from '@/lib/validation/assessments';
 import { recordAudit } from './audit-trail';
 
 interface Pinned {
@@ -17,7 +18,7 @@ export interface Assessment {
   id: number;
   ownerId: number;
   ownerName: string;
-  check: CheckName;
+  check: CheckNameValue;
   title: string;
   notes: string | null;
   inputs: Record<string, unknown>;
@@ -30,6 +31,10 @@ export interface Assessment {
   newerRevision: { id: number; number: number } | null;
   version: number;
   parentId: number | null;
+  /** The first assessment of this one's chain of re-runs (itself for a first version). */
+  rootId: number;
+  modelVersion: string;
+  resultSchema: string;
   createdAt: string;
 }
 
@@ -57,7 +62,7 @@ function toAssessment(r: Record<string, unknown>): Assessment {
     id: Number(r.id),
     ownerId: Number(r.owner_id),
     ownerName: String(r.owner_name),
-    check: r.check as CheckName,
+    check: r.check as CheckNameValue,
     title: String(r.title),
     notes: (r.notes as string) ?? null,
     inputs: JSON.parse(String(r.inputs)),
@@ -69,67 +74,101 @@ function toAssessment(r: Record<string, unknown>): Assessment {
     newerRevision: newer ? { id: Number(r.now_id), number: Number(r.now_number) } : null,
     version: Number(r.version),
     parentId: r.parent_id == null ? null : Number(r.parent_id),
+    rootId: Number(r.root_id ?? r.id),
+    modelVersion: String(r.model_version),
+    resultSchema: String(r.result_schema),
     createdAt: new Date(r.created_at as string).toISOString(),
   };
 }
 
-/** Run the check on the server (never trusting a client's numbers) and keep it with its data. */
-async function saveRun(
-  actor: Actor,
-  fields: {
-    check: CheckName;
-    title: string;
-    notes: string | null;
-    inputs: Record<string, unknown>;
-    version: number;
-    parentId: number | null;
-  },
-) {
-  const results = (await CHECK_RUNNERS[fields.check](actor, fields.inputs)) as {
-    pinned: Pinned | null;
-  };
-  return db.transaction(async (trx) => {
-    const cultivar = results.pinned
-      ? await trx('cultivars').where({ slug: results.pinned.cultivar }).first()
-      : null;
-    const [row] = await trx('assessments')
-      .insert({
-        owner_id: actor.id,
-        check: fields.check,
-        title: fields.title,
-        notes: fields.notes,
-        inputs: JSON.stringify(fields.inputs),
-        results: JSON.stringify(results),
-        cultivar_id: cultivar?.id ?? null,
-        revision_id: results.pinned?.revision_id ?? null,
-        version: fields.version,
-        parent_id: fields.parentId,
-        created_at: new Date(),
-      })
-      .returning('id');
-    const id = typeof row === 'object' ? Number(row.id) : Number(row);
-    await recordAudit(trx, {
-      actorId: actor.id,
-      action: fields.parentId ? 'assessment.rerun' : 'assessment.create',
-      entity: 'assessment',
-      entityId: id,
-      detail: { check: fields.check, revision: results.pinned?.revision_id ?? null },
-    });
-    return id;
-  });
+/** What a check run gives an assessment to keep: its result and how it was made. */
+export interface AssessmentRun {
+  check: CheckNameValue;
+  inputs: Record<string, unknown>;
+  results: { pinned: Pinned | null };
+  modelVersion: string;
+  resultSchema: string;
 }
 
-export async function createAssessment(actor: Actor, input: unknown): Promise<number> {
+export interface AssessmentMeta {
+  title: string;
+  notes: string | null;
+  /** The assessment this run re-runs: the new row becomes the next version of its chain. */
+  rerunOf?: Assessment;
+}
+
+function isUniqueViolation(error: unknown): boolean {
+  const e = error as { code?: string; message?: string } | null;
+  return (
+    e?.code === '23505' ||
+    e?.code === 'SQLITE_CONSTRAINT_UNIQUE' ||
+    /UNIQUE constraint failed/.test(e?.message ?? '')
+  );
+}
+
+/**
+ * Keep a check run as an assessment, or as the next version of `rerunOf`'s chain. The version
+ * is read and written in one transaction, and the unique (root_id, version) constraint refuses
+ * a second writer that read the same number: that writer tries again with the next one.
+ */
+export async function insertAssessment(
+  actor: Actor,
+  run: AssessmentRun,
+  meta: AssessmentMeta,
+): Promise<number> {
   assertCan(actor, 'assessments:manage-own');
-  const v = parseInput(assessmentSchema, input);
-  return saveRun(actor, {
-    check: v.check,
-    title: v.title,
-    notes: v.notes ?? null,
-    inputs: v.inputs,
-    version: 1,
-    parentId: null,
+  for (let attempt = 1; ; attempt++) {
+    try {
+      return await db.transaction((trx) => insertRow(trx, actor, run, meta));
+    } catch (error) {
+      if (!isUniqueViolation(error) || attempt >= 5) throw error;
+    }
+  }
+}
+
+async function insertRow(
+  trx: Knex.Transaction,
+  actor: Actor,
+  run: AssessmentRun,
+  meta: AssessmentMeta,
+): Promise<number> {
+  const pinned = run.results.pinned;
+  const cultivar = pinned ? await trx('cultivars').where({ slug: pinned.cultivar }).first() : null;
+  const root = meta.rerunOf ? meta.rerunOf.rootId : null;
+  let version = 1;
+  if (root !== null) {
+    const [{ max }] = await trx('assessments').where('root_id', root).max({ max: 'version' });
+    version = Number(max ?? 0) + 1;
+  }
+  const [row] = await trx('assessments')
+    .insert({
+      owner_id: actor.id,
+      check: run.check,
+      title: meta.title,
+      notes: meta.notes,
+      inputs: JSON.stringify(run.inputs),
+      results: JSON.stringify(run.results),
+      model_version: run.modelVersion,
+      result_schema: run.resultSchema,
+      cultivar_id: cultivar?.id ?? null,
+      revision_id: pinned?.revision_id ?? null,
+      version,
+      parent_id: meta.rerunOf?.id ?? null,
+      root_id: root,
+      created_at: new Date(),
+    })
+    .returning('id');
+  const id = typeof row === 'object' ? Number(row.id) : Number(row);
+  // A first version is the root of its own chain.
+  if (root === null) await trx('assessments').where({ id }).update({ root_id: id });
+  await recordAudit(trx, {
+    actorId: actor.id,
+    action: meta.rerunOf ? 'assessment.rerun' : 'assessment.create',
+    entity: 'assessment',
+    entityId: id,
+    detail: { check: run.check, revision: pinned?.revision_id ?? null, version },
   });
+  return id;
 }
 
 /** One assessment: its owner's, or anyone's for a role that reads all. */
@@ -150,21 +189,4 @@ export async function listAssessments(actor: Actor, filter: unknown = {}): Promi
   if (f.check) q.where('a.check', f.check);
   if (f.cultivar) q.where('c.slug', f.cultivar);
   return (await q).map(toAssessment);
-}
-
-/** Re-run with the same inputs on today's published data: a new version beside the old. */
-export async function rerunAssessment(actor: Actor, id: number): Promise<number> {
-  const old = await getAssessment(actor, id);
-  const [{ max }] = await db('assessments')
-    .where('id', id)
-    .orWhere('parent_id', id)
-    .max({ max: 'version' });
-  return saveRun(actor, {
-    check: old.check,
-    title: old.title,
-    notes: old.notes,
-    inputs: old.inputs,
-    version: Number(max ?? old.version) + 1,
-    parentId: old.id,
-  });
 }

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { CHECK_NAMES_LIST } from '@/lib/checks/check-names';
+import { CHECK_NAMES_LIST } from './check-names';
 
 export const assessmentSchema = z
   .object({

@@ -101,6 +101,41 @@ describe('assessments pin their data', () => {
     ).toBe(2);
   });
 
+  it('stamps every result with the model version and the result schema it was made with', async () => {
+    const row = await db('assessments').where({ id: first }).first();
+    // Written out, not read from the code: the version string of fem/version.ts at this commit
+    // and the drop check's first result schema.
+    expect(row.model_version).toMatch(/^\d{4}\.\d{1,2}\.\d+$/);
+    expect(row.result_schema).toBe('drop/1');
+    const { assessment } = await (await one.GET(req('GET'), ctx(first))).json();
+    expect(assessment).toMatchObject({ modelVersion: row.model_version, resultSchema: 'drop/1' });
+  });
+
+  it('numbers re-runs within their chain: a re-run of v2 is v3, and parallel re-runs never share a number', async () => {
+    const v2 = (await db('assessments').where({ parent_id: first }).first()).id;
+    const v3 = (await (await rerun.POST(req('POST', {}), ctx(v2))).json()).assessment;
+    expect(v3).toMatchObject({ version: 3, parentId: v2, rootId: first });
+    // Before: the next number was read outside the transaction and only among the direct
+    // children, so four re-runs at once could all become the same version.
+    const answers = await Promise.all(
+      [first, v2, v3.id, first].map((id) => rerun.POST(req('POST', {}), ctx(id))),
+    );
+    expect(answers.map((r) => r.status)).toEqual([201, 201, 201, 201]);
+    const versions = (await db('assessments').where({ root_id: first }).select('version'))
+      .map((r) => Number(r.version))
+      .sort((a, b) => a - b);
+    expect(versions).toEqual([1, 2, 3, 4, 5, 6, 7]);
+  });
+
+  it('the database refuses two rows of one chain with the same version', async () => {
+    const row = await db('assessments').where({ id: first }).first();
+    const { id, ...copy } = row;
+    void id;
+    await expect(db('assessments').insert({ ...copy, parent_id: first })).rejects.toThrow(
+      /unique/i,
+    );
+  });
+
   it('exports the curves as CSV with units in the header', async () => {
     const res = await curves.GET(req('GET'), ctx(first));
     const lines = (await res.text()).trim().split('\r\n');

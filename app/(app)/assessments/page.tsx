@@ -2,7 +2,7 @@ import Link from 'next/link';
 import { PageTitle } from '@/components/ui/page-title';
 import { can } from '@/lib/auth/roles';
 import { requirePageActor } from '@/lib/auth/session';
-import { CHECK_NAMES_LIST } from '@/lib/checks/check-names';
+import { CHECK_NAMES_LIST } from '@/lib/validation/check-names';
 import { listAssessments } from '@/lib/data/assessments';
 import { titleFor } from '@/lib/page-title';
 

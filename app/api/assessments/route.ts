@@ -1,6 +1,7 @@
 import { NextResponse } from 'next/server';
 import { requireActor } from '@/lib/auth/session';
-import { createAssessment, getAssessment, listAssessments } from '@/lib/data/assessments';
+import { createAssessment } from '@/lib/checks/assessments';
+import { getAssessment, listAssessments } from '@/lib/data/assessments';
 import { handle, readJson } from '@/lib/http/handler';
 
 /** The signed-in user's assessments (an admin's: everyone's); `?check=&cultivar=`. */

@@ -1,6 +1,7 @@
 import { NextResponse } from 'next/server';
 import { requireActor } from '@/lib/auth/session';
-import { getAssessment, rerunAssessment } from '@/lib/data/assessments';
+import { rerunAssessment } from '@/lib/checks/assessments';
+import { getAssessment } from '@/lib/data/assessments';
 import { handle } from '@/lib/http/handler';
 import { parseId } from '@/lib/validation/id';
 
