@@ -24,17 +24,22 @@ export function SaveAssessment({
   }>({});
   async function save() {
     setState({ pending: true });
-    const res = await fetch('/api/assessments', {
-      method: 'POST',
-      headers: { 'content-type': 'application/json' },
-      body: JSON.stringify({ check, title, notes: notes || undefined, inputs }),
-    });
-    const json = await res.json().catch(() => ({}));
-    setState(
-      res.ok
-        ? { id: json.assessment.id }
-        : { error: json.message ?? 'Could not save.', fieldErrors: json.fieldErrors },
-    );
+    try {
+      const res = await fetch('/api/assessments', {
+        method: 'POST',
+        headers: { 'content-type': 'application/json' },
+        body: JSON.stringify({ check, title, notes: notes || undefined, inputs }),
+      });
+      const json = await res.json().catch(() => ({}));
+      setState(
+        res.ok
+          ? { id: json.assessment.id }
+          : { error: json.message ?? 'Could not save.', fieldErrors: json.fieldErrors },
+      );
+    } catch {
+      // The request never got an answer (offline, server gone): say so and let them try again.
+      setState({ error: 'The server could not be reached: nothing was saved. Try again.' });
+    }
   }
   return (
     <form

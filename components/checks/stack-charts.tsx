@@ -22,7 +22,11 @@ interface Point {
   margin: number | null;
 }
 
-/** Bin pressure and bottom-contact pressure against fill depth; the margin on its own axis. */
+/**
+ * Bin pressure and bottom-contact pressure against fill depth; the margin on its own axis.
+ * `depthMm` and `safeMm` are SI millimetres from the result (never the form's text, which is in
+ * the reader's units): the chart converts them once, like the series.
+ */
 export function StackCharts({
   series,
   depthMm,
@@ -100,6 +104,7 @@ export function StackCharts({
           <ReferenceLine
             yAxisId="p"
             x={u.toDisplay(depthMm, 'mm')}
+            className="this-fill-marker"
             stroke="#57534e"
             strokeDasharray="4 4"
             label="this fill"

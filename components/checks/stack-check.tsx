@@ -113,7 +113,7 @@ export function StackCheck({
             </dl>
             <StackCharts
               series={result.series}
-              depthMm={Number(text.fillDepthMm)}
+              depthMm={result.inputs_used.fill_depth_mm}
               safeMm={result.deepest_safe_fill_mm}
             />
           </>

@@ -3,7 +3,7 @@ import { Measure } from '@/components/units/measure';
 export interface UsedValueView {
   value: number;
   unit: string;
-  origin: 'published' | 'entered' | 'typical default';
+  origin: 'published' | 'derived' | 'entered' | 'typical default';
   source: string | null;
 }
 
@@ -26,9 +26,11 @@ export function UsedValues({ rows }: { rows: [string, UsedValueView | null | und
                 ? 'no published value'
                 : v.origin === 'entered'
                   ? 'entered'
-                  : v.origin === 'typical default'
-                    ? `typical default, no source${v.source ? ` — ${v.source}` : ''}`
-                    : `published${v.source ? ` — ${v.source}` : ''}`}
+                  : v.origin === 'derived'
+                    ? `derived${v.source ? ` — ${v.source}` : ''}`
+                    : v.origin === 'typical default'
+                      ? `typical default, no source${v.source ? ` — ${v.source}` : ''}`
+                      : `published${v.source ? ` — ${v.source}` : ''}`}
             </td>
           </tr>
         ))}

@@ -2,14 +2,18 @@ import 'server-only';
 import type { Actor } from '@/lib/auth/actor';
 import { getCultivar } from '@/lib/data/cultivars';
 import type { RevisionValue } from '@/lib/data/property-rows';
-import { ValidationError } from '@/lib/errors';
+import { NotFoundError, ValidationError } from '@/lib/errors';
 import type { Quantity } from '@/lib/properties/quantities';
 
-/** A property a check used, with where it came from: a published value, or the user's own. */
+/**
+ * A property a check used, with where it came from: a published value, one worked out from
+ * published or typed values by a stated relation, a typical value without a source, or the
+ * user's own.
+ */
 export interface UsedValue {
   value: number;
   unit: string;
-  origin: 'published' | 'entered' | 'typical default';
+  origin: 'published' | 'derived' | 'entered' | 'typical default';
   /** Citation of the published value's source, when it has one. */
   source: string | null;
   low: number | null;
@@ -26,7 +30,6 @@ export interface PinnedCultivar {
   values: RevisionValue[];
 }
 
-/** The published revision of a cultivar, or a 400 on the `cultivar` field. */
 /** The pinned revision as a check's answer names it (so an assessment can reproduce it). */
 export function pinnedSummary(p: PinnedCultivar | null) {
   return (
@@ -40,8 +43,16 @@ export function pinnedSummary(p: PinnedCultivar | null) {
   );
 }
 
+/**
+ * The published revision of a cultivar, or a 400 on the `cultivar` field when there is no such
+ * cultivar. Any other failure (the database down, say) stays what it is: a server error, not a
+ * claim that the cultivar does not exist.
+ */
 export async function pinCultivar(actor: Actor, slug: string): Promise<PinnedCultivar> {
-  const record = await getCultivar(actor, slug).catch(() => null);
+  const record = await getCultivar(actor, slug).catch((error: unknown) => {
+    if (error instanceof NotFoundError) return null;
+    throw error;
+  });
   if (!record) {
     throw new ValidationError('Unknown cultivar.', { cultivar: [`No cultivar "${slug}".`] });
   }

@@ -49,7 +49,8 @@ function massOf(entry: FruitEntry, pinned: PinnedCultivar | null, diameter: Used
   return {
     value: sphereMassG(diameter.value, density.value),
     unit: 'g',
-    origin: 'published',
+    // Worked out, not published: the published density times the volume of a sphere.
+    origin: 'derived',
     source: `sphere of the diameter at ${density.value} kg/m³ (${density.source ?? 'density'})`,
     low: null,
     high: null,

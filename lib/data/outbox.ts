@@ -1,7 +1,6 @@
 import 'server-only';
 import { db } from '@/lib/db';
 import { assertCan, type Actor } from '@/lib/auth/actor';
-import { NotFoundError } from '@/lib/errors';
 
 export interface OutboxMessage {
   id: number;
@@ -28,11 +27,4 @@ export async function listOutbox(actor: Actor, limit = 100): Promise<OutboxMessa
   assertCan(actor, 'outbox:read');
   const rows = await db('mail_outbox').orderBy('id', 'desc').limit(limit);
   return rows.map(toMessage);
-}
-
-export async function getOutboxMessage(actor: Actor, id: number): Promise<OutboxMessage> {
-  assertCan(actor, 'outbox:read');
-  const row = await db('mail_outbox').where({ id }).first();
-  if (!row) throw new NotFoundError('No such message.');
-  return toMessage(row);
 }

@@ -22,6 +22,13 @@ test('an engineer saves a drop check, opens its report and downloads the PDF', a
   const save = page.getByTestId('save-assessment');
   await save.getByLabel('Title').fill('Chute into the hopper');
   await save.getByLabel('Notes').fill('Steel chute, line 3');
+  // A save that never gets an answer (network down) says so and leaves the button usable; it
+  // used to stay on "Saving…" for good.
+  await page.route('**/api/assessments', (route) => route.abort('internetdisconnected'));
+  await save.getByRole('button', { name: 'Save assessment' }).click();
+  await expect(save).toContainText('could not be reached');
+  await expect(save.getByRole('button', { name: 'Save assessment' })).toBeEnabled();
+  await page.unroute('**/api/assessments');
   await save.getByRole('button', { name: 'Save assessment' }).click();
   await save.getByRole('link', { name: 'Saved: open the report' }).click();
 

@@ -85,6 +85,26 @@ test('US customary units apply to what is typed and shown; SI stays stored', asy
     await expect.poll(async () => Math.abs((await peak()) - 88.04) / 88.04).toBeLessThan(0.005);
     await expect(figures).toContainText('lbf');
     await page.screenshot({ path: 'tests/artifacts/check-drop-us-units.png', fullPage: true });
+    // Stack chart: the "this fill" marker sits at the typed fill depth. The default 600 mm shows
+    // as 23.62 in; the depth axis runs to 1.5 × that or more, so the marker lies at a third to
+    // two thirds of the plot's width. (It was converted twice and sat at 1/25.4 of its place,
+    // by the left edge.)
+    await page.goto('/checks/stack');
+    await page.getByLabel('Cultivar').selectOption('');
+    await page.getByLabel("Young's modulus").fill('435.11');
+    await page.getByLabel("Poisson's ratio").fill('0.35');
+    await page.getByLabel('Diameter').fill('3.1496');
+    await page.getByLabel('Mass').fill('7.0548');
+    await page.getByLabel('Static bruise threshold').fill('14.504');
+    await expect(page.getByLabel('Fill depth')).toHaveValue('23.62');
+    const chart = page.getByTestId('stack-chart');
+    const marker = chart.locator('.this-fill-marker line, line.this-fill-marker').first();
+    await expect(marker).toBeAttached();
+    const grid = await chart.locator('.recharts-cartesian-grid').boundingBox();
+    const line = await marker.boundingBox();
+    const at = (line!.x - grid!.x) / grid!.width;
+    expect(at).toBeGreaterThan(0.3);
+    expect(at).toBeLessThan(0.7);
     // Published values follow too: Jonathan's flesh modulus (2.52 MPa, Shahabasi 1979, unless a
     // later revision changed it) reads in psi.
     await page.goto('/properties/apple-jonathan');

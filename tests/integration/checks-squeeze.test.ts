@@ -67,9 +67,12 @@ describe('squeeze check route', () => {
     // The grip rule [common practice]: 2μN ≥ SF·m·g → N = 2·0.2·9.80665/(2·0.5) = 3.923 N
     // (4 figures printed; the grip search stops within 1e-5 of the travel).
     expect(Math.abs(r.model.liftability.grip.force_n - 3.923) / 3.923).toBeLessThan(2e-3);
-    expect(r.margin.verdict).toBe(
-      r.margin.value >= 1.5 ? 'comfortable' : r.margin.value >= 1 ? 'tight' : 'bruise risk',
-    );
+    // Hertz, sphere on a flat (Johnson, Contact Mechanics, 1985, §4.2): at that force with
+    // R = 40 mm, E* = E/(1 − ν²) = 3.419 MPa, a = (3FR/4E*)^⅓ = 3.252 mm (inside the pad's 8 mm
+    // flat) and p0 = 3F/(2πa²) = 177.1 kPa, so the margin is 100/177.1 = 0.565 — below 1, which
+    // our bands call "bruise risk". 3 % covers the normal mesh's recovered nodal peak.
+    expect(Math.abs(r.margin.value - 0.565) / 0.565).toBeLessThan(0.03);
+    expect(r.margin.verdict).toBe('bruise risk');
     expect(r.sweep.points).toHaveLength(12);
     expect(
       r.sweep.points.some((p: { pad_diameter_mm: number }) => Math.abs(p.pad_diameter_mm - 20) < 3),

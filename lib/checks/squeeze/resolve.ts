@@ -25,7 +25,7 @@ function densityOf(v: SqueezeCheckInput, f: ResolvedFruit, axialMm: number): Use
   return {
     value: Number((f.massG.value / 1000 / volume).toPrecision(4)),
     unit: 'kg/m³',
-    origin: f.massG.origin,
+    origin: 'derived',
     source: `mass ÷ volume of the fruit (${f.massG.source ?? 'entered mass'})`,
     low: null,
     high: null,
