@@ -148,7 +148,8 @@ export {
 } from './squeeze/warnings';
 
 // Slip map at the grip (fem/squeeze/slip-*.ts) and the probability of bruising
-// (fem/probability/): both run the squeeze only through the exports above.
+// (fem/probability/): both run the squeeze only through the stages' exports above, imported
+// from the stage files themselves (no file inside fem/ imports this one).
 export {
   ciavarellaJager,
   type ContactHistory,

@@ -1,12 +1,12 @@
+import type { SqueezeInput } from '../squeeze/01-input';
 import {
   findLiftability,
   liftStateAt,
   prepareLift,
-  regradeRadius,
   type IncrementTrack,
   type LiftStage,
-  type SqueezeInput,
-} from '../index';
+} from '../squeeze/06-liftability';
+import { regradeRadius } from '../squeeze/07-run';
 
 /** Bruise margin at the grip point of one input; `margin` is null when the travel never lifts. */
 export interface GripSample {

@@ -1,4 +1,5 @@
-import { FemInputError, MAX_TRAVEL_FRACTION, type SqueezeCase, type SqueezeInput } from '../index';
+import { FemInputError } from '../errors';
+import { MAX_TRAVEL_FRACTION, type SqueezeCase, type SqueezeInput } from '../squeeze/01-input';
 import { randomStream } from './prng';
 import { samplerOf, SPREAD_INPUTS, type Sampler, type SpreadInput, type Spreads } from './spread';
 

@@ -1,9 +1,5 @@
-import {
-  FemConvergenceError,
-  FemInputError,
-  validateSqueezeInput,
-  type SqueezeInput,
-} from '../index';
+import { FemConvergenceError, FemInputError } from '../errors';
+import { validateSqueezeInput, type SqueezeInput } from '../squeeze/01-input';
 import { gripMargin, type GripHint } from './grip-margin';
 import {
   bandCentre,

@@ -1,4 +1,4 @@
-import { FemInputError } from '../index';
+import { FemInputError } from '../errors';
 import {
   createMonteCarlo,
   type MonteCarloInput,

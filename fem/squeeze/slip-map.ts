@@ -2,17 +2,12 @@
  * Slip map of a pad on the fruit: the Ciavarella–Jäger partial slip (slip-superposition.ts) on
  * the finite-element normal pressure of the squeeze, at a given travel or at the grip point.
  */
-import {
-  FemInputError,
-  liftStateAt,
-  prepareLift,
-  requirePositive,
-  runCase,
-  STANDARD_GRAVITY,
-  type CaseRun,
-  type LiftStage,
-  type SqueezeInput,
-} from '../index';
+import { STANDARD_GRAVITY } from '../constants';
+import { FemInputError } from '../errors';
+import { requirePositive } from '../validate';
+import type { SqueezeInput } from './01-input';
+import { liftStateAt, prepareLift, type LiftStage } from './06-liftability';
+import { runCase, type CaseRun } from './07-run';
 import { ciavarellaJager, type NormalContactState, type SlipMap } from './slip-superposition';
 
 /** The slip map at the grip point and the per-pad tangential loads of the lift. */

@@ -1,4 +1,5 @@
-import { monotoneRoot, requireNonNegative, requirePositive } from '../index';
+import { monotoneRoot } from '../solver/monotone-root';
+import { requireNonNegative, requirePositive } from '../validate';
 
 /** Normal contact at one load: force P (N, N/m in plane strain), radius a (m), nodal pressure (Pa). */
 export interface NormalContactState {
