@@ -6,7 +6,8 @@ import { proseComponents } from '@/components/atlas/prose';
 /**
  * The one map of components an Atlas article may use, for the server render and any client
  * preview alike. Everything here is pure. `PropertyCard` and `SourceRef` read the database, so
- * the caller supplies them bound to its data (lib/atlas/render.tsx does so for the server).
+ * the caller supplies them bound to its data (components/atlas/render-article.tsx does so for
+ * the server).
  */
 export const atlasComponents = {
   ...proseComponents,

@@ -8,7 +8,7 @@ import type { Actor } from '@/lib/auth/actor';
 import { getActiveActor } from '@/lib/data/users';
 import { createDraft, publishRevision, submitDraft, updateDraft } from '@/lib/data/revisions';
 import { findArticle } from '@/lib/atlas/articles';
-import { renderArticle } from '@/lib/atlas/render';
+import { renderArticle } from '@/components/atlas/render-article';
 import { PropertyCard } from '@/components/atlas/property-card';
 
 const SLUG = 'apple-jonathan';

@@ -11,7 +11,7 @@ import type { Actor } from '@/lib/auth/actor';
 import { getActiveActor } from '@/lib/data/users';
 import { listAllArticles, readArticle } from '@/lib/atlas/articles';
 import { articleFrontmatterSchema } from '@/lib/atlas/frontmatter';
-import { renderArticle } from '@/lib/atlas/render';
+import { renderArticle } from '@/components/atlas/render-article';
 import { cardCultivars, inlineSourceKeys, topHeadings } from '@/lib/atlas/sections';
 import { renderHtml } from './render-html';
 

@@ -4,7 +4,7 @@ import { notFound } from 'next/navigation';
 import { ArticleLayout } from '@/components/atlas/article-layout';
 import { listAllArticles } from '@/lib/atlas/articles';
 import { getAtlasArticle } from '@/lib/atlas/entries';
-import { renderArticle } from '@/lib/atlas/render';
+import { renderArticle } from '@/components/atlas/render-article';
 import { requirePageActor } from '@/lib/auth/session';
 
 type Props = { params: Promise<{ commodity: string }> };

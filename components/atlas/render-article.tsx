@@ -10,8 +10,8 @@ import { PropertyCard } from '@/components/atlas/property-card';
 import { SourceRefLink } from '@/components/atlas/source-ref';
 import type { Actor } from '@/lib/auth/actor';
 import type { SourceRef } from '@/lib/data/property-rows';
-import type { Article } from './articles';
-import { getSourcesByKeys, UnknownSourceError } from './sources';
+import type { Article } from '@/lib/atlas/articles';
+import { getSourcesByKeys, UnknownSourceError } from '@/lib/atlas/sources';
 
 type Content = ComponentType<{ components: MDXComponents }>;
 const compiled = new Map<string, { mtimeMs: number; Content: Content }>();
