@@ -67,7 +67,7 @@ export function SlipMap({ slip }: { slip: Slip }) {
           <dt className="text-stone-600">Stick radius</dt>
           <dd className="num">{u.show(c, 'mm')}</dd>
           <dt className="text-stone-600">Load per pad while lifting</dt>
-          <dd className="num">{slip.lift_load_n === null ? '—' : u.show(slip.lift_load_n, 'N')}</dd>
+          <dd className="num">{slip.lift_load_n == null ? '—' : u.show(slip.lift_load_n, 'N')}</dd>
           <dt className="text-stone-600">Friction used (T ÷ μP)</dt>
           <dd className="num">{slip.utilisation}</dd>
         </dl>

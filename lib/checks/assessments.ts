@@ -9,10 +9,8 @@ import { CHECKS, type CheckName } from './registry';
 /** Run a check on the server (never trusting a client's numbers) as an assessment keeps it. */
 async function runForAssessment(actor: Actor, check: CheckName, inputs: Record<string, unknown>) {
   const def = CHECKS[check];
-  const results = (await def.run(actor, inputs)) as {
-    pinned: { cultivar: string; revision_id: number } | null;
-  };
-  return { check, inputs, results, modelVersion: MODEL_VERSION, resultSchema: def.resultSchema };
+  const results = await def.run(actor, inputs);
+  return { check, inputs, results, modelVersion: MODEL_VERSION, resultSchema: def.resultSchemaId };
 }
 
 /** Save a check: validated, run, and kept with the revision it used and the model's version. */

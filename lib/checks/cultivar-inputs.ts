@@ -4,22 +4,9 @@ import { getCultivar } from '@/lib/data/cultivars';
 import type { RevisionValue } from '@/lib/data/property-rows';
 import { NotFoundError, ValidationError } from '@/lib/errors';
 import type { Quantity } from '@/lib/properties/quantities';
+import type { UsedValue } from './used-value';
 
-/**
- * A property a check used, with where it came from: a published value, one worked out from
- * published or typed values by a stated relation, a typical value without a source, or the
- * user's own.
- */
-export interface UsedValue {
-  value: number;
-  unit: string;
-  origin: 'published' | 'derived' | 'entered' | 'typical default';
-  /** Citation of the published value's source, when it has one. */
-  source: string | null;
-  low: number | null;
-  high: number | null;
-  sd: number | null;
-}
+export type { UsedValue } from './used-value';
 
 export interface PinnedCultivar {
   slug: string;

@@ -1,11 +1,7 @@
-import { toCsv, type CsvCell } from '@/lib/csv';
+import { toCsv } from '@/lib/csv';
+import type { CheckReport } from './report';
 
-/** The curves of a saved check (its `series`), one column per key; keys name their units. */
-export function curvesCsv(results: { series?: Record<string, number | null>[] }): string {
-  const series = results.series ?? [];
-  const keys = series.length ? Object.keys(series[0]) : [];
-  return toCsv(
-    keys,
-    series.map((row) => keys.map((k) => row[k] as CsvCell)),
-  );
+/** A saved check's curves as CSV: one column per quantity, each header naming its unit. */
+export function curvesCsv(curves: CheckReport['curves']): string {
+  return toCsv(curves.columns, curves.rows);
 }

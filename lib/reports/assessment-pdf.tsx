@@ -1,6 +1,8 @@
 import { Document, Page, StyleSheet, Text, View, renderToBuffer } from '@react-pdf/renderer';
 import type { Assessment } from '@/lib/data/assessments';
-import { ASSUMPTIONS } from '@/lib/checks/assumptions';
+import type { RegisteredCheck } from '@/lib/checks/registry';
+import type { ChartSpec, Figure } from '@/lib/checks/report';
+import type { UsedValue } from '@/lib/checks/used-value';
 import { MACHINERY_CAUTION, STANDING_CAUTION } from '@/lib/cautions';
 import { VERDICT_RULE } from '@/lib/checks/verdict';
 import { PdfLineChart, type PdfSeries } from './pdf-chart';
@@ -14,108 +16,58 @@ const s = StyleSheet.create({
   cellLabel: { width: '40%' },
   cellValue: { width: '25%' },
   cellOrigin: { width: '35%', color: '#57534e' },
+  cellWide: { width: '60%' },
   margin: { fontSize: 22, fontFamily: 'Helvetica-Bold', marginTop: 6 },
   caution: { marginTop: 12, padding: 6, backgroundColor: '#fbf4ec', color: '#8a4b16' },
 });
 
-type Used = { value: number; unit: string; origin: string; source: string | null } | null;
+const COLOURS = ['#2f5f2c', '#8a4b16', '#1d4ed8', '#7c3aed', '#be123c', '#0f766e'];
 
-function inputsOf(a: Assessment): [string, Used][] {
-  const used = (a.results as { inputs_used?: Record<string, unknown> }).inputs_used ?? {};
-  return Object.entries(used)
-    .filter(([, v]) => v === null || (typeof v === 'object' && v !== null && 'value' in v))
-    .map(([k, v]) => [k.replace(/_/g, ' '), v as Used]);
+/** A figure as text in SI (the PDF is printed as the model computed it). */
+function figureText(f: Figure): string {
+  if (f.value === null) return f.text ?? '—';
+  const unit = f.unit === '–' ? '' : ` ${f.unit}`;
+  return `${Number(f.value.toPrecision(4))}${unit}${f.text ? ` ${f.text}` : ''}`;
 }
 
-function chartsOf(a: Assessment): { title: string; x: string; y: string; series: PdfSeries[] }[] {
-  const series = ((a.results as { series?: Record<string, number>[] }).series ?? []) as Record<
-    string,
-    number
-  >[];
-  if (a.check === 'squeeze') {
-    const r = a.results as unknown as {
-      model: { steps: Record<string, number>[] };
-      grip_profile: Record<string, number>[] | null;
-    };
-    return [
-      {
-        title: 'Pad force against travel',
-        x: 'travel per pad (mm)',
-        y: 'force (N)',
-        series: [
-          {
-            label: 'F',
-            color: '#2f5f2c',
-            points: r.model.steps.map((p) => [p.travel_per_pad_mm, p.force_n]),
-          },
-        ],
-      },
-      ...(r.grip_profile
-        ? [
-            {
-              title: 'Contact pressure at the grip point',
-              x: 'radius (mm)',
-              y: 'pressure (kPa)',
-              series: [
-                {
-                  label: 'p',
-                  color: '#8a4b16',
-                  points: r.grip_profile.map((p) => [p.r_mm, p.pressure_kpa] as [number, number]),
-                },
-              ],
-            },
-          ]
-        : []),
-    ];
-  }
-  if (a.check === 'drop') {
-    return [
-      {
-        title: 'Peak pressure against drop height',
-        x: 'drop height (mm)',
-        y: 'peak pressure (kPa)',
-        series: [
-          {
-            label: 'p',
-            color: '#2f5f2c',
-            points: series.map((p) => [p.height_mm, p.peak_pressure_kpa]),
-          },
-        ],
-      },
-    ];
-  }
+function usedText(v: UsedValue | null): [string, string] {
+  if (!v) return ['—', 'no published value'];
+  const unit = v.unit === '–' ? '' : ` ${v.unit}`;
   return [
-    {
-      title: 'Pressure against fill depth',
-      x: 'fill depth (mm)',
-      y: 'pressure (kPa)',
-      series: [
-        {
-          label: 'bin',
-          color: '#57534e',
-          points: series.map((p) => [p.depth_mm, p.vertical_pressure_kpa]),
-        },
-        {
-          label: 'contact',
-          color: '#2f5f2c',
-          points: series.map((p) => [p.depth_mm, p.contact_pressure_kpa]),
-        },
-      ],
-    },
+    `${Number(v.value.toPrecision(4))}${unit}`,
+    `${v.origin}${v.source ? ` — ${v.source}` : ''}`,
   ];
 }
 
-function Report({ a }: { a: Assessment }) {
-  const margin = (
-    a.results as { margin?: { value: number; verdict: string; basis: string } | null }
-  ).margin;
+function chartSeries(c: ChartSpec): PdfSeries[] {
+  return c.series.map((s, i) => ({
+    label: s.label,
+    color: COLOURS[i % COLOURS.length],
+    points: s.points,
+  }));
+}
+
+const axis = (a: ChartSpec['x']) => (a.unit === '–' ? a.label : `${a.label} (${a.unit})`);
+
+function FigureRows({ figures }: { figures: Figure[] }) {
+  return figures.map((f) => (
+    <View key={f.label} style={s.row}>
+      <Text style={s.cellLabel}>{f.label}</Text>
+      <Text style={s.cellWide}>{figureText(f)}</Text>
+    </View>
+  ));
+}
+
+function Report({ a, check }: { a: Assessment; check: RegisteredCheck }) {
+  const report = check.show(a.results);
+  const margin = report.margin;
   return (
     <Document title={a.title} author="Tenderline">
       <Page size="A4" style={s.page}>
         <Text style={s.h1}>{a.title}</Text>
         <Text style={s.muted}>
-          {a.check} check · version {a.version} · saved {new Date(a.createdAt).toUTCString()} by{' '}
-          {a.ownerName}
+          {check.title} · version {a.version} · saved {new Date(a.createdAt).toUTCString()} by{' '}
+          {a.ownerName} · model {a.modelVersion}
         </Text>
         <Text style={s.muted}>
           {a.cultivarName
@@ -131,31 +83,34 @@ function Report({ a }: { a: Assessment }) {
           {margin ? `Basis: ${margin.basis} threshold. ` : ''}
           {VERDICT_RULE}
         </Text>
-        <Text style={s.h2}>Inputs used</Text>
-        {inputsOf(a).map(([label, v]) => (
-          <View key={label} style={s.row}>
-            <Text style={s.cellLabel}>{label}</Text>
-            <Text style={s.cellValue}>
-              {v ? `${Number(v.value.toPrecision(4))} ${v.unit === '–' ? '' : v.unit}` : '—'}
-            </Text>
-            <Text style={s.cellOrigin}>
-              {v ? `${v.origin}${v.source ? ` — ${v.source}` : ''}` : 'no published value'}
-            </Text>
-          </View>
-        ))}
-        {chartsOf(a).map((c) => (
-          <View key={c.title} wrap={false}>
+        <Text style={s.h2}>Scenario</Text>
+        <FigureRows figures={report.scenario} />
+        <Text style={s.h2}>Results</Text>
+        <FigureRows figures={report.figures} />
+        <Text style={s.h2}>Fruit figures used</Text>
+        {report.used.map(({ label, value }) => {
+          const [shown, origin] = usedText(value);
+          return (
+            <View key={label} style={s.row}>
+              <Text style={s.cellLabel}>{label}</Text>
+              <Text style={s.cellValue}>{shown}</Text>
+              <Text style={s.cellOrigin}>{origin}</Text>
+            </View>
+          );
+        })}
+        {report.charts.map((c) => (
+          <View key={c.id} wrap={false}>
             <Text style={s.h2}>{c.title}</Text>
-            <PdfLineChart series={c.series} xLabel={c.x} yLabel={c.y} />
+            <PdfLineChart series={chartSeries(c)} xLabel={axis(c.x)} yLabel={axis(c.y)} />
           </View>
         ))}
-        {((a.results as { warnings?: string[] }).warnings ?? []).map((w) => (
+        {report.warnings.map((w) => (
           <Text key={w} style={s.muted}>
             • {w}
           </Text>
         ))}
         <Text style={s.h2}>Assumptions</Text>
-        <Text>{ASSUMPTIONS[a.check]}</Text>
+        <Text>{check.assumptions}</Text>
         <View style={s.caution}>
           <Text>{STANDING_CAUTION}</Text>
           <Text>{MACHINERY_CAUTION}</Text>
@@ -166,6 +121,6 @@ function Report({ a }: { a: Assessment }) {
 }
 
 /** The assessment report as a PDF, rendered on the server without a browser. */
-export function assessmentPdf(a: Assessment): Promise<Buffer> {
-  return renderToBuffer(<Report a={a} />);
+export function assessmentPdf(a: Assessment, check: RegisteredCheck): Promise<Buffer> {
+  return renderToBuffer(<Report a={a} check={check} />);
 }

@@ -143,6 +143,39 @@ describe('assessments pin their data', () => {
     expect(lines).toHaveLength(41);
   });
 
+  it('a saved squeeze check exports its force–travel curve (the CSV used to be empty)', async () => {
+    signInAs(await userId(ACCOUNTS.engineer));
+    const inputs = {
+      modulusMpa: 3,
+      poisson: 0.35,
+      diameterMm: 80,
+      massG: 200,
+      staticThresholdKpa: 100,
+      friction: 0.5,
+      padDiameterMm: 20,
+      padEdgeMm: 2,
+      maxTravelMm: 2,
+    };
+    const res = await list.POST(req('POST', { check: 'squeeze', title: 'Gripper', inputs }), {});
+    expect(res.status).toBe(201);
+    const { assessment } = await res.json();
+    expect(assessment.resultSchema).toBe('squeeze/1');
+    const lines = (await (await curves.GET(req('GET'), ctx(assessment.id))).text())
+      .trim()
+      .split('\r\n');
+    expect(lines[0]).toBe(
+      'travel_per_pad_mm,force_n,contact_radius_mm,peak_pressure_kpa,mean_pressure_kpa,lift_ratio',
+    );
+    // One row per load step of the squeeze, as saved.
+    expect(lines).toHaveLength(assessment.results.model.steps.length + 1);
+    const last = lines.at(-1)!.split(',').map(Number);
+    // The last step is at the full 2 mm travel per pad.
+    expect(last[0]).toBe(2);
+    expect(last[1]).toBeGreaterThan(0);
+    const pdf = await report.GET(req('GET'), ctx(assessment.id));
+    expect(pdf.status).toBe(200);
+  });
+
   it('renders the report as a PDF on the server', async () => {
     const res = await report.GET(req('GET'), ctx(first));
     expect(res.headers.get('content-type')).toBe('application/pdf');

@@ -8,6 +8,7 @@ import { pinnedSummary } from '../cultivar-inputs';
 import { resolveFruit, type ResolvedFruit } from '../resolve-fruit';
 import { DROP_SURFACE_KEYS, DROP_SURFACES, type DropSurface } from '../surfaces';
 import { verdictOf } from '../verdict';
+import type { DropResult } from './result';
 
 const round = (x: number, digits = 4) => Number(x.toPrecision(digits));
 
@@ -102,7 +103,7 @@ function series(fruit: FruitSI, surface: ReturnType<typeof surfaceSI>, heightM: 
 }
 
 /** The drop check: elastic Hertz impact, judged against the cultivar's dynamic threshold. */
-export async function runDropCheck(actor: Actor, raw: unknown) {
+export async function runDropCheck(actor: Actor, raw: unknown): Promise<DropResult> {
   const input = parseInput(dropCheckSchema, raw);
   const f = await resolveFruit(actor, input);
   const fruit = fruitSI(f);
@@ -195,4 +196,4 @@ export async function runDropCheck(actor: Actor, raw: unknown) {
   };
 }
 
-export type DropCheckResult = Awaited<ReturnType<typeof runDropCheck>>;
+export type DropCheckResult = DropResult;

@@ -15,6 +15,7 @@ import {
 } from '@/fem';
 import { verdictOf } from '../verdict';
 import type { SqueezeHead } from './head';
+import { squeezeResultSchema, type SqueezeResult } from './result';
 
 const r4 = (v: number | null | undefined) =>
   v == null || !Number.isFinite(v) ? null : Number(v.toPrecision(4));
@@ -84,11 +85,18 @@ export interface SqueezeCheckTaskInput extends SqueezeTaskInput {
   inputWarnings: string[];
 }
 
-/** The whole squeeze check answer, built in the worker from the model run and the head. */
-export function squeezeCheckTask({ head, inputWarnings, ...task }: SqueezeCheckTaskInput) {
+/**
+ * The whole squeeze check answer, built in the worker from the model run and the head, and
+ * checked against its schema there (off the main thread), so what leaves the worker is typed.
+ */
+export function squeezeCheckTask({
+  head,
+  inputWarnings,
+  ...task
+}: SqueezeCheckTaskInput): SqueezeResult {
   const out = squeezeTask(task);
   const margin = out.model.liftability?.grip?.bruise_margin ?? null;
-  return {
+  return squeezeResultSchema.parse({
     check: 'squeeze' as const,
     ...head,
     margin:
@@ -97,7 +105,7 @@ export function squeezeCheckTask({ head, inputWarnings, ...task }: SqueezeCheckT
         : { value: margin, basis: 'static' as const, verdict: verdictOf(margin) },
     ...out,
     warnings: [...out.model.warnings.map((w) => w.message), ...inputWarnings],
-  };
+  });
 }
 
 export interface ProbabilityTaskInput {

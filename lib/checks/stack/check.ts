@@ -4,6 +4,7 @@ import { parseInput } from '@/lib/validation/parse';
 import { stackCheckSchema } from '@/lib/validation/checks';
 import { enteredValue, pinnedSummary, publishedValue, type UsedValue } from '../cultivar-inputs';
 import { resolveFruit } from '../resolve-fruit';
+import type { StackResult } from './result';
 import { deepestSafeFill, stackAt, type StackSI } from './model';
 import { verdictOf } from '../verdict';
 
@@ -24,7 +25,7 @@ const typical = (value: number, why: string): UsedValue => ({
 const PACKING_FRACTION = 0.6;
 
 /** The stack check: Janssen's wall-friction law down the bin, Hertz at the bottom contact. */
-export async function runStackCheck(actor: Actor, raw: unknown) {
+export async function runStackCheck(actor: Actor, raw: unknown): Promise<StackResult> {
   const input = parseInput(stackCheckSchema, raw);
   const f = await resolveFruit(actor, input);
   const p = f.pinned;
@@ -132,4 +133,4 @@ export async function runStackCheck(actor: Actor, raw: unknown) {
   };
 }
 
-export type StackCheckResult = Awaited<ReturnType<typeof runStackCheck>>;
+export type StackCheckResult = StackResult;

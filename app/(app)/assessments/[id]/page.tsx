@@ -6,7 +6,8 @@ import { MarginPanel } from '@/components/checks/margin-panel';
 import { CautionNote } from '@/components/shell/caution-note';
 import { PageTitle } from '@/components/ui/page-title';
 import { requirePageActor } from '@/lib/auth/session';
-import { ASSUMPTIONS } from '@/lib/checks/assumptions';
+import { CHECKS } from '@/lib/checks/registry';
+import { marginBasis } from '@/lib/checks/report';
 import { getAssessment } from '@/lib/data/assessments';
 import { NotFoundError, ValidationError } from '@/lib/errors';
 import { titleFor } from '@/lib/page-title';
@@ -26,21 +27,14 @@ async function load(id: string) {
 
 export default async function AssessmentReport({ params }: { params: Promise<{ id: string }> }) {
   const a = await load((await params).id);
-  const margin =
-    (
-      a.results as {
-        margin?: {
-          value: number;
-          verdict: 'comfortable' | 'tight' | 'bruise risk';
-          basis: string;
-        } | null;
-      }
-    ).margin ?? null;
+  const check = CHECKS[a.check];
+  const report = check.show(a.results);
+  const margin = report.margin;
   return (
     <article className="space-y-6" data-testid="assessment-report">
       <PageTitle title={a.title}>
-        {a.check} check · version {a.version} · saved {new Date(a.createdAt).toUTCString()} by{' '}
-        {a.ownerName}
+        {check.title} · version {a.version} · saved {new Date(a.createdAt).toUTCString()} by{' '}
+        {a.ownerName} · model {a.modelVersion}
         {a.parentId ? (
           <>
             {' '}
@@ -73,20 +67,11 @@ export default async function AssessmentReport({ params }: { params: Promise<{ i
         {a.notes ? <p className="whitespace-pre-wrap text-stone-700">{a.notes}</p> : null}
       </div>
       <ReportActions id={a.id} canRerun={Boolean(a.newerRevision)} />
-      <MarginPanel
-        hasResult
-        margin={margin}
-        pending={false}
-        basis={
-          margin?.basis === 'dynamic'
-            ? 'Published dynamic threshold ÷ this drop.'
-            : 'Static bruise threshold ÷ contact pressure.'
-        }
-      />
-      <ReportResults check={a.check} results={a.results} />
+      <MarginPanel hasResult margin={margin} pending={false} basis={marginBasis(report)} />
+      <ReportResults report={report} />
       <section className="space-y-1 text-sm text-stone-700">
         <h2 className="font-semibold">Assumptions</h2>
-        <p>{ASSUMPTIONS[a.check]}</p>
+        <p>{check.assumptions}</p>
       </section>
       <CautionNote machinery />
     </article>

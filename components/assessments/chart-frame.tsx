@@ -5,40 +5,32 @@ import {
   Legend,
   Line,
   LineChart,
+  ReferenceLine,
   ResponsiveContainer,
   Tooltip,
   XAxis,
   YAxis,
 } from 'recharts';
 import { useUnits } from '@/components/units/units-provider';
+import type { ChartSpec } from '@/lib/checks/report';
 
 const COLOURS = ['#2f5f2c', '#8a4b16', '#1d4ed8', '#7c3aed', '#be123c', '#0f766e'];
 const tick = (v: number) => String(Number(v.toPrecision(3)));
 
-export interface CompareSeries {
-  name: string;
-  points: { x: number; y: number }[];
-}
-
-/** Several assessments' curves on one chart, in the reader's units. */
-export function CompareChart({
-  title,
-  series,
-  x,
-  y,
-  testId,
-}: {
-  title: string;
-  series: CompareSeries[];
-  x: [string, string];
-  y: [string, string];
-  testId: string;
-}) {
+/**
+ * Any chart a check describes (see ChartSpec), in the reader's units: the report view and the
+ * comparison draw every check's curves with this one frame.
+ */
+export function ChartFrame({ spec, testId }: { spec: ChartSpec; testId?: string }) {
   const u = useUnits();
-  const label = (name: string, si: string) => (si === '–' ? name : `${name} (${u.unit(si)})`);
+  const label = (a: ChartSpec['x']) =>
+    a.unit === '–' ? a.label : `${a.label} (${u.unit(a.unit)})`;
   return (
-    <figure className="rounded-lg border border-stone-200 bg-white p-2" data-testid={testId}>
-      <figcaption className="px-1 text-sm font-medium">{title}</figcaption>
+    <figure
+      className="rounded-lg border border-stone-200 bg-white p-2"
+      data-testid={testId ?? `chart-${spec.id}`}
+    >
+      <figcaption className="px-1 text-sm font-medium">{spec.title}</figcaption>
       <div className="h-64 w-full">
         <ResponsiveContainer width="100%" height="100%">
           <LineChart margin={{ top: 8, right: 12, bottom: 22, left: 4 }}>
@@ -49,27 +41,36 @@ export function CompareChart({
               domain={['dataMin', 'dataMax']}
               tickFormatter={tick}
               allowDuplicatedCategory={false}
-              label={{ value: label(x[0], x[1]), position: 'insideBottom', offset: -10 }}
+              label={{ value: label(spec.x), position: 'insideBottom', offset: -10 }}
             />
             <YAxis
               width={64}
               tickFormatter={tick}
-              label={{ value: label(y[0], y[1]), angle: -90, position: 'insideLeft' }}
+              label={{ value: label(spec.y), angle: -90, position: 'insideLeft' }}
             />
             <Tooltip formatter={(v) => tick(Number(v))} labelFormatter={(v) => tick(Number(v))} />
             <Legend verticalAlign="top" />
-            {series.map((s, i) => (
+            {spec.series.map((s, i) => (
               <Line
-                key={s.name}
-                name={s.name}
-                data={s.points.map((p) => ({
-                  x: u.toDisplay(p.x, x[1]),
-                  y: u.toDisplay(p.y, y[1]),
+                key={s.label}
+                name={s.label}
+                data={s.points.map(([x, y]) => ({
+                  x: u.toDisplay(x, spec.x.unit),
+                  y: u.toDisplay(y, spec.y.unit),
                 }))}
                 dataKey="y"
                 stroke={COLOURS[i % COLOURS.length]}
                 dot={false}
                 isAnimationActive={false}
+              />
+            ))}
+            {(spec.markers ?? []).map((m) => (
+              <ReferenceLine
+                key={m.label}
+                x={u.toDisplay(m.x, spec.x.unit)}
+                stroke="#57534e"
+                strokeDasharray="4 4"
+                label={m.label}
               />
             ))}
           </LineChart>

@@ -1,0 +1,83 @@
+import { ASSUMPTIONS } from '../assumptions';
+import { curvesOf, type CheckDescriptor } from '../report';
+import { dropResultSchema, type DropResult } from './result';
+
+/** How a saved drop check is shown, printed, exported and compared. */
+export const dropDescriptor: CheckDescriptor<DropResult> = {
+  title: 'Drop check',
+  resultSchemaId: 'drop/1',
+  resultSchema: dropResultSchema,
+  assumptions: ASSUMPTIONS.drop,
+  report(r) {
+    const i = r.impact;
+    const u = r.inputs_used;
+    return {
+      scenario: [
+        { label: 'Drop height', value: u.height_mm, unit: 'mm' },
+        { label: 'Surface', value: null, unit: '–', text: `${u.surface} (${u.surface_basis})` },
+      ],
+      figures: [
+        { label: 'Impact energy', value: i.impact_energy_j, unit: 'J' },
+        { label: 'Peak force', value: i.peak_force_n, unit: 'N' },
+        { label: 'Peak pressure', value: i.peak_pressure_kpa, unit: 'kPa' },
+        { label: 'Contact radius', value: i.contact_radius_mm, unit: 'mm' },
+        { label: 'Contact time', value: i.contact_time_ms, unit: 'ms' },
+        { label: 'Impact speed', value: i.impact_velocity_m_s, unit: 'm/s' },
+        {
+          label: 'Published safe height',
+          value: r.dynamic?.safe_height_mm ?? null,
+          unit: 'mm',
+          text: r.dynamic ? undefined : 'none published for this surface',
+        },
+        {
+          label: 'Static margin (stricter)',
+          value: r.static?.margin ?? null,
+          unit: '–',
+          text: r.static ? undefined : 'no static threshold',
+        },
+      ],
+      used: [
+        { label: "Young's modulus", value: u.modulus_mpa },
+        { label: "Poisson's ratio", value: u.poisson_ratio },
+        { label: 'Diameter', value: u.diameter_mm },
+        { label: 'Mass', value: u.mass_g },
+        { label: 'Static bruise threshold', value: u.static_bruise_threshold_kpa },
+      ],
+      margin: r.margin,
+      charts: [
+        {
+          id: 'drop-pressure',
+          title: 'Peak pressure against drop height',
+          x: { label: 'drop height', unit: 'mm' },
+          y: { label: 'peak pressure', unit: 'kPa' },
+          series: [
+            {
+              label: 'peak pressure',
+              points: r.series.map((p) => [p.height_mm, p.peak_pressure_kpa]),
+            },
+          ],
+          markers: [{ x: u.height_mm, label: 'this drop' }],
+        },
+        {
+          id: 'drop-energy',
+          title: 'Impact energy against drop height',
+          x: { label: 'drop height', unit: 'mm' },
+          y: { label: 'impact energy', unit: 'J' },
+          series: [
+            {
+              label: 'impact energy',
+              points: r.series.map((p) => [p.height_mm, p.impact_energy_j]),
+            },
+          ],
+          markers: [{ x: u.height_mm, label: 'this drop' }],
+        },
+      ],
+      curves: curvesOf(r.series, [
+        ['height_mm', 'height_mm'],
+        ['peak_pressure_kpa', 'peak_pressure_kpa'],
+        ['impact_energy_j', 'impact_energy_j'],
+      ]),
+      warnings: r.warnings,
+    };
+  },
+};

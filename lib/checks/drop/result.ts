@@ -1,0 +1,59 @@
+import { z } from 'zod';
+import { pinnedSchema, usedValueSchema, verdictSchema } from '../used-value';
+
+const n = z.number();
+const nn = z.number().nullable();
+
+/** The drop check's result as it is answered and saved (schema `drop/1`). */
+export const dropResultSchema = z.object({
+  check: z.literal('drop'),
+  pinned: pinnedSchema,
+  inputs_used: z.object({
+    modulus_mpa: usedValueSchema,
+    poisson_ratio: usedValueSchema,
+    diameter_mm: usedValueSchema,
+    mass_g: usedValueSchema,
+    static_bruise_threshold_kpa: usedValueSchema.nullable(),
+    height_mm: n,
+    surface: z.string(),
+    surface_basis: z.string(),
+  }),
+  impact: z.object({
+    impact_velocity_m_s: n,
+    impact_energy_j: n,
+    peak_force_n: n,
+    contact_radius_mm: n,
+    peak_pressure_kpa: n,
+    contact_time_ms: n,
+    max_approach_mm: n,
+  }),
+  margin: z
+    .object({ value: n, basis: z.enum(['dynamic', 'static']), verdict: verdictSchema })
+    .nullable(),
+  dynamic: z
+    .object({
+      safe_height_mm: n,
+      margin: n,
+      basis: z.string(),
+      source: z.string().nullable(),
+      note: z.string().nullable(),
+    })
+    .nullable(),
+  static: z.object({ margin: n, threshold_kpa: n, source: z.string().nullable() }).nullable(),
+  safe_heights: z.array(
+    z.object({
+      surface: z.string(),
+      label: z.string(),
+      dynamic_safe_height_mm: nn,
+      dynamic_basis: z.string().nullable(),
+      dynamic_source: z.string().nullable(),
+      dynamic_note: z.string().nullable(),
+      static_safe_height_mm: nn,
+    }),
+  ),
+  series: z.array(z.object({ height_mm: n, peak_pressure_kpa: n, impact_energy_j: n })),
+  warnings: z.array(z.string()),
+  units: z.record(z.string(), z.string()),
+});
+
+export type DropResult = z.infer<typeof dropResultSchema>;

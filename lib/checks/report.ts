@@ -1,0 +1,115 @@
+/**
+ * What a saved check shows, described as plain data: the report page, the PDF, the curves CSV
+ * and the comparison all render this, so none of them branches on the check's name. A check
+ * supplies it from its validated result (see CheckDescriptor); units are SI, converted to the
+ * reader's system only where it is shown.
+ */
+import type { z } from 'zod';
+import type { UsedValue } from './used-value';
+import type { Verdict } from './verdict';
+
+/** One figure: a number with its SI unit ('–' for a ratio), or words where there is none. */
+export interface Figure {
+  label: string;
+  value: number | null;
+  unit: string;
+  /** Shown in place of the number (and after it, when both are given: "onto steel"). */
+  text?: string;
+}
+
+export interface Axis {
+  label: string;
+  unit: string;
+}
+
+/** A line chart: every series over the same axes; markers are vertical lines at an x. */
+export interface ChartSpec {
+  /** Stable across assessments of one check, so a comparison overlays like with like. */
+  id: string;
+  title: string;
+  x: Axis;
+  y: Axis;
+  series: { label: string; points: [number, number][] }[];
+  markers?: { x: number; label: string }[];
+}
+
+export interface MarginView {
+  value: number;
+  verdict: Verdict;
+  basis: string;
+}
+
+export interface CheckReport {
+  /** Every input of the scenario (the machine, the drop, the bin) with its unit. */
+  scenario: Figure[];
+  /** The results worth reading at a glance. */
+  figures: Figure[];
+  /** The fruit's figures as used: value, rung and source. */
+  used: { label: string; value: UsedValue | null }[];
+  margin: MarginView | null;
+  charts: ChartSpec[];
+  /** The curves as columns (each named with its unit) and rows. */
+  curves: { columns: string[]; rows: (number | null)[][] };
+  warnings: string[];
+}
+
+/** One check's contract with every place that shows a saved result. */
+export interface CheckDescriptor<R> {
+  title: string;
+  /** Names the result's shape; stored with every saved result. */
+  resultSchemaId: string;
+  resultSchema: z.ZodType<R>;
+  assumptions: string;
+  report(result: R): CheckReport;
+}
+
+/** A series of objects as CSV columns; `columns` maps a result key to its header. */
+export function curvesOf<T extends object>(
+  rows: readonly T[],
+  columns: readonly (readonly [keyof T & string, string])[],
+): CheckReport['curves'] {
+  return {
+    columns: columns.map(([, header]) => header),
+    rows: rows.map((row) =>
+      columns.map(([key]) => {
+        const v = row[key];
+        return typeof v === 'number' ? v : null;
+      }),
+    ),
+  };
+}
+
+/** Points of a series whose y is known. */
+export function pointsOf<T>(rows: readonly T[], x: (r: T) => number, y: (r: T) => number | null) {
+  return rows.flatMap((r): [number, number][] => {
+    const v = y(r);
+    return v === null ? [] : [[x(r), v]];
+  });
+}
+
+/** What the margin divides, in words, from its basis. */
+export function marginBasis(report: CheckReport): string {
+  return report.margin?.basis === 'dynamic'
+    ? 'Published dynamic threshold ÷ this drop.'
+    : 'Static bruise threshold ÷ contact pressure.';
+}
+
+/**
+ * The comparison's charts: each chart of the first report, with the like-named chart's series
+ * of every report overlaid under that report's name (markers dropped: they differ per report).
+ */
+export function overlayCharts(shown: { name: string; report: CheckReport }[]): ChartSpec[] {
+  if (!shown.length) return [];
+  return shown[0].report.charts.map((chart) => ({
+    ...chart,
+    markers: [],
+    series: shown.flatMap(({ name, report }) => {
+      const same = report.charts.find((c) => c.id === chart.id);
+      if (!same) return [];
+      return same.series.map((s) => ({
+        label: same.series.length > 1 ? `${name}: ${s.label}` : name,
+        points: s.points,
+      }));
+    }),
+  }));
+}

@@ -1,0 +1,98 @@
+import { z } from 'zod';
+import { pinnedSchema, usedValueSchema, verdictSchema } from '../used-value';
+
+const n = z.number();
+const nn = z.number().nullable();
+
+/** One squeeze state of the axisymmetric model (display units named in the keys). */
+const stateSchema = z.looseObject({
+  travel_per_pad_mm: nn,
+  force_n: nn,
+  contact_radius_mm: nn,
+  peak_pressure_kpa: nn,
+  mean_pressure_kpa: nn,
+  max_shear_kpa: nn,
+  max_shear_depth_mm: nn,
+  max_shear_unavailable: z.string().nullable(),
+  contact_points: n,
+  facing_strain: nn,
+  lift_ratio: nn.optional(),
+});
+
+const gripSchema = stateSchema.extend({ bruise_margin: nn, shear_margin: nn });
+
+/** The squeeze check's result as it is answered and saved (schema `squeeze/1`). */
+export const squeezeResultSchema = z.object({
+  check: z.literal('squeeze'),
+  pinned: pinnedSchema,
+  inputs_used: z.object({
+    modulus_mpa: usedValueSchema,
+    poisson_ratio: usedValueSchema,
+    diameter_mm: usedValueSchema,
+    axial_diameter_mm: n,
+    mass_g: usedValueSchema,
+    density_kg_m3: usedValueSchema,
+    friction: usedValueSchema,
+    static_bruise_threshold_kpa: usedValueSchema.nullable(),
+    failure_stress_kpa: usedValueSchema.nullable(),
+    pad_diameter_mm: nn,
+    pad_edge_mm: nn,
+    facing: z.string(),
+    facing_basis: z.string(),
+    safety_factor: n,
+    acceleration_m_s2: n,
+    max_travel_mm: n,
+  }),
+  margin: z.object({ value: n, basis: z.literal('static'), verdict: verdictSchema }).nullable(),
+  // The model's own answer (fem's squeezeResultJson): the parts the app reads are typed; the
+  // rest (mesh, Hertz comparison, units) is kept as it came.
+  model: z.looseObject({
+    steps: z.array(stateSchema),
+    final: stateSchema,
+    profile: z.array(z.object({ r_mm: nn, pressure_kpa: nn })),
+    liftability: z
+      .looseObject({ grip: gripSchema.nullable(), grip_reason: z.string().nullable() })
+      .nullable(),
+    warnings: z.array(z.object({ code: z.string(), message: z.string() })),
+  }),
+  grip_profile: z.array(z.object({ r_mm: nn, pressure_kpa: nn })).nullable(),
+  sweep: z
+    .object({
+      points: z.array(
+        z.object({
+          pad_diameter_mm: nn,
+          bruise_margin: nn,
+          grip_force_n: nn,
+          grip_peak_pressure_kpa: nn,
+          reason: z.string().nullable(),
+        }),
+      ),
+      smallest_safe_pad_mm: nn,
+    })
+    .nullable(),
+  slip: z
+    .object({
+      holds: z.boolean().nullable(),
+      reason: z.string().nullable(),
+      lift_load_n: nn.optional(),
+      design_load_n: nn.optional(),
+      utilisation: nn.optional(),
+      contact_radius_mm: nn.optional(),
+      stick_radius_mm: nn.optional(),
+      slip_annulus_mm: z.object({ inner: nn, outer: nn }).optional(),
+      nodes: z
+        .array(
+          z.object({
+            r_mm: nn,
+            state: z.enum(['stick', 'slip', 'open']),
+            traction_kpa: nn,
+            pressure_kpa: nn,
+          }),
+        )
+        .optional(),
+    })
+    .nullable(),
+  warnings: z.array(z.string()),
+});
+
+export type SqueezeResult = z.infer<typeof squeezeResultSchema>;

@@ -1,0 +1,44 @@
+import { z } from 'zod';
+import { pinnedSchema, usedValueSchema, verdictSchema } from '../used-value';
+
+const n = z.number();
+
+/** The stack check's result as it is answered and saved (schema `stack/1`). */
+export const stackResultSchema = z.object({
+  check: z.literal('stack'),
+  pinned: pinnedSchema,
+  inputs_used: z.object({
+    modulus_mpa: usedValueSchema,
+    poisson_ratio: usedValueSchema,
+    diameter_mm: usedValueSchema,
+    mass_g: usedValueSchema,
+    static_bruise_threshold_kpa: usedValueSchema.nullable(),
+    bulk_density_kg_m3: usedValueSchema,
+    wall_friction: usedValueSchema,
+    lateral_pressure_ratio: usedValueSchema,
+    fill_depth_mm: n,
+    bin_length_mm: n,
+    bin_width_mm: n,
+  }),
+  bottom: z.object({
+    vertical_pressure_kpa: n,
+    contact_force_n: n,
+    contact_radius_mm: n,
+    contact_pressure_kpa: n,
+  }),
+  margin: z.object({ value: n, basis: z.literal('static'), verdict: verdictSchema }).nullable(),
+  /** mm; null: any depth is safe; absent: no threshold to judge by. */
+  deepest_safe_fill_mm: n.nullable().optional(),
+  series: z.array(
+    z.object({
+      depth_mm: n,
+      vertical_pressure_kpa: n,
+      contact_pressure_kpa: n,
+      margin: n.nullable(),
+    }),
+  ),
+  warnings: z.array(z.string()),
+  units: z.record(z.string(), z.string()),
+});
+
+export type StackResult = z.infer<typeof stackResultSchema>;
