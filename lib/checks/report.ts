@@ -113,3 +113,20 @@ export function overlayCharts(shown: { name: string; report: CheckReport }[]): C
     }),
   }));
 }
+
+/** The fruit's figures as every report lists them first. */
+export function fruitUsedRows(u: {
+  modulus_mpa: UsedValue;
+  poisson_ratio: UsedValue;
+  diameter_mm: UsedValue;
+  mass_g: UsedValue;
+  static_bruise_threshold_kpa: UsedValue | null;
+}): CheckReport['used'] {
+  return [
+    { label: "Young's modulus", value: u.modulus_mpa },
+    { label: "Poisson's ratio", value: u.poisson_ratio },
+    { label: 'Diameter', value: u.diameter_mm },
+    { label: 'Mass', value: u.mass_g },
+    { label: 'Static bruise threshold', value: u.static_bruise_threshold_kpa },
+  ];
+}

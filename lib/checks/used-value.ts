@@ -30,3 +30,12 @@ export const pinnedSchema = z
 export type PinnedSummary = z.infer<typeof pinnedSchema>;
 
 export const verdictSchema = z.enum(['comfortable', 'tight', 'bruise risk']);
+
+/** The fruit's figures every check uses, as its result names them. */
+export const fruitUsedShape = {
+  modulus_mpa: usedValueSchema,
+  poisson_ratio: usedValueSchema,
+  diameter_mm: usedValueSchema,
+  mass_g: usedValueSchema,
+  static_bruise_threshold_kpa: usedValueSchema.nullable(),
+};

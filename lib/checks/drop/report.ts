@@ -1,5 +1,5 @@
 import { ASSUMPTIONS } from '../assumptions';
-import { curvesOf, type CheckDescriptor } from '../report';
+import { curvesOf, type CheckDescriptor, fruitUsedRows } from '../report';
 import { dropResultSchema, type DropResult } from './result';
 
 /** How a saved drop check is shown, printed, exported and compared. */
@@ -36,13 +36,7 @@ export const dropDescriptor: CheckDescriptor<DropResult> = {
           text: r.static ? undefined : 'no static threshold',
         },
       ],
-      used: [
-        { label: "Young's modulus", value: u.modulus_mpa },
-        { label: "Poisson's ratio", value: u.poisson_ratio },
-        { label: 'Diameter', value: u.diameter_mm },
-        { label: 'Mass', value: u.mass_g },
-        { label: 'Static bruise threshold', value: u.static_bruise_threshold_kpa },
-      ],
+      used: [...fruitUsedRows(u)],
       margin: r.margin,
       charts: [
         {

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { pinnedSchema, usedValueSchema, verdictSchema } from '../used-value';
+import { fruitUsedShape, pinnedSchema, verdictSchema } from '../used-value';
 
 const n = z.number();
 const nn = z.number().nullable();
@@ -9,11 +9,7 @@ export const dropResultSchema = z.object({
   check: z.literal('drop'),
   pinned: pinnedSchema,
   inputs_used: z.object({
-    modulus_mpa: usedValueSchema,
-    poisson_ratio: usedValueSchema,
-    diameter_mm: usedValueSchema,
-    mass_g: usedValueSchema,
-    static_bruise_threshold_kpa: usedValueSchema.nullable(),
+    ...fruitUsedShape,
     height_mm: n,
     surface: z.string(),
     surface_basis: z.string(),

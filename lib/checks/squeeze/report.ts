@@ -1,5 +1,5 @@
 import { ASSUMPTIONS } from '../assumptions';
-import { curvesOf, pointsOf, type CheckDescriptor, type ChartSpec } from '../report';
+import { curvesOf, pointsOf, type CheckDescriptor, type ChartSpec, fruitUsedRows } from '../report';
 import { squeezeResultSchema, type SqueezeResult } from './result';
 
 function charts(r: SqueezeResult): ChartSpec[] {
@@ -147,13 +147,9 @@ export const squeezeDescriptor: CheckDescriptor<SqueezeResult> = {
         },
       ],
       used: [
-        { label: "Young's modulus", value: u.modulus_mpa },
-        { label: "Poisson's ratio", value: u.poisson_ratio },
-        { label: 'Diameter', value: u.diameter_mm },
-        { label: 'Mass', value: u.mass_g },
+        ...fruitUsedRows(u),
         { label: 'Density', value: u.density_kg_m3 },
         { label: 'Friction', value: u.friction },
-        { label: 'Static bruise threshold', value: u.static_bruise_threshold_kpa },
         { label: 'Failure stress', value: u.failure_stress_kpa },
       ],
       margin: r.margin,

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { pinnedSchema, usedValueSchema, verdictSchema } from '../used-value';
+import { fruitUsedShape, pinnedSchema, usedValueSchema, verdictSchema } from '../used-value';
 
 const n = z.number();
 const nn = z.number().nullable();
@@ -26,14 +26,10 @@ export const squeezeResultSchema = z.object({
   check: z.literal('squeeze'),
   pinned: pinnedSchema,
   inputs_used: z.object({
-    modulus_mpa: usedValueSchema,
-    poisson_ratio: usedValueSchema,
-    diameter_mm: usedValueSchema,
+    ...fruitUsedShape,
     axial_diameter_mm: n,
-    mass_g: usedValueSchema,
     density_kg_m3: usedValueSchema,
     friction: usedValueSchema,
-    static_bruise_threshold_kpa: usedValueSchema.nullable(),
     failure_stress_kpa: usedValueSchema.nullable(),
     pad_diameter_mm: nn,
     pad_edge_mm: nn,

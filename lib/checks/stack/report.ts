@@ -1,5 +1,5 @@
 import { ASSUMPTIONS } from '../assumptions';
-import { curvesOf, pointsOf, type CheckDescriptor } from '../report';
+import { curvesOf, pointsOf, type CheckDescriptor, fruitUsedRows } from '../report';
 import { stackResultSchema, type StackResult } from './result';
 
 /** How a saved stack check is shown, printed, exported and compared. */
@@ -33,11 +33,7 @@ export const stackDescriptor: CheckDescriptor<StackResult> = {
         },
       ],
       used: [
-        { label: "Young's modulus", value: u.modulus_mpa },
-        { label: "Poisson's ratio", value: u.poisson_ratio },
-        { label: 'Diameter', value: u.diameter_mm },
-        { label: 'Mass', value: u.mass_g },
-        { label: 'Static bruise threshold', value: u.static_bruise_threshold_kpa },
+        ...fruitUsedRows(u),
         { label: 'Bulk density', value: u.bulk_density_kg_m3 },
         { label: 'Wall friction', value: u.wall_friction },
         { label: 'Lateral pressure ratio', value: u.lateral_pressure_ratio },

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { pinnedSchema, usedValueSchema, verdictSchema } from '../used-value';
+import { fruitUsedShape, pinnedSchema, usedValueSchema, verdictSchema } from '../used-value';
 
 const n = z.number();
 
@@ -8,11 +8,7 @@ export const stackResultSchema = z.object({
   check: z.literal('stack'),
   pinned: pinnedSchema,
   inputs_used: z.object({
-    modulus_mpa: usedValueSchema,
-    poisson_ratio: usedValueSchema,
-    diameter_mm: usedValueSchema,
-    mass_g: usedValueSchema,
-    static_bruise_threshold_kpa: usedValueSchema.nullable(),
+    ...fruitUsedShape,
     bulk_density_kg_m3: usedValueSchema,
     wall_friction: usedValueSchema,
     lateral_pressure_ratio: usedValueSchema,
