@@ -1,4 +1,4 @@
-import type { PhotoRecord } from '@/lib/data/images';
+import type { PhotoRecord } from '@/lib/photos/record';
 import { variantSize } from '@/lib/photos/limits';
 import { photoUrl } from '@/lib/photos/shape';
 

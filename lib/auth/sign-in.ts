@@ -1,7 +1,7 @@
 import 'server-only';
 import { db } from '@/lib/db';
-import { recordAudit } from '@/lib/data/audit-trail';
-import { findCredentials, type SessionUser } from '@/lib/data/users';
+import { recordAudit } from '@/lib/audit-trail';
+import { findCredentials, type SessionUser } from './accounts';
 import { beginAttempt, normaliseEmail, refundAttempt } from './sign-in-limits';
 
 export type SignInOutcome =

@@ -1,21 +1,3 @@
-import type { Knex } from 'knex';
-
-export interface AuditEntry {
-  actorId: number | null;
-  action: string;
-  entity: string;
-  entityId?: string | number | null;
-  detail?: Record<string, unknown>;
-}
-
-/** Record one write; always called with the transaction that made the write. */
-export async function recordAudit(trx: Knex.Transaction, entry: AuditEntry): Promise<void> {
-  await trx('audit_log').insert({
-    actor_id: entry.actorId,
-    action: entry.action,
-    entity: entry.entity,
-    entity_id: entry.entityId == null ? null : String(entry.entityId),
-    detail: entry.detail ? JSON.stringify(entry.detail) : null,
-    created_at: new Date(),
-  });
-}
+// The audit trail lives in lib/audit-trail.ts, below lib/auth and lib/photos which write to it
+// too. This re-export remains only while lib/data/assessments.ts still imports './audit-trail'.
+export { recordAudit, type AuditEntry } from '@/lib/audit-trail';

@@ -2,7 +2,7 @@ import 'server-only';
 import { db } from '@/lib/db';
 import { assertCan, type Actor } from '@/lib/auth/actor';
 import { labTestSource, valuesWithLabTest, type LabTestFacts } from '@/lib/lab-tests/draft-value';
-import { recordAudit } from './audit-trail';
+import { recordAudit } from '@/lib/audit-trail';
 import { getRevision } from './cultivars';
 import { getCompressionTest, type CompressionTestWithData } from './compression-tests';
 import { createDraft, updateDraft } from './revisions';

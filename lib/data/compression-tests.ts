@@ -8,7 +8,7 @@ import { parseCompressionCsv, type CurvePoint } from '@/lib/lab-tests/parse-curv
 import { compressionUploadSchema, geometryOf } from '@/lib/lab-tests/upload-schema';
 import { fieldErrorsOf } from '@/lib/validation/parse';
 import { deleteObject, getObject, putObject } from '@/lib/storage/object-store';
-import { recordAudit } from './audit-trail';
+import { recordAudit } from '@/lib/audit-trail';
 
 export interface CompressionTestRecord {
   id: number;

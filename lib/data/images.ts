@@ -3,21 +3,9 @@ import { db } from '@/lib/db';
 import { assertCan, type Actor } from '@/lib/auth/actor';
 import { NotFoundError } from '@/lib/errors';
 import { variantKey, type VariantName } from '@/lib/photos/limits';
+import type { PhotoRecord } from '@/lib/photos/record';
 import { storePhoto, type PhotoBucket } from '@/lib/photos/store';
 import { deleteObject, getObject, putObject } from '@/lib/storage/object-store';
-
-export interface PhotoRecord {
-  id: number;
-  caption: string | null;
-  credit: string | null;
-  isDemo: boolean;
-  /** Pixel size of the uploaded image as seen (after its orientation). */
-  width: number;
-  height: number;
-  bytes: number;
-  originalType: string;
-  createdAt: string;
-}
 
 const bucket: PhotoBucket = { put: putObject, remove: deleteObject };
 

@@ -4,7 +4,7 @@ import { db } from '@/lib/db';
 import { assertCan, type Actor } from '@/lib/auth/actor';
 import { can, invitableRoles, type Role } from '@/lib/auth/roles';
 import { ConflictError, ForbiddenError, NotFoundError } from '@/lib/errors';
-import { recordAudit } from './audit-trail';
+import { recordAudit } from '@/lib/audit-trail';
 import { mailInvitation, newToken } from './invitation-mail';
 import {
   assertUnderHourlyLimit,

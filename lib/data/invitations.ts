@@ -8,7 +8,7 @@ import { PROBLEM_MESSAGES, type InvitationProblem } from '@/lib/invitations/mess
 import { invitationTokenSchema, TOKEN_PATTERN } from '@/lib/validation/invitations';
 import { parseInput } from '@/lib/validation/parse';
 import { acceptInvitationSchema, invitationSchema } from '@/lib/validation/users';
-import { recordAudit } from './audit-trail';
+import { recordAudit } from '@/lib/audit-trail';
 import { hashToken, mailInvitation, newToken } from './invitation-mail';
 import {
   assertUnderHourlyLimit,

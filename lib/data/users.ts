@@ -3,13 +3,17 @@ import { isUnitSystem, type UnitSystem } from '@/lib/units';
 import type { Knex } from 'knex';
 import { db } from '@/lib/db';
 import { assertCan, type Actor } from '@/lib/auth/actor';
-import { hashPassword, spendVerifyTime, verifyPassword } from '@/lib/auth/password';
+import { hashPassword, verifyPassword } from '@/lib/auth/password';
 import { isRole, type Role } from '@/lib/auth/roles';
 import { ConflictError, NotFoundError, ValidationError } from '@/lib/errors';
 import { parseInput } from '@/lib/validation/parse';
 import { changePasswordSchema, unitSystemSchema, userUpdateSchema } from '@/lib/validation/users';
 import { clearAccountLimits, listAccountLocks, type AccountLock } from '@/lib/auth/sign-in-limits';
-import { recordAudit } from './audit-trail';
+import { recordAudit } from '@/lib/audit-trail';
+
+// Tests and server-side jobs acting as a user take their actor here with the rest of the user
+// data; the lookups themselves live in lib/auth/accounts.ts, below lib/data.
+export { getActiveActor, verifyCredentials } from '@/lib/auth/accounts';
 
 export interface UserRow {
   id: number;
@@ -33,66 +37,6 @@ function toRow(r: Record<string, unknown>): UserRow {
     disabled: Boolean(r.disabled),
     created_at: new Date(r.created_at as string | number).toISOString(),
   };
-}
-
-/** What the session carries about a user: who, their role now, and their session generation. */
-export interface SessionUser extends Actor {
-  generation: number;
-}
-
-function toSessionUser(r: Record<string, unknown>): SessionUser | null {
-  if (!r || r.disabled || !isRole(r.role)) return null;
-  return {
-    id: Number(r.id),
-    email: String(r.email),
-    name: String(r.name),
-    role: r.role,
-    generation: Number(r.session_generation),
-  };
-}
-
-/** An enabled user by id with their session generation, or null (unknown or disabled). */
-export async function getSessionUser(id: number): Promise<SessionUser | null> {
-  return toSessionUser(await db('users').where({ id }).first());
-}
-
-/**
- * The actor for a session of this generation; null when unknown, disabled or signed out since.
- * Without a generation (server-side jobs and tests acting as a user) only the account is checked.
- */
-export async function getActiveActor(id: number, generation?: number): Promise<Actor | null> {
-  const user = await getSessionUser(id);
-  if (!user || (generation !== undefined && user.generation !== generation)) return null;
-  return { id: user.id, email: user.email, name: user.name, role: user.role };
-}
-
-export type CredentialsResult =
-  | { user: SessionUser; knownId: number; reason?: undefined }
-  | {
-      user: null;
-      knownId: number | null;
-      reason: 'unknown-account' | 'wrong-password' | 'disabled';
-    };
-
-/** Check an e-mail and password; says why not (for the audit log only, never to the visitor). */
-export async function findCredentials(email: string, password: string): Promise<CredentialsResult> {
-  const r = (await db('users').where({ email: email.toLowerCase() }).first()) as
-    UserRecord | undefined;
-  if (!r) {
-    await spendVerifyTime(password);
-    return { user: null, knownId: null, reason: 'unknown-account' };
-  }
-  if (!(await verifyPassword(password, r.password_hash))) {
-    return { user: null, knownId: r.id, reason: 'wrong-password' };
-  }
-  const user = toSessionUser(r as unknown as Record<string, unknown>);
-  if (!user) return { user: null, knownId: r.id, reason: 'disabled' };
-  return { user, knownId: r.id };
-}
-
-/** The enabled user with this e-mail and password, else null. */
-export async function verifyCredentials(email: string, password: string): Promise<Actor | null> {
-  return (await findCredentials(email, password)).user;
 }
 
 /** End every session of a user: tokens of the old generation are refused from now on. */

@@ -1,4 +1,4 @@
-import type { PhotoRecord } from '@/lib/data/images';
+import type { PhotoRecord } from '@/lib/photos/record';
 import { VARIANT_NAMES, type VariantName } from './limits';
 
 /** Where a photo's variant is served from. */

@@ -1,6 +1,6 @@
 import { randomBytes } from 'node:crypto';
 import type { Knex } from 'knex';
-import { recordAudit } from '@/lib/data/audit-trail';
+import { recordAudit } from '@/lib/audit-trail';
 import { inspectImage } from './inspect';
 import { VARIANT_NAMES, variantKey } from './limits';
 import { makeVariants } from './variants';
