@@ -1,5 +1,5 @@
 import type { Knex } from 'knex';
-import { valueRow } from '../lib/properties/value-row';
+import { valueRow } from '../lib/data/value-row';
 import { revisionValueSchema } from '../lib/validation/revisions';
 import { COMMODITIES } from './property-data/commodities';
 import { SOURCES } from './property-data/sources';

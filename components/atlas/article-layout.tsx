@@ -2,7 +2,7 @@ import Link from 'next/link';
 import type { ReactNode } from 'react';
 import type { Article } from '@/lib/atlas/articles';
 import { LINE_STAGES } from '@/lib/atlas/frontmatter';
-import type { SourceRef } from '@/lib/data/property-rows';
+import type { SourceRef } from '@/lib/properties/records';
 import { Bibliography } from './bibliography';
 
 const AUDIENCE = {

@@ -1,5 +1,5 @@
 import { fullReference, sourceHref } from '@/lib/atlas/citations';
-import type { SourceRef } from '@/lib/data/property-rows';
+import type { SourceRef } from '@/lib/properties/records';
 
 /** The article's sources from the database, each with the anchor its citations link to. */
 export function Bibliography({ sources }: { sources: SourceRef[] }) {

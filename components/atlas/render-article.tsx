@@ -9,7 +9,7 @@ import { atlasComponents } from '@/mdx-components';
 import { PropertyCard } from '@/components/atlas/property-card';
 import { SourceRefLink } from '@/components/atlas/source-ref';
 import type { Actor } from '@/lib/auth/actor';
-import type { SourceRef } from '@/lib/data/property-rows';
+import type { SourceRef } from '@/lib/properties/records';
 import type { Article } from '@/lib/atlas/articles';
 import { getSourcesByKeys, UnknownSourceError } from '@/lib/atlas/sources';
 

@@ -1,5 +1,5 @@
 import { fullReference, shortCitation } from '@/lib/atlas/citations';
-import type { SourceRef as Source } from '@/lib/data/property-rows';
+import type { SourceRef as Source } from '@/lib/properties/records';
 
 /** An in-text citation, `(Wang et al., 2024)`, linking to its entry in the bibliography. */
 export function SourceRefLink({ source }: { source: Source }) {

@@ -1,4 +1,4 @@
-import type { RevisionSummary } from '@/lib/data/property-rows';
+import type { RevisionSummary } from '@/lib/properties/records';
 import { STATUS_LABELS, defaultPair } from '@/lib/properties/revision-labels';
 
 const SELECT =

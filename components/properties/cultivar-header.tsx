@@ -1,6 +1,6 @@
 import Link from 'next/link';
 import type { ReactNode } from 'react';
-import type { CultivarRecord } from '@/lib/data/cultivars';
+import type { CultivarRecord } from '@/lib/properties/records';
 import { shortDate } from '@/lib/properties/citation';
 
 /** Commodity and cultivar, which revision is published, and the reader's controls beside them. */

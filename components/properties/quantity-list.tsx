@@ -1,4 +1,4 @@
-import type { RevisionValue } from '@/lib/data/property-rows';
+import type { RevisionValue } from '@/lib/properties/records';
 import { QUANTITIES, QUANTITY_KEYS, type Quantity } from '@/lib/properties/quantities';
 import { unitLabel } from '@/lib/properties/view-csv';
 import { ValueCard } from './value-card';

@@ -1,4 +1,4 @@
-import type { SourceRef } from '@/lib/data/property-rows';
+import type { SourceRef } from '@/lib/properties/records';
 import { type DiffRow, type DiffValue } from '@/lib/properties/diff';
 import { shortCitation } from '@/lib/properties/table-rows';
 import { ValueText } from '@/components/units/value-text';

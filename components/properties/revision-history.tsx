@@ -1,6 +1,6 @@
 import Link from 'next/link';
 import type { ReactNode } from 'react';
-import type { RevisionSummary } from '@/lib/data/property-rows';
+import type { RevisionSummary } from '@/lib/properties/records';
 import { shortDate } from '@/lib/properties/citation';
 import { STATUS_LABELS } from '@/lib/properties/revision-labels';
 

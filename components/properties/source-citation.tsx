@@ -1,4 +1,4 @@
-import type { SourceRef } from '@/lib/data/property-rows';
+import type { SourceRef } from '@/lib/properties/records';
 import { SOURCE_KIND_LABELS, doiHref, safeHref } from '@/lib/properties/citation';
 
 const LINK = 'text-leaf-700 underline wrap-anywhere';

@@ -1,4 +1,4 @@
-import type { RevisionValue } from '@/lib/data/property-rows';
+import type { RevisionValue } from '@/lib/properties/records';
 import { conditionsOf } from '@/lib/properties/table-rows';
 import { SourceCitation } from './source-citation';
 import { ValueText } from '@/components/units/value-text';

@@ -1,4 +1,4 @@
-import type { SourceRef } from '@/lib/data/property-rows';
+import type { SourceRef } from '@/lib/properties/records';
 import type { RevisionStatus } from '@/lib/properties/quantities';
 
 export const STATUS_LABEL: Record<RevisionStatus, string> = {

@@ -1,6 +1,6 @@
 import type { ReactNode } from 'react';
 import Link from 'next/link';
-import type { RevisionSummary } from '@/lib/data/property-rows';
+import type { RevisionSummary } from '@/lib/properties/records';
 import { baseText, when } from './format';
 import { StatusBadge } from './status-badge';
 

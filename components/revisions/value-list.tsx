@@ -1,4 +1,4 @@
-import type { RevisionValue } from '@/lib/data/property-rows';
+import type { RevisionValue } from '@/lib/properties/records';
 import { QUANTITIES } from '@/lib/properties/quantities';
 import { citation } from './format';
 import { ValueText } from '@/components/units/value-text';

@@ -1,4 +1,4 @@
-import type { CultivarRecord } from '@/lib/data/cultivars';
+import type { CultivarRecord } from '@/lib/properties/records';
 import { QUANTITIES, type Quantity } from '@/lib/properties/quantities';
 import { shortCitation } from './citations';
 import { formatValueIn } from '@/lib/properties/format-units';

@@ -1,4 +1,4 @@
-import type { SourceRef } from '@/lib/data/property-rows';
+import type { SourceRef } from '@/lib/properties/records';
 
 /** Family names from an author list written `Wang, J.; Wang, C.; Wu, J.` (an `et al.` kept as a flag). */
 function familyNames(authors: string | null): { names: string[]; more: boolean } {

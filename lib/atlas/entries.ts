@@ -1,7 +1,8 @@
 import 'server-only';
 import { db } from '@/lib/db';
 import type { Actor } from '@/lib/auth/actor';
-import { listCommodities, type CommodityRef } from '@/lib/data/cultivars';
+import { listCommodities } from '@/lib/data/cultivars';
+import type { CommodityRef } from '@/lib/properties/records';
 import { seesDrafts } from './access';
 import { findArticle, listArticles, type Article } from './articles';
 

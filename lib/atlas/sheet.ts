@@ -1,7 +1,7 @@
 import 'server-only';
 import type { Actor } from '@/lib/auth/actor';
-import { getCultivar, type CommodityRef } from '@/lib/data/cultivars';
-import type { SourceRef } from '@/lib/data/property-rows';
+import { getCultivar } from '@/lib/data/cultivars';
+import type { CommodityRef, SourceRef } from '@/lib/properties/records';
 import type { Article } from './articles';
 import { getUnitSystem } from '@/lib/data/users';
 import { cardRows, type CardRow } from './card-rows';

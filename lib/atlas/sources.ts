@@ -1,7 +1,8 @@
 import 'server-only';
 import { db } from '@/lib/db';
 import { assertCan, type Actor } from '@/lib/auth/actor';
-import { toSource, type SourceRef } from '@/lib/data/property-rows';
+import { toSource } from '@/lib/data/property-rows';
+import type { SourceRef } from '@/lib/properties/records';
 
 /** An article cites a key the sources table does not hold: a content error, never shown as a blank. */
 export class UnknownSourceError extends Error {

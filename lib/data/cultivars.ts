@@ -3,31 +3,13 @@ import { db } from '@/lib/db';
 import { assertCan, type Actor } from '@/lib/auth/actor';
 import { can } from '@/lib/auth/roles';
 import { NotFoundError } from '@/lib/errors';
-import {
-  revisionQuery,
-  toRevision,
-  valuesOf,
-  type RevisionSummary,
-  type RevisionValue,
-} from './property-rows';
-
-export interface CommodityRef {
-  id: number;
-  slug: string;
-  name: string;
-  family: string;
-}
-
-export interface CultivarRecord {
-  id: number;
-  slug: string;
-  name: string;
-  isType: boolean;
-  commodity: CommodityRef;
-  published: RevisionSummary | null;
-  /** The published values (empty when nothing is published yet). */
-  values: RevisionValue[];
-}
+import type {
+  CommodityRef,
+  CultivarRecord,
+  RevisionSummary,
+  RevisionValue,
+} from '@/lib/properties/records';
+import { revisionQuery, toRevision, valuesOf } from './property-rows';
 
 export async function listCommodities(actor: Actor): Promise<CommodityRef[]> {
   assertCan(actor, 'properties:read-published');

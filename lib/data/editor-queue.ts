@@ -1,13 +1,8 @@
 import 'server-only';
 import { db } from '@/lib/db';
 import { assertCan, type Actor } from '@/lib/auth/actor';
-import {
-  revisionQuery,
-  toRevision,
-  toSource,
-  type RevisionSummary,
-  type SourceRef,
-} from './property-rows';
+import type { RevisionSummary, SourceRef } from '@/lib/properties/records';
+import { revisionQuery, toRevision, toSource } from './property-rows';
 
 /** A revision as the editor's lists show it: with its cultivar and the number of its base. */
 export interface QueueRow extends RevisionSummary {

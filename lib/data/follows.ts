@@ -4,8 +4,9 @@ import { assertCan, type Actor } from '@/lib/auth/actor';
 import { NotFoundError } from '@/lib/errors';
 import { diffRevisions, formatValue, type DiffValue } from '@/lib/properties/diff';
 import { appUrl, sendMail } from '@/lib/mail/send';
-import { recordAudit } from './audit-trail';
-import { valuesOf, type RevisionValue } from './property-rows';
+import { recordAudit } from '@/lib/audit-trail';
+import type { RevisionValue } from '@/lib/properties/records';
+import { valuesOf } from './property-rows';
 
 async function cultivarBySlug(slug: string) {
   const row = await db('cultivars').where({ slug }).first();

@@ -1,65 +1,9 @@
 import type { Knex } from 'knex';
-import {
-  isQuantity,
-  type Quantity,
-  type RevisionStatus,
-  type SourceKind,
-} from '@/lib/properties/quantities';
+import { isQuantity, type RevisionStatus, type SourceKind } from '@/lib/properties/quantities';
+import type { RevisionSummary, RevisionValue, SourceRef } from '@/lib/properties/records';
 
-/** A source as every page and route shows it. */
-export interface SourceRef {
-  id: number;
-  key: string;
-  kind: SourceKind;
-  authors: string | null;
-  year: number | null;
-  title: string;
-  venue: string | null;
-  pages: string | null;
-  doi: string | null;
-  url: string | null;
-  note: string | null;
-}
-
-export interface RevisionValue {
-  id: number;
-  quantity: Quantity;
-  variant: string;
-  value: number;
-  unit: string;
-  low: number | null;
-  high: number | null;
-  sd: number | null;
-  samples: number | null;
-  method: string | null;
-  ripeness: string | null;
-  temperature: string | null;
-  storage: string | null;
-  loadingRate: string | null;
-  probe: string | null;
-  note: string | null;
-  isTypicalDefault: boolean;
-  source: SourceRef | null;
-}
-
-export interface RevisionSummary {
-  id: number;
-  cultivarId: number;
-  number: number;
-  status: RevisionStatus;
-  authorId: number;
-  authorName: string;
-  reviewerName: string | null;
-  reviewComment: string | null;
-  basedOnId: number | null;
-  summary: string | null;
-  isDemo: boolean;
-  createdAt: string;
-  submittedAt: string | null;
-  reviewedAt: string | null;
-  publishedAt: string | null;
-  supersededAt: string | null;
-}
+// lib/checks/* still import RevisionValue from here; the type itself is in lib/properties.
+export type { RevisionValue } from '@/lib/properties/records';
 
 const iso = (v: unknown) => (v == null ? null : new Date(v as string).toISOString());
 const num = (v: unknown) => (v == null ? null : Number(v));

@@ -4,10 +4,10 @@ import { db } from '@/lib/db';
 import { assertCan, type Actor } from '@/lib/auth/actor';
 import { ConflictError, ForbiddenError, NotFoundError, ValidationError } from '@/lib/errors';
 import type { RevisionStatus } from '@/lib/properties/quantities';
-import { valueRow } from '@/lib/properties/value-row';
+import { valueRow } from './value-row';
 import { parseInput } from '@/lib/validation/parse';
 import { draftUpdateSchema, reviewCommentSchema } from '@/lib/validation/revisions';
-import { recordAudit } from './audit-trail';
+import { recordAudit } from '@/lib/audit-trail';
 import { notifyFollowers } from './follows';
 
 /**

@@ -1,4 +1,4 @@
-import type { RevisionValue } from '@/lib/data/property-rows';
+import type { RevisionValue } from '@/lib/properties/records';
 import type { RevisionValueInput } from '@/lib/validation/revisions';
 import { FIT_STRAIN } from './limits';
 

@@ -1,5 +1,4 @@
-import type { CultivarRecord } from '@/lib/data/cultivars';
-import type { RevisionValue } from '@/lib/data/property-rows';
+import type { CultivarRecord, RevisionValue } from './records';
 import { QUANTITIES, type Quantity } from './quantities';
 
 /** The unit suffix of a JSON key: `youngs_modulus_mpa`, `density_kg_m3`, `poisson_ratio`. */

@@ -1,4 +1,4 @@
-import type { CultivarRecord } from '@/lib/data/cultivars';
+import type { CultivarRecord } from './records';
 import { toCsv } from '@/lib/csv';
 import { QUANTITIES, type Quantity } from './quantities';
 

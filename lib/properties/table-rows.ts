@@ -1,4 +1,4 @@
-import type { RevisionValue, SourceRef } from '@/lib/data/property-rows';
+import type { RevisionValue, SourceRef } from './records';
 import { formatValue } from './diff';
 import { QUANTITY_KEYS, type Quantity } from './quantities';
 

@@ -1,5 +1,5 @@
 import type { FieldErrors } from '@/lib/errors';
-import type { RevisionValue } from '@/lib/data/property-rows';
+import type { RevisionValue } from '@/lib/properties/records';
 
 /**
  * The draft form's field names: `summary` and, per value row i, `values.<i>.<field>`. The rows

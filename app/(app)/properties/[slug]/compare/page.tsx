@@ -5,7 +5,7 @@ import { RevisionDiff } from '@/components/properties/revision-diff';
 import { requirePageActor } from '@/lib/auth/session';
 import { getRevision, listRevisions } from '@/lib/data/cultivars';
 import { toDiffValue } from '@/lib/data/follows';
-import type { SourceRef } from '@/lib/data/property-rows';
+import type { SourceRef } from '@/lib/properties/records';
 import { diffRevisions } from '@/lib/properties/diff';
 import { chosenRevision, defaultPair } from '@/lib/properties/revision-labels';
 import { titleFor } from '@/lib/page-title';

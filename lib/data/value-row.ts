@@ -1,5 +1,5 @@
 import type { RevisionValueInput } from '@/lib/validation/revisions';
-import { QUANTITIES } from './quantities';
+import { QUANTITIES } from '../properties/quantities';
 
 /**
  * A validated value as its `revision_values` row: the unit is always the quantity's canonical
