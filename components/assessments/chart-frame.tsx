@@ -46,7 +46,12 @@ export function ChartFrame({ spec, testId }: { spec: ChartSpec; testId?: string 
             <YAxis
               width={64}
               tickFormatter={tick}
-              label={{ value: label(spec.y), angle: -90, position: 'insideLeft' }}
+              label={{
+                value: label(spec.y),
+                angle: -90,
+                position: 'insideLeft',
+                style: { textAnchor: 'middle' },
+              }}
             />
             <Tooltip formatter={(v) => tick(Number(v))} labelFormatter={(v) => tick(Number(v))} />
             <Legend verticalAlign="top" />
