@@ -28,16 +28,6 @@ function pipelineRules() {
   }));
 }
 
-// Known, not yet fixed: lib/validation/checks.ts imports FACING_KEYS and DROP_SURFACE_KEYS from
-// lib/checks, which imports lib/validation — a lib/checks ↔ lib/validation folder cycle. Until
-// those key lists move below lib/validation, that one file's own imports are not followed (it is
-// still checked as an import target). The exception lapses by itself once the file stops
-// importing lib/checks.
-const KNOWN_CYCLE = 'lib/validation/checks.ts';
-const knownCycleOpen =
-  fs.existsSync(path.join(__dirname, KNOWN_CYCLE)) &&
-  /from '@\/lib\/checks\//.test(fs.readFileSync(path.join(__dirname, KNOWN_CYCLE), 'utf8'));
-
 /** @type {import('dependency-cruiser').IConfiguration} */
 module.exports = {
   forbidden: [
@@ -129,7 +119,7 @@ module.exports = {
   ],
   options: {
     doNotFollow: {
-      path: knownCycleOpen ? ['node_modules', '^lib/validation/checks\\.ts$'] : 'node_modules',
+      path: 'node_modules',
     },
     // Type-only imports count: a cycle through types still ties two folders together.
     tsPreCompilationDeps: true,

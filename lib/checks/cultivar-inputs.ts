@@ -1,7 +1,7 @@
 import 'server-only';
 import type { Actor } from '@/lib/auth/actor';
 import { getCultivar } from '@/lib/data/cultivars';
-import type { RevisionValue } from '@/lib/data/property-rows';
+import type { RevisionValue } from '@/lib/properties/records';
 import { NotFoundError, ValidationError } from '@/lib/errors';
 import type { Quantity } from '@/lib/properties/quantities';
 import type { UsedValue } from './used-value';

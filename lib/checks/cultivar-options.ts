@@ -2,7 +2,7 @@ import 'server-only';
 import type { Actor } from '@/lib/auth/actor';
 import { listPublishedCultivars } from '@/lib/data/cultivars';
 import { pickValue } from './cultivar-inputs';
-import type { RevisionValue } from '@/lib/data/property-rows';
+import type { RevisionValue } from '@/lib/properties/records';
 import type { Quantity } from '@/lib/properties/quantities';
 
 /** The published figures a check form shows as placeholders, keyed like the form's fields. */

@@ -1,6 +1,6 @@
 import 'server-only';
 import type { Actor } from '@/lib/auth/actor';
-import type { RevisionValue } from '@/lib/data/property-rows';
+import type { RevisionValue } from '@/lib/properties/records';
 import { ValidationError } from '@/lib/errors';
 import {
   chooseValue,

@@ -7,7 +7,7 @@ import { NotFoundError } from '@/lib/errors';
 import type { CheckNameValue } from '@/lib/validation/check-names';
 import { parseInput } from '@/lib/validation/parse';
 import { assessmentListSchema } from '@/lib/validation/assessments';
-import { recordAudit } from './audit-trail';
+import { recordAudit } from '@/lib/audit-trail';
 
 interface Pinned {
   cultivar: string;

@@ -2,9 +2,6 @@ import type { Knex } from 'knex';
 import { isQuantity, type RevisionStatus, type SourceKind } from '@/lib/properties/quantities';
 import type { RevisionSummary, RevisionValue, SourceRef } from '@/lib/properties/records';
 
-// lib/checks/* still import RevisionValue from here; the type itself is in lib/properties.
-export type { RevisionValue } from '@/lib/properties/records';
-
 const iso = (v: unknown) => (v == null ? null : new Date(v as string).toISOString());
 const num = (v: unknown) => (v == null ? null : Number(v));
 

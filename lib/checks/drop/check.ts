@@ -1,8 +1,8 @@
 import 'server-only';
 import type { Actor } from '@/lib/auth/actor';
-import type { RevisionValue } from '@/lib/data/property-rows';
+import type { RevisionValue } from '@/lib/properties/records';
 import { parseInput } from '@/lib/validation/parse';
-import { dropCheckSchema } from '@/lib/validation/checks';
+import { dropCheckSchema } from '@/lib/checks/inputs';
 import { heightForEnergy, heightForPressure, impactAt, surfaceSI, type FruitSI } from './model';
 import { pinnedSummary } from '../cultivar-inputs';
 import { resolveFruit, type ResolvedFruit } from '../resolve-fruit';

@@ -1,7 +1,7 @@
 import 'server-only';
 import type { Actor } from '@/lib/auth/actor';
 import { parseInput } from '@/lib/validation/parse';
-import { squeezeCheckSchema } from '@/lib/validation/checks';
+import { squeezeCheckSchema } from '@/lib/checks/inputs';
 import { checkPool } from '../compute';
 import type { TaskAnswer } from '@/lib/compute/task-table';
 import type { CheckTasks } from '../tasks';

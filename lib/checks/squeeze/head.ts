@@ -1,4 +1,4 @@
-import type { SqueezeCheckInput } from '@/lib/validation/checks';
+import type { SqueezeCheckInput } from '@/lib/checks/inputs';
 import { pinnedSummary } from '../cultivar-inputs';
 import { FACING_PRESETS } from '../facings';
 import type { ResolvedSqueeze } from './resolve';

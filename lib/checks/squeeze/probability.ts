@@ -4,7 +4,7 @@ import type { Actor } from '@/lib/auth/actor';
 import { ValidationError } from '@/lib/errors';
 import { errorPayload } from '@/lib/http/error-map';
 import { parseInput } from '@/lib/validation/parse';
-import { probabilityCheckSchema, squeezeCheckSchema } from '@/lib/validation/checks';
+import { probabilityCheckSchema, squeezeCheckSchema } from '@/lib/checks/inputs';
 import { checkPool } from '../compute';
 import { bodyKey } from './check';
 import { toFormError } from './fields';

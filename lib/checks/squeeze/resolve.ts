@@ -1,7 +1,7 @@
 import 'server-only';
 import { STANDARD_GRAVITY, type SqueezeInput, type Spreads } from '@/fem';
 import type { Actor } from '@/lib/auth/actor';
-import type { SqueezeCheckInput } from '@/lib/validation/checks';
+import type { SqueezeCheckInput } from '@/lib/checks/inputs';
 import { chooseValue, publishedValue, type UsedValue } from '../cultivar-inputs';
 import { FACING_PRESETS, frictionSurfacesFor } from '../facings';
 import { resolveFruit, type ResolvedFruit } from '../resolve-fruit';

@@ -1,7 +1,7 @@
 import 'server-only';
 import type { Actor } from '@/lib/auth/actor';
 import { parseInput } from '@/lib/validation/parse';
-import { stackCheckSchema } from '@/lib/validation/checks';
+import { stackCheckSchema } from '@/lib/checks/inputs';
 import { enteredValue, pinnedSummary, publishedValue, type UsedValue } from '../cultivar-inputs';
 import { resolveFruit } from '../resolve-fruit';
 import type { StackResult } from './result';

@@ -1,7 +1,7 @@
 import { z } from 'zod';
-import { FACING_KEYS } from '@/lib/checks/facings';
-import { DROP_SURFACE_KEYS } from '@/lib/checks/surfaces';
-import { slugSchema } from './cultivars';
+import { FACING_KEYS } from './facings';
+import { DROP_SURFACE_KEYS } from './surfaces';
+import { slugSchema } from '@/lib/validation/cultivars';
 
 /** A number in a stated range; `unit` goes into the message so the user sees what is meant. */
 export const measure = (label: string, unit: string, min: number, max: number, open = true) =>
