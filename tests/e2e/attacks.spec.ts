@@ -1,6 +1,6 @@
 import http from 'node:http';
 import { expect, test } from '@playwright/test';
-import { ACCOUNTS, PASSWORD, signIn } from './helpers';
+import { ACCOUNTS, PASSWORD, signIn, signOut } from './helpers';
 import { APP, postSignIn, rawRequest, rawStatus } from './raw-http';
 
 // Each attack of the foundation review, run against the real server as an attacker would.
@@ -69,7 +69,9 @@ test('wrong passwords from 127.0.0.2 lock that address, not the owner at 127.0.0
   expect((await postSignIn(ACCOUNTS.editor, PASSWORD, '127.0.0.2')).status).toBe(429);
   await signIn(page, ACCOUNTS.editor); // the browser connects from 127.0.0.1
   await expect(page.getByTestId('account-link')).toContainText('editor');
-  await page.getByRole('button', { name: 'Sign out' }).click();
+  // Wait for the sign-out to land on the sign-in page before the next goto, or the two
+  // navigations race and one is aborted.
+  await signOut(page);
 
   // An admin sees the lock and clears it; the locked address may try again.
   await signIn(page, ACCOUNTS.admin);
