@@ -72,8 +72,11 @@ export function ChartFrame({ spec, testId }: { spec: ChartSpec; testId?: string 
             {(spec.markers ?? []).map((m) => (
               <ReferenceLine
                 key={m.label}
-                x={u.toDisplay(m.x, spec.x.unit)}
-                stroke="#57534e"
+                {...(m.x !== undefined
+                  ? { x: u.toDisplay(m.x, spec.x.unit) }
+                  : { y: u.toDisplay(m.y, spec.y.unit) })}
+                className={`marker-${m.label.replace(/\W+/g, '-')}`}
+                stroke={m.x !== undefined ? '#57534e' : '#b91c1c'}
                 strokeDasharray="4 4"
                 label={m.label}
               />

@@ -11,12 +11,10 @@ import {
   MeasureFields,
   type FieldSpec,
 } from './measure-fields';
-import { DropCharts } from './drop-charts';
-import { MarginPanel } from './margin-panel';
-import { SaveAssessment } from './save-assessment';
-import { CheckWarnings, UsedValues } from './used-values';
+import { dropDescriptor } from '@/lib/checks/drop/report';
+import { CheckWorkbench } from './check-workbench';
 import { siFields, useCheck } from './use-check';
-import { initialText } from './initial-text';
+import { initialText, type FormText } from './initial-text';
 import { useUnits } from '@/components/units/units-provider';
 
 const PAD_FIELDS: readonly FieldSpec[] = [
@@ -34,7 +32,7 @@ export function DropCheck({
   const units = useUnits();
   const [cultivar, setCultivar] = useState(initialCultivar);
   const [surface, setSurface] = useState<DropSurface>('steel');
-  const [text, setText] = useState<Record<string, string>>(() =>
+  const [text, setText] = useState<FormText>(() =>
     initialText(
       {
         heightMm: '150',
@@ -50,99 +48,64 @@ export function DropCheck({
     ...(cultivar && { cultivar }),
     ...siFields(text, units.fromDisplay, (key) => !key.startsWith('pad') || surface === 'foam'),
   };
-  const { result, pending, message, fieldErrors } = useCheck<DropCheckResult>(
-    '/api/checks/drop',
-    body,
-  );
-  const fields = { text, set, fieldErrors };
+  const state = useCheck<DropCheckResult>('/api/checks/drop', body);
+  const fields = { text, set, fieldErrors: state.fieldErrors };
   const option = cultivars.find((o) => o.slug === cultivar);
-  const used = result?.inputs_used;
-  return (
-    <div className="grid gap-6 lg:grid-cols-[minmax(0,20rem)_minmax(0,1fr)]">
-      <form className="space-y-3" onSubmit={(e) => e.preventDefault()} aria-label="Drop inputs">
-        <CultivarSelect
-          options={cultivars}
-          value={cultivar}
-          onChange={setCultivar}
-          errors={fieldErrors.cultivar}
-        />
-        <MeasureFields fields={[['heightMm', 'Drop height']]} state={fields} />
-        <div className="space-y-1">
-          <label htmlFor="drop-surface" className="block text-sm font-medium">
-            Surface
-          </label>
-          <select
-            id="drop-surface"
-            value={surface}
-            onChange={(e) => setSurface(e.target.value as DropSurface)}
-            className="rounded-md border border-stone-300 bg-white px-2 py-1.5 text-sm"
-          >
-            {DROP_SURFACE_KEYS.map((s) => (
-              <option key={s} value={s}>
-                {DROP_SURFACES[s].label}
-              </option>
-            ))}
-          </select>
-          <p className="text-xs text-stone-500">{DROP_SURFACES[surface].basis}</p>
-        </div>
-        {surface === 'foam' ? <MeasureFields fields={PAD_FIELDS} state={fields} /> : null}
-        <FruitFieldset fields={FRUIT_FIELDS} state={fields} option={option} />
-        <CheckFormError message={message} />
-      </form>
-      <div className="min-w-0 space-y-5">
-        <MarginPanel
-          hasResult={Boolean(result)}
-          margin={result?.margin ?? null}
-          pending={pending}
-          basis={
-            result?.margin?.basis === 'dynamic'
-              ? `Published dynamic threshold: ${result.dynamic?.basis} (${result.dynamic?.source ?? 'no source'}) ÷ this drop.`
-              : 'Static threshold ÷ elastic Hertz peak pressure — far stricter than drop tests (see below).'
-          }
-        />
-        {result ? (
-          <DropFigures result={result} />
-        ) : (
-          <p className="text-sm text-stone-600">Enter the inputs to see the result.</p>
-        )}
-        {used ? (
-          <UsedValues
-            rows={[
-              ["Young's modulus", used.modulus_mpa],
-              ["Poisson's ratio", used.poisson_ratio],
-              ['Diameter', used.diameter_mm],
-              ['Mass', used.mass_g],
-              ['Static bruise threshold', used.static_bruise_threshold_kpa],
-            ]}
-          />
-        ) : null}
-        <SaveAssessment check="drop" inputs={body} disabled={!result} />
+  const form = (
+    <form className="space-y-3" onSubmit={(e) => e.preventDefault()} aria-label="Drop inputs">
+      <CultivarSelect
+        options={cultivars}
+        value={cultivar}
+        onChange={setCultivar}
+        errors={state.fieldErrors.cultivar}
+      />
+      <MeasureFields fields={[['heightMm', 'Drop height']]} state={fields} />
+      <div className="space-y-1">
+        <label htmlFor="drop-surface" className="block text-sm font-medium">
+          Surface
+        </label>
+        <select
+          id="drop-surface"
+          value={surface}
+          onChange={(e) => setSurface(e.target.value as DropSurface)}
+          className="rounded-md border border-stone-300 bg-white px-2 py-1.5 text-sm"
+        >
+          {DROP_SURFACE_KEYS.map((s) => (
+            <option key={s} value={s}>
+              {DROP_SURFACES[s].label}
+            </option>
+          ))}
+        </select>
+        <p className="text-xs text-stone-500">{DROP_SURFACES[surface].basis}</p>
       </div>
-    </div>
+      {surface === 'foam' ? <MeasureFields fields={PAD_FIELDS} state={fields} /> : null}
+      <FruitFieldset fields={FRUIT_FIELDS} state={fields} option={option} />
+      <CheckFormError message={state.message} />
+    </form>
+  );
+  return (
+    <CheckWorkbench
+      check="drop"
+      descriptor={dropDescriptor}
+      state={state}
+      body={body}
+      form={form}
+      figuresTestId="drop-figures"
+      basis={(r) =>
+        r?.margin?.basis === 'dynamic'
+          ? `Published dynamic threshold: ${r.dynamic?.basis} (${r.dynamic?.source ?? 'no source'}) ÷ this drop.`
+          : 'Static threshold ÷ elastic Hertz peak pressure — far stricter than drop tests (see below).'
+      }
+      extras={(r) => <DropExtras result={r} />}
+    />
   );
 }
 
-function DropFigures({ result }: { result: DropCheckResult }) {
+/** What only the drop check shows: the stricter static figure in words, and safe heights. */
+function DropExtras({ result }: { result: DropCheckResult }) {
   const { show } = useUnits();
-  const i = result.impact;
   return (
     <>
-      <CheckWarnings warnings={result.warnings} />
-      <dl className="grid grid-cols-2 gap-3 text-sm sm:grid-cols-3" data-testid="drop-figures">
-        {[
-          ['Impact speed', show(i.impact_velocity_m_s, 'm/s')],
-          ['Impact energy', show(i.impact_energy_j, 'J')],
-          ['Peak force', show(i.peak_force_n, 'N')],
-          ['Contact radius', show(i.contact_radius_mm, 'mm')],
-          ['Peak pressure', show(i.peak_pressure_kpa, 'kPa')],
-          ['Contact time', show(i.contact_time_ms, 'ms')],
-        ].map(([k, v]) => (
-          <div key={k} className="rounded-md border border-stone-200 bg-white p-2">
-            <dt className="text-xs text-stone-600">{k}</dt>
-            <dd className="num">{v}</dd>
-          </div>
-        ))}
-      </dl>
       {result.static ? (
         <p className="text-sm text-stone-700">
           Secondary, stricter figure: static threshold {show(result.static.threshold_kpa, 'kPa')} ÷
@@ -153,11 +116,6 @@ function DropFigures({ result }: { result: DropCheckResult }) {
           bound, not the verdict.
         </p>
       ) : null}
-      <DropCharts
-        series={result.series}
-        heightMm={result.inputs_used.height_mm}
-        thresholdKpa={result.static?.threshold_kpa ?? null}
-      />
       <SafeHeights rows={result.safe_heights} />
     </>
   );

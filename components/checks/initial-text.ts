@@ -1,14 +1,20 @@
-import { FIELD_UNITS } from './field-units';
+import { FIELD_UNITS, type CheckField } from '@/lib/checks/field-units';
 
-/** A form's starting figures, given in SI, as text in the user's units. */
+/** A check form's figures as typed, by field; only fields with a declared unit exist. */
+export type FormText = Partial<Record<CheckField, string>>;
+
+/** The fields of a form's text with their values, keys typed. */
+export const formEntries = (text: FormText) => Object.entries(text) as [CheckField, string][];
+
+/** A form's starting figures, given in SI, as text in the user's units (sensibly rounded). */
 export function initialText(
-  si: Record<string, string>,
+  si: FormText,
   toDisplay: (value: number, unit: string) => number,
-): Record<string, string> {
+): FormText {
   return Object.fromEntries(
-    Object.entries(si).map(([key, value]) => [
+    formEntries(si).map(([key, value]) => [
       key,
-      String(Number(toDisplay(Number(value), FIELD_UNITS[key] ?? '–').toPrecision(4))),
+      String(Number(toDisplay(Number(value), FIELD_UNITS[key]).toPrecision(4))),
     ]),
   );
 }

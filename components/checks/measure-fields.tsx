@@ -2,13 +2,14 @@
 
 import { useUnits } from '@/components/units/units-provider';
 import { MeasureField, publishedHint, type CultivarOption } from './check-fields';
-import { FIELD_UNITS } from './field-units';
+import { FIELD_UNITS, type CheckField } from '@/lib/checks/field-units';
+import type { FormText } from './initial-text';
 
 /** A field of a check form: its key in the route's input, its label, an optional hint. */
-export type FieldSpec = readonly [key: string, label: string, hint?: string];
+export type FieldSpec = readonly [key: CheckField, label: string, hint?: string];
 
 export interface FieldsState {
-  text: Record<string, string>;
+  text: FormText;
   set: (key: string) => (value: string) => void;
   fieldErrors: Record<string, string[]>;
 }
@@ -28,7 +29,7 @@ export function MeasureFields({
 }) {
   const units = useUnits();
   return fields.map(([key, label, hint]) => {
-    const unit = FIELD_UNITS[key] ?? '–';
+    const unit = FIELD_UNITS[key];
     return (
       <MeasureField
         key={key}

@@ -2,6 +2,7 @@
 
 import { FACING_KEYS, FACING_PRESETS, type FacingPreset } from '@/lib/checks/facings';
 import { CultivarSelect, type CultivarOption } from './check-fields';
+import type { FormText } from './initial-text';
 import { CheckFormError, FruitFieldset, MeasureFields, type FieldSpec } from './measure-fields';
 
 const FRUIT: readonly FieldSpec[] = [
@@ -33,7 +34,7 @@ export interface SqueezeFormProps {
   setCultivar: (slug: string) => void;
   facing: FacingPreset;
   setFacing: (f: FacingPreset) => void;
-  text: Record<string, string>;
+  text: FormText;
   set: (key: string) => (value: string) => void;
   fieldErrors: Record<string, string[]>;
   message: string | null;

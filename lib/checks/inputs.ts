@@ -3,20 +3,26 @@ import { FACING_KEYS } from './facings';
 import { DROP_SURFACE_KEYS } from './surfaces';
 import { slugSchema } from '@/lib/validation/cultivars';
 
-/** A number in a stated range; `unit` goes into the message so the user sees what is meant. */
+/**
+ * A number in a stated range; `unit` goes into the message so the user sees what is meant, and
+ * into the schema's metadata, where the forms read it (see lib/checks/field-units.ts): a field
+ * cannot be declared without the SI unit its value is converted from.
+ */
 export const measure = (label: string, unit: string, min: number, max: number, open = true) =>
   z
     .number({ error: `${label} must be a number (${unit}).` })
     .refine(Number.isFinite, `${label} must be a finite number.`)
     .refine((v) => (open ? v > min : v >= min), `${label} must be above ${min} ${unit}.`)
-    .refine((v) => v <= max, `${label} must be at most ${max} ${unit}.`);
+    .refine((v) => v <= max, `${label} must be at most ${max} ${unit}.`)
+    .meta({ unit: unit || '–' });
 
 const poisson = z
   .number({ error: "Poisson's ratio must be a number." })
   .refine(
     (v) => Number.isFinite(v) && v >= 0 && v < 0.5,
     "Poisson's ratio must be from 0 up to (not including) 0.5.",
-  );
+  )
+  .meta({ unit: '–' });
 
 /** The fruit, from a cultivar's published values and/or the user's own figures. */
 export const fruitSchema = {

@@ -22,7 +22,10 @@ export interface Axis {
   unit: string;
 }
 
-/** A line chart: every series over the same axes; markers are vertical lines at an x. */
+/** A line across a chart: upright at an x (this drop, this fill) or level at a y (a threshold). */
+export type Marker = { label: string } & ({ x: number; y?: never } | { y: number; x?: never });
+
+/** A line chart: every series over the same axes; markers are lines at an x or at a y. */
 export interface ChartSpec {
   /** Stable across assessments of one check, so a comparison overlays like with like. */
   id: string;
@@ -30,7 +33,7 @@ export interface ChartSpec {
   x: Axis;
   y: Axis;
   series: { label: string; points: [number, number][] }[];
-  markers?: { x: number; label: string }[];
+  markers?: Marker[];
 }
 
 export interface MarginView {

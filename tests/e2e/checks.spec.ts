@@ -42,7 +42,7 @@ test('stack check: deepest safe fill and a chart of pressure with depth', async 
   await page.goto('/checks/stack');
   await customFruit(page);
   await expect(page.getByTestId('deepest-safe')).toContainText('mm');
-  await expect(page.getByTestId('stack-chart')).toBeVisible();
+  await expect(page.getByTestId('chart-stack-pressure')).toBeVisible();
   await page.setViewportSize({ width: 390, height: 844 });
   // Charts shrink on the next resize-observer tick: poll until the layout settles.
   await expect
@@ -97,8 +97,8 @@ test('US customary units apply to what is typed and shown; SI stays stored', asy
     await page.getByLabel('Mass').fill('7.0548');
     await page.getByLabel('Static bruise threshold').fill('14.504');
     await expect(page.getByLabel('Fill depth')).toHaveValue('23.62');
-    const chart = page.getByTestId('stack-chart');
-    const marker = chart.locator('.this-fill-marker line, line.this-fill-marker').first();
+    const chart = page.getByTestId('chart-stack-pressure');
+    const marker = chart.locator('.marker-this-fill line, line.marker-this-fill').first();
     await expect(marker).toBeAttached();
     const grid = await chart.locator('.recharts-cartesian-grid').boundingBox();
     const line = await marker.boundingBox();

@@ -20,7 +20,7 @@ test('an engineer squeezes a seeded cultivar, changes the pad, saves, reports an
   }
   const margin = page.getByTestId('margin-value');
   await expect(margin).toBeVisible({ timeout: 30_000 });
-  await expect(page.getByTestId('chart-sweep')).toBeVisible();
+  await expect(page.getByTestId('chart-squeeze-sweep')).toBeVisible();
   await expect(page.getByTestId('slip-map')).toContainText('the grip holds');
   const before = await margin.innerText();
   await page.getByLabel('Pad diameter', { exact: true }).fill('6');

@@ -50,7 +50,10 @@ export const dropDescriptor: CheckDescriptor<DropResult> = {
               points: r.series.map((p) => [p.height_mm, p.peak_pressure_kpa]),
             },
           ],
-          markers: [{ x: u.height_mm, label: 'this drop' }],
+          markers: [
+            { x: u.height_mm, label: 'this drop' },
+            ...(r.static ? [{ y: r.static.threshold_kpa, label: 'static threshold' }] : []),
+          ],
         },
         {
           id: 'drop-energy',

@@ -58,10 +58,12 @@ function charts(r: SqueezeResult): ChartSpec[] {
           ),
         },
       ],
-      markers:
-        r.inputs_used.pad_diameter_mm === null
+      markers: [
+        ...(r.inputs_used.pad_diameter_mm === null
           ? []
-          : [{ x: r.inputs_used.pad_diameter_mm, label: 'this pad' }],
+          : [{ x: r.inputs_used.pad_diameter_mm, label: 'this pad' }]),
+        { y: 1, label: 'margin 1' },
+      ],
     });
   if (r.slip?.nodes)
     out.push({
@@ -134,6 +136,18 @@ export const squeezeDescriptor: CheckDescriptor<SqueezeResult> = {
         { label: 'Peak pressure at the grip', value: g?.peak_pressure_kpa ?? null, unit: 'kPa' },
         { label: 'Contact radius at the grip', value: g?.contact_radius_mm ?? null, unit: 'mm' },
         {
+          label: 'Largest subsurface shear',
+          value: g?.max_shear_kpa ?? null,
+          unit: 'kPa',
+          text: g?.max_shear_kpa == null ? (g?.max_shear_unavailable ?? '—') : undefined,
+        },
+        {
+          label: 'Shear margin',
+          value: g?.shear_margin ?? null,
+          unit: '–',
+          text: g?.shear_margin == null ? 'no failure stress' : undefined,
+        },
+        {
           label: 'Smallest safe pad in the sweep',
           value: r.sweep?.smallest_safe_pad_mm ?? null,
           unit: 'mm',
@@ -163,7 +177,11 @@ export const squeezeDescriptor: CheckDescriptor<SqueezeResult> = {
         ['mean_pressure_kpa', 'mean_pressure_kpa'],
         ['lift_ratio', 'lift_ratio'],
       ]),
-      warnings: r.warnings,
+      // Why the grip was not found belongs beside the warnings, in words.
+      warnings: [
+        ...r.warnings,
+        ...(r.model.liftability?.grip_reason ? [r.model.liftability.grip_reason] : []),
+      ],
     };
   },
 };

@@ -1,5 +1,5 @@
 import { ASSUMPTIONS } from '../assumptions';
-import { curvesOf, pointsOf, type CheckDescriptor, fruitUsedRows } from '../report';
+import { curvesOf, fruitUsedRows, pointsOf, type CheckDescriptor, type Marker } from '../report';
 import { stackResultSchema, type StackResult } from './result';
 
 /** How a saved stack check is shown, printed, exported and compared. */
@@ -12,7 +12,7 @@ export const stackDescriptor: CheckDescriptor<StackResult> = {
     const u = r.inputs_used;
     const b = r.bottom;
     const safe = r.deepest_safe_fill_mm;
-    const markers = [{ x: u.fill_depth_mm, label: 'this fill' }];
+    const markers: Marker[] = [{ x: u.fill_depth_mm, label: 'this fill' }];
     if (typeof safe === 'number') markers.push({ x: safe, label: 'deepest safe' });
     return {
       scenario: [

@@ -1,0 +1,74 @@
+'use client';
+
+import type { ReactNode } from 'react';
+import { ChartFrame } from '@/components/assessments/chart-frame';
+import { FigureGrid } from '@/components/assessments/report-results';
+import type { CheckDescriptor } from '@/lib/checks/report';
+import type { CheckNameValue } from '@/lib/validation/check-names';
+import { MarginPanel } from './margin-panel';
+import { SaveAssessment } from './save-assessment';
+import type { CheckState } from './use-check';
+import { CheckWarnings, UsedValues } from './used-values';
+
+/**
+ * The working area of every check page: the form on the left; on the right the margin, the
+ * result's figures, charts and used values as the check's descriptor describes them (the same
+ * ones its saved report shows), the check's own extras, and saving.
+ */
+export function CheckWorkbench<R>({
+  check,
+  descriptor,
+  state,
+  body,
+  form,
+  basis,
+  figuresTestId,
+  extras,
+  after,
+}: {
+  check: CheckNameValue;
+  descriptor: CheckDescriptor<R>;
+  state: CheckState<R>;
+  body: Record<string, unknown>;
+  form: ReactNode;
+  /** What the margin divides, in words. */
+  basis: (result: R | null) => string;
+  figuresTestId: string;
+  /** Check-specific panels shown after the figures (a table, a picture). */
+  extras?: (result: R) => ReactNode;
+  /** Shown after the results whether or not there is one (the probability of bruising). */
+  after?: ReactNode;
+}) {
+  const { result, pending } = state;
+  const report = result ? descriptor.report(result) : null;
+  return (
+    <div className="grid gap-6 lg:grid-cols-[minmax(0,20rem)_minmax(0,1fr)]">
+      {form}
+      <div className="min-w-0 space-y-5">
+        <MarginPanel
+          hasResult={Boolean(result)}
+          margin={report?.margin ?? null}
+          pending={pending}
+          basis={basis(result)}
+        />
+        {result && report ? (
+          <>
+            <CheckWarnings warnings={report.warnings} />
+            <FigureGrid figures={report.figures} testId={figuresTestId} />
+            {extras?.(result)}
+            <div className="grid gap-4 xl:grid-cols-2">
+              {report.charts.map((c) => (
+                <ChartFrame key={c.id} spec={c} />
+              ))}
+            </div>
+          </>
+        ) : (
+          <p className="text-sm text-stone-600">Enter the inputs to see the result.</p>
+        )}
+        {after}
+        {report ? <UsedValues rows={report.used.map((u) => [u.label, u.value])} /> : null}
+        <SaveAssessment check={check} inputs={body} disabled={!result} />
+      </div>
+    </div>
+  );
+}
