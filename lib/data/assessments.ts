@@ -1,6 +1,10 @@
 import 'server-only';
 import type { Knex } from 'knex';
+import type { InferResult } from 'kysely';
 import { db } from '@/lib/db';
+import { typed } from '@/lib/db-kysely';
+import { assessmentInputs, assessmentResults } from '@/lib/db-json';
+import { insertedId, toCount, toIso } from '@/lib/db-values';
 import { assertCan, type Actor } from '@/lib/auth/actor';
 import { can } from '@/lib/auth/roles';
 import { NotFoundError } from '@/lib/errors';
@@ -39,45 +43,52 @@ export interface Assessment {
 }
 
 function query() {
-  return db('assessments as a')
-    .join('users as u', 'u.id', 'a.owner_id')
+  return typed()
+    .selectFrom('assessments as a')
+    .innerJoin('users as u', 'u.id', 'a.owner_id')
     .leftJoin('cultivars as c', 'c.id', 'a.cultivar_id')
     .leftJoin('property_revisions as r', 'r.id', 'a.revision_id')
     .leftJoin('property_revisions as now', 'now.id', 'c.published_revision_id')
-    .select(
-      'a.*',
+    .selectAll('a')
+    .select([
       'u.name as owner_name',
       'c.slug as cultivar_slug',
       'c.name as cultivar_name',
       'r.number as revision_number',
       'now.id as now_id',
       'now.number as now_number',
-    );
+    ]);
 }
 
-function toAssessment(r: Record<string, unknown>): Assessment {
+function toAssessment(r: InferResult<ReturnType<typeof query>>[number]): Assessment {
   const newer =
-    r.now_id != null && r.revision_id != null && Number(r.now_id) !== Number(r.revision_id);
+    r.now_id !== null &&
+    r.now_number !== null &&
+    r.revision_id !== null &&
+    r.now_id !== r.revision_id
+      ? { id: r.now_id, number: r.now_number }
+      : null;
   return {
-    id: Number(r.id),
-    ownerId: Number(r.owner_id),
-    ownerName: String(r.owner_name),
+    id: r.id,
+    ownerId: r.owner_id,
+    ownerName: r.owner_name,
     check: r.check as CheckNameValue,
-    title: String(r.title),
-    notes: (r.notes as string) ?? null,
-    inputs: JSON.parse(String(r.inputs)),
-    results: JSON.parse(String(r.results)),
-    cultivarSlug: (r.cultivar_slug as string) ?? null,
-    cultivarName: (r.cultivar_name as string) ?? null,
-    revisionId: r.revision_id == null ? null : Number(r.revision_id),
-    revisionNumber: r.revision_number == null ? null : Number(r.revision_number),
-    newerRevision: newer ? { id: Number(r.now_id), number: Number(r.now_number) } : null,
-    version: Number(r.version),
-    parentId: r.parent_id == null ? null : Number(r.parent_id),
-    rootId: Number(r.root_id ?? r.id),
-    modelVersion: String(r.model_version),
-    resultSchema: String(r.result_schema),
-    createdAt: new Date(r.created_at as string).toISOString(),
+    title: r.title,
+    notes: r.notes,
+    inputs: assessmentInputs.parse(r.inputs),
+    // The inside of a result is read by its check's result schema, not here.
+    results: assessmentResults.parse(r.results) as Assessment['results'],
+    cultivarSlug: r.cultivar_slug,
+    cultivarName: r.cultivar_name,
+    revisionId: r.revision_id,
+    revisionNumber: r.revision_number,
+    newerRevision: newer,
+    version: r.version,
+    parentId: r.parent_id,
+    rootId: r.root_id ?? r.id,
+    modelVersion: r.model_version,
+    resultSchema: r.result_schema,
+    createdAt: toIso(r.created_at),
   };
 }
 
@@ -133,12 +144,22 @@ async function insertRow(
   meta: AssessmentMeta,
 ): Promise<number> {
   const pinned = run.results.pinned;
-  const cultivar = pinned ? await trx('cultivars').where({ slug: pinned.cultivar }).first() : null;
+  const cultivar = pinned
+    ? await typed(trx)
+        .selectFrom('cultivars')
+        .select('id')
+        .where('slug', '=', pinned.cultivar)
+        .executeTakeFirst()
+    : undefined;
   const root = meta.rerunOf ? meta.rerunOf.rootId : null;
   let version = 1;
   if (root !== null) {
-    const [{ max }] = await trx('assessments').where('root_id', root).max({ max: 'version' });
-    version = Number(max ?? 0) + 1;
+    const { max } = await typed(trx)
+      .selectFrom('assessments')
+      .select((eb) => eb.fn.max('version').as('max'))
+      .where('root_id', '=', root)
+      .executeTakeFirstOrThrow();
+    version = toCount(max) + 1;
   }
   const [row] = await trx('assessments')
     .insert({
@@ -158,7 +179,7 @@ async function insertRow(
       created_at: new Date(),
     })
     .returning('id');
-  const id = typeof row === 'object' ? Number(row.id) : Number(row);
+  const id = insertedId(row);
   // A first version is the root of its own chain.
   if (root === null) await trx('assessments').where({ id }).update({ root_id: id });
   await recordAudit(trx, {
@@ -174,9 +195,9 @@ async function insertRow(
 /** One assessment: its owner's, or anyone's for a role that reads all. */
 export async function getAssessment(actor: Actor, id: number): Promise<Assessment> {
   assertCan(actor, 'assessments:manage-own');
-  const q = query().where('a.id', id);
-  if (!can(actor.role, 'assessments:read-all')) q.where('a.owner_id', actor.id);
-  const row = await q.first();
+  let q = query().where('a.id', '=', id);
+  if (!can(actor.role, 'assessments:read-all')) q = q.where('a.owner_id', '=', actor.id);
+  const row = await q.executeTakeFirst();
   if (!row) throw new NotFoundError('No such assessment.');
   return toAssessment(row);
 }
@@ -184,9 +205,9 @@ export async function getAssessment(actor: Actor, id: number): Promise<Assessmen
 export async function listAssessments(actor: Actor, filter: unknown = {}): Promise<Assessment[]> {
   assertCan(actor, 'assessments:manage-own');
   const f = parseInput(assessmentListSchema, filter);
-  const q = query().orderBy('a.id', 'desc');
-  if (!can(actor.role, 'assessments:read-all')) q.where('a.owner_id', actor.id);
-  if (f.check) q.where('a.check', f.check);
-  if (f.cultivar) q.where('c.slug', f.cultivar);
-  return (await q).map(toAssessment);
+  let q = query().orderBy('a.id', 'desc');
+  if (!can(actor.role, 'assessments:read-all')) q = q.where('a.owner_id', '=', actor.id);
+  if (f.check) q = q.where('a.check', '=', f.check);
+  if (f.cultivar) q = q.where('c.slug', '=', f.cultivar);
+  return (await q.execute()).map(toAssessment);
 }

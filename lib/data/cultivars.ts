@@ -1,5 +1,7 @@
 import 'server-only';
-import { db } from '@/lib/db';
+import { sql, type InferResult } from 'kysely';
+import { typed } from '@/lib/db-kysely';
+import { toBool } from '@/lib/db-values';
 import { assertCan, type Actor } from '@/lib/auth/actor';
 import { can } from '@/lib/auth/roles';
 import { NotFoundError } from '@/lib/errors';
@@ -13,35 +15,41 @@ import { revisionQuery, toRevision, valuesOf } from './property-rows';
 
 export async function listCommodities(actor: Actor): Promise<CommodityRef[]> {
   assertCan(actor, 'properties:read-published');
-  const rows = await db('commodities').orderBy(['family', 'name']);
+  const rows = await typed()
+    .selectFrom('commodities')
+    .select(['id', 'slug', 'name', 'family'])
+    .orderBy('family')
+    .orderBy('name')
+    .execute();
   return rows.map((r) => ({ id: r.id, slug: r.slug, name: r.name, family: r.family }));
 }
 
 function cultivarQuery() {
-  return db('cultivars as c')
-    .join('commodities as m', 'm.id', 'c.commodity_id')
-    .select('c.*', 'm.slug as m_slug', 'm.name as m_name', 'm.family as m_family');
+  return typed()
+    .selectFrom('cultivars as c')
+    .innerJoin('commodities as m', 'm.id', 'c.commodity_id')
+    .selectAll('c')
+    .select(['m.slug as m_slug', 'm.name as m_name', 'm.family as m_family']);
 }
 
-async function toRecords(rows: Record<string, unknown>[]): Promise<CultivarRecord[]> {
-  const revisionIds = rows.map((r) => Number(r.published_revision_id)).filter((id) => id > 0);
+type CultivarRow = InferResult<ReturnType<typeof cultivarQuery>>[number];
+
+async function toRecords(rows: CultivarRow[]): Promise<CultivarRecord[]> {
+  const revisionIds = rows
+    .map((r) => r.published_revision_id)
+    .filter((id): id is number => id !== null && id > 0);
   const revisions = revisionIds.length
-    ? (await revisionQuery(db).whereIn('r.id', revisionIds)).map(toRevision)
+    ? (await revisionQuery().where('r.id', 'in', revisionIds).execute()).map(toRevision)
     : [];
-  const values = await valuesOf(db, revisionIds);
+  const values = await valuesOf(revisionIds);
   return rows.map((r) => {
-    const published = revisions.find((v) => v.id === Number(r.published_revision_id)) ?? null;
+    const published = revisions.find((v) => v.id === r.published_revision_id) ?? null;
     return {
-      id: Number(r.id),
-      slug: String(r.slug),
-      name: String(r.name),
-      isType: Boolean(r.is_type),
-      commodity: {
-        id: Number(r.commodity_id),
-        slug: String(r.m_slug),
-        name: String(r.m_name),
-        family: String(r.m_family),
-      },
+      id: r.id,
+      slug: r.slug,
+      name: r.name,
+      isType: toBool(r.is_type),
+      commodity: { id: r.commodity_id, slug: r.m_slug, name: r.m_name, family: r.m_family },
       published,
       values: published ? (values.get(published.id) ?? []) : [],
     };
@@ -54,25 +62,25 @@ export async function listPublishedCultivars(
   filter: { commodity?: string; q?: string } = {},
 ): Promise<CultivarRecord[]> {
   assertCan(actor, 'properties:read-published');
-  const query = cultivarQuery()
-    .whereNotNull('c.published_revision_id')
-    .orderBy(['m.name', 'c.name']);
-  if (filter.commodity) query.where('m.slug', filter.commodity);
+  let query = cultivarQuery().where('c.published_revision_id', 'is not', null);
+  if (filter.commodity) query = query.where('m.slug', '=', filter.commodity);
   if (filter.q) {
     const like = `%${filter.q.toLowerCase().replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
-    query.where((w) =>
-      w
-        .whereRaw("lower(c.name) like ? escape '\\'", [like])
-        .orWhereRaw("lower(m.name) like ? escape '\\'", [like]),
+    query = query.where((eb) =>
+      eb.or([
+        sql<boolean>`lower(c.name) like ${like} escape '\\'`,
+        sql<boolean>`lower(m.name) like ${like} escape '\\'`,
+      ]),
     );
   }
-  return toRecords(await query);
+  const rows = await query.orderBy('m.name').orderBy('c.name').execute();
+  return toRecords(rows);
 }
 
 /** One cultivar with its published values and sources; 404 when unknown. */
 export async function getCultivar(actor: Actor, slug: string): Promise<CultivarRecord> {
   assertCan(actor, 'properties:read-published');
-  const row = await cultivarQuery().where('c.slug', slug).first();
+  const row = await cultivarQuery().where('c.slug', '=', slug).executeTakeFirst();
   if (!row) throw new NotFoundError(`No cultivar "${slug.slice(0, 80)}".`);
   const [record] = await toRecords([row]);
   return record;
@@ -88,12 +96,17 @@ function visibleStatuses(actor: Actor): string[] {
 /** A cultivar's revisions, newest first. */
 export async function listRevisions(actor: Actor, slug: string): Promise<RevisionSummary[]> {
   assertCan(actor, 'properties:read-history');
-  const cultivar = await db('cultivars').where({ slug }).first();
+  const cultivar = await typed()
+    .selectFrom('cultivars')
+    .select('id')
+    .where('slug', '=', slug)
+    .executeTakeFirst();
   if (!cultivar) throw new NotFoundError(`No cultivar "${slug.slice(0, 80)}".`);
-  const rows = await revisionQuery(db)
-    .where('r.cultivar_id', cultivar.id)
-    .whereIn('r.status', visibleStatuses(actor))
-    .orderBy('r.number', 'desc');
+  const rows = await revisionQuery()
+    .where('r.cultivar_id', '=', cultivar.id)
+    .where('r.status', 'in', visibleStatuses(actor))
+    .orderBy('r.number', 'desc')
+    .execute();
   return rows.map(toRevision);
 }
 
@@ -103,13 +116,13 @@ export async function getRevision(
   id: number,
 ): Promise<RevisionSummary & { values: RevisionValue[]; cultivarSlug: string }> {
   assertCan(actor, 'properties:read-history');
-  const row = await revisionQuery(db)
-    .join('cultivars as c', 'c.id', 'r.cultivar_id')
+  const row = await revisionQuery()
+    .innerJoin('cultivars as c', 'c.id', 'r.cultivar_id')
     .select('c.slug as cultivar_slug')
-    .where('r.id', id)
-    .whereIn('r.status', visibleStatuses(actor))
-    .first();
+    .where('r.id', '=', id)
+    .where('r.status', 'in', visibleStatuses(actor))
+    .executeTakeFirst();
   if (!row) throw new NotFoundError('No such revision.');
-  const values = (await valuesOf(db, [id])).get(id) ?? [];
-  return { ...toRevision(row), values, cultivarSlug: String(row.cultivar_slug) };
+  const values = (await valuesOf([id])).get(id) ?? [];
+  return { ...toRevision(row), values, cultivarSlug: row.cultivar_slug };
 }

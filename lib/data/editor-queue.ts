@@ -1,5 +1,6 @@
 import 'server-only';
-import { db } from '@/lib/db';
+import type { InferResult } from 'kysely';
+import { typed } from '@/lib/db-kysely';
 import { assertCan, type Actor } from '@/lib/auth/actor';
 import type { RevisionSummary, SourceRef } from '@/lib/properties/records';
 import { revisionQuery, toRevision, toSource } from './property-rows';
@@ -28,25 +29,25 @@ export interface CultivarChoice {
 }
 
 function queueQuery() {
-  return revisionQuery(db)
-    .join('cultivars as c', 'c.id', 'r.cultivar_id')
-    .join('commodities as m', 'm.id', 'c.commodity_id')
+  return revisionQuery()
+    .innerJoin('cultivars as c', 'c.id', 'r.cultivar_id')
+    .innerJoin('commodities as m', 'm.id', 'c.commodity_id')
     .leftJoin('property_revisions as b', 'b.id', 'r.based_on_id')
-    .select(
+    .select([
       'c.slug as cultivar_slug',
       'c.name as cultivar_name',
       'm.name as commodity_name',
       'b.number as base_number',
-    );
+    ]);
 }
 
-function toQueueRow(r: Record<string, unknown>): QueueRow {
+function toQueueRow(r: InferResult<ReturnType<typeof queueQuery>>[number]): QueueRow {
   return {
     ...toRevision(r),
-    cultivarSlug: String(r.cultivar_slug),
-    cultivarName: String(r.cultivar_name),
-    commodityName: String(r.commodity_name),
-    baseNumber: r.base_number == null ? null : Number(r.base_number),
+    cultivarSlug: r.cultivar_slug,
+    cultivarName: r.cultivar_name,
+    commodityName: r.commodity_name,
+    baseNumber: r.base_number,
   };
 }
 
@@ -55,23 +56,23 @@ export async function listEditorQueue(actor: Actor, publishedLimit = 10): Promis
   assertCan(actor, 'revisions:edit');
   const [mine, toReview, published] = await Promise.all([
     queueQuery()
-      .where('r.author_id', actor.id)
-      .whereIn('r.status', ['draft', 'returned', 'in_review'])
-      .orderBy([
-        { column: 'r.updated_at', order: 'desc' },
-        { column: 'r.id', order: 'desc' },
-      ]),
+      .where('r.author_id', '=', actor.id)
+      .where('r.status', 'in', ['draft', 'returned', 'in_review'])
+      .orderBy('r.updated_at', 'desc')
+      .orderBy('r.id', 'desc')
+      .execute(),
     queueQuery()
-      .where('r.status', 'in_review')
-      .whereNot('r.author_id', actor.id)
-      .orderBy([{ column: 'r.submitted_at' }, { column: 'r.id' }]),
+      .where('r.status', '=', 'in_review')
+      .where('r.author_id', '!=', actor.id)
+      .orderBy('r.submitted_at')
+      .orderBy('r.id')
+      .execute(),
     queueQuery()
-      .whereIn('r.status', ['published', 'superseded'])
-      .orderBy([
-        { column: 'r.published_at', order: 'desc' },
-        { column: 'r.id', order: 'desc' },
-      ])
-      .limit(publishedLimit),
+      .where('r.status', 'in', ['published', 'superseded'])
+      .orderBy('r.published_at', 'desc')
+      .orderBy('r.id', 'desc')
+      .limit(publishedLimit)
+      .execute(),
   ]);
   return {
     mine: mine.map(toQueueRow),
@@ -83,24 +84,25 @@ export async function listEditorQueue(actor: Actor, publishedLimit = 10): Promis
 /** Every cultivar, published or not, for the "start a draft" choice. */
 export async function listCultivarChoices(actor: Actor): Promise<CultivarChoice[]> {
   assertCan(actor, 'revisions:edit');
-  const rows = await db('cultivars as c')
-    .join('commodities as m', 'm.id', 'c.commodity_id')
-    .orderBy([{ column: 'm.name' }, { column: 'c.name' }])
-    .select('c.slug', 'c.name', 'm.name as commodity_name');
-  return rows.map((r) => ({
-    slug: String(r.slug),
-    name: String(r.name),
-    commodityName: String(r.commodity_name),
-  }));
+  const rows = await typed()
+    .selectFrom('cultivars as c')
+    .innerJoin('commodities as m', 'm.id', 'c.commodity_id')
+    .orderBy('m.name')
+    .orderBy('c.name')
+    .select(['c.slug', 'c.name', 'm.name as commodity_name'])
+    .execute();
+  return rows.map((r) => ({ slug: r.slug, name: r.name, commodityName: r.commodity_name }));
 }
 
 /** Every source a value may cite, by key. */
 export async function listSources(actor: Actor): Promise<SourceRef[]> {
   assertCan(actor, 'revisions:edit');
-  const rows = await db('sources').orderBy([
-    { column: 'authors' },
-    { column: 'year' },
-    { column: 'key' },
-  ]);
+  const rows = await typed()
+    .selectFrom('sources')
+    .selectAll()
+    .orderBy('authors')
+    .orderBy('year')
+    .orderBy('key')
+    .execute();
   return rows.map(toSource);
 }

@@ -84,7 +84,7 @@ export async function notifyFollowers(published: {
     .select('u.email', 'u.name');
   if (!followers.length) return;
   const ids = published.base === null ? [published.id] : [published.base, published.id];
-  const values = await valuesOf(db, ids);
+  const values = await valuesOf(ids);
   const lines = changeLines(
     published.base === null ? [] : values.get(published.base)!,
     values.get(published.id)!,
