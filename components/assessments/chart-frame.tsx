@@ -77,6 +77,8 @@ export function ChartFrame({ spec, testId }: { spec: ChartSpec; testId?: string 
                   : { y: u.toDisplay(m.y, spec.y.unit) })}
                 className={`marker-${m.label.replace(/\W+/g, '-')}`}
                 stroke={m.x !== undefined ? '#57534e' : '#b91c1c'}
+                // A threshold line is drawn even when the curves stay below it.
+                ifOverflow="extendDomain"
                 strokeDasharray="4 4"
                 label={m.label}
               />

@@ -178,9 +178,12 @@ export const squeezeDescriptor: CheckDescriptor<SqueezeResult> = {
         ['lift_ratio', 'lift_ratio'],
       ]),
       // Why the grip was not found belongs beside the warnings, in words.
+      // Said once each (the model may warn of the same state at two travels).
       warnings: [
-        ...r.warnings,
-        ...(r.model.liftability?.grip_reason ? [r.model.liftability.grip_reason] : []),
+        ...new Set([
+          ...r.warnings,
+          ...(r.model.liftability?.grip_reason ? [r.model.liftability.grip_reason] : []),
+        ]),
       ],
     };
   },
