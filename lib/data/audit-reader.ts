@@ -1,5 +1,6 @@
 import 'server-only';
-import { db } from '@/lib/db';
+import { typed } from '@/lib/db-kysely';
+import { toIso } from '@/lib/db-values';
 import { assertCan, type Actor } from '@/lib/auth/actor';
 
 export interface AuditRow {
@@ -8,6 +9,7 @@ export interface AuditRow {
   action: string;
   entity: string;
   entityId: string | null;
+  /** The stored JSON text as the admin list shows it (lib/db-json.ts `auditDetail` parses it). */
   detail: string | null;
   createdAt: string;
 }
@@ -15,18 +17,20 @@ export interface AuditRow {
 /** The newest audit entries first; admins only. */
 export async function listAudit(actor: Actor, limit = 200): Promise<AuditRow[]> {
   assertCan(actor, 'audit:read');
-  const rows = await db('audit_log as a')
+  const rows = await typed()
+    .selectFrom('audit_log as a')
     .leftJoin('users as u', 'u.id', 'a.actor_id')
-    .select('a.id', 'u.email', 'a.action', 'a.entity', 'a.entity_id', 'a.detail', 'a.created_at')
+    .select(['a.id', 'u.email', 'a.action', 'a.entity', 'a.entity_id', 'a.detail', 'a.created_at'])
     .orderBy('a.id', 'desc')
-    .limit(limit);
+    .limit(limit)
+    .execute();
   return rows.map((r) => ({
-    id: Number(r.id),
-    actor: r.email ?? null,
+    id: r.id,
+    actor: r.email,
     action: r.action,
     entity: r.entity,
     entityId: r.entity_id,
     detail: r.detail,
-    createdAt: new Date(r.created_at).toISOString(),
+    createdAt: toIso(r.created_at),
   }));
 }

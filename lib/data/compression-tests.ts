@@ -1,6 +1,9 @@
 import 'server-only';
 import { randomUUID } from 'node:crypto';
+import type { InferResult } from 'kysely';
 import { db } from '@/lib/db';
+import { typed } from '@/lib/db-kysely';
+import { insertedId, toBool, toIso } from '@/lib/db-values';
 import { assertCan, type Actor } from '@/lib/auth/actor';
 import { NotFoundError, ValidationError, type FieldErrors } from '@/lib/errors';
 import { fitCompressionCurve, type CompressionFit, type SampleGeometry } from '@/lib/lab-tests/fit';
@@ -34,61 +37,72 @@ export interface CompressionTestWithData extends CompressionTestRecord {
 }
 
 function testQuery() {
-  return db('compression_tests as t')
-    .join('cultivars as c', 'c.id', 't.cultivar_id')
-    .join('commodities as m', 'm.id', 'c.commodity_id')
-    .join('users as u', 'u.id', 't.uploaded_by')
-    .select('t.*', 'c.slug as c_slug', 'c.name as c_name', 'm.name as m_name', 'u.name as u_name');
+  return typed()
+    .selectFrom('compression_tests as t')
+    .innerJoin('cultivars as c', 'c.id', 't.cultivar_id')
+    .innerJoin('commodities as m', 'm.id', 'c.commodity_id')
+    .innerJoin('users as u', 'u.id', 't.uploaded_by')
+    .selectAll('t')
+    .select(['c.slug as c_slug', 'c.name as c_name', 'm.name as m_name', 'u.name as u_name']);
 }
 
-function toRecord(r: Record<string, unknown>): CompressionTestRecord {
+function toRecord(r: InferResult<ReturnType<typeof testQuery>>[number]): CompressionTestRecord {
+  // A test has a diameter or both radii (the upload schema refuses anything else).
   const geometry: SampleGeometry =
-    r.diameter_mm != null
-      ? { kind: 'sphere', diameterMm: Number(r.diameter_mm) }
-      : { kind: 'radii', radiiMm: [Number(r.radius1_mm), Number(r.radius2_mm)] };
+    r.diameter_mm !== null
+      ? { kind: 'sphere', diameterMm: r.diameter_mm }
+      : { kind: 'radii', radiiMm: [r.radius1_mm ?? 0, r.radius2_mm ?? 0] };
   return {
-    id: Number(r.id),
-    cultivar: {
-      id: Number(r.cultivar_id),
-      slug: String(r.c_slug),
-      name: String(r.c_name),
-      commodityName: String(r.m_name),
-    },
-    uploadedBy: { id: Number(r.uploaded_by), name: String(r.u_name) },
-    fileName: String(r.file_name),
-    rows: Number(r.rows),
+    id: r.id,
+    cultivar: { id: r.cultivar_id, slug: r.c_slug, name: r.c_name, commodityName: r.m_name },
+    uploadedBy: { id: r.uploaded_by, name: r.u_name },
+    fileName: r.file_name,
+    rows: r.rows,
     geometry,
-    poisson: Number(r.poisson),
-    modulusMpa: Number(r.modulus_mpa),
-    rSquared: Number(r.r_squared),
-    fitFromMm: Number(r.fit_from_mm),
-    fitToMm: Number(r.fit_to_mm),
-    isDemo: Boolean(r.is_demo),
-    draftRevisionId: r.draft_revision_id == null ? null : Number(r.draft_revision_id),
-    createdAt: new Date(r.created_at as string).toISOString(),
+    poisson: r.poisson,
+    modulusMpa: r.modulus_mpa,
+    rSquared: r.r_squared,
+    fitFromMm: r.fit_from_mm,
+    fitToMm: r.fit_to_mm,
+    isDemo: toBool(r.is_demo),
+    draftRevisionId: r.draft_revision_id,
+    createdAt: toIso(r.created_at),
   };
+}
+
+/** A cultivar by slug; 404 when unknown. */
+async function cultivarBySlug(slug: string) {
+  const cultivar = await typed()
+    .selectFrom('cultivars')
+    .select('id')
+    .where('slug', '=', slug)
+    .executeTakeFirst();
+  if (!cultivar) throw new NotFoundError(`No cultivar "${slug.slice(0, 80)}".`);
+  return cultivar;
 }
 
 /** Every cultivar a test may be uploaded for (published or not), by commodity and name. */
 export async function listCultivarChoices(actor: Actor) {
   assertCan(actor, 'lab-tests:upload');
-  const rows = await db('cultivars as c')
-    .join('commodities as m', 'm.id', 'c.commodity_id')
-    .orderBy([{ column: 'm.name' }, { column: 'c.name' }])
-    .select('c.slug', 'c.name', 'm.name as commodity');
-  return rows.map((r) => ({ slug: String(r.slug), label: `${r.commodity} — ${r.name}` }));
+  const rows = await typed()
+    .selectFrom('cultivars as c')
+    .innerJoin('commodities as m', 'm.id', 'c.commodity_id')
+    .orderBy('m.name')
+    .orderBy('c.name')
+    .select(['c.slug', 'c.name', 'm.name as commodity'])
+    .execute();
+  return rows.map((r) => ({ slug: r.slug, label: `${r.commodity} — ${r.name}` }));
 }
 
 /** Lab tests, newest first, optionally of one cultivar (404 if that cultivar is unknown). */
 export async function listCompressionTests(actor: Actor, filter: { cultivarSlug?: string } = {}) {
   assertCan(actor, 'lab-tests:upload');
-  const query = testQuery().orderBy('t.id', 'desc').limit(500);
+  let query = testQuery().orderBy('t.id', 'desc').limit(500);
   if (filter.cultivarSlug !== undefined) {
-    const cultivar = await db('cultivars').where({ slug: filter.cultivarSlug }).first();
-    if (!cultivar) throw new NotFoundError(`No cultivar "${filter.cultivarSlug.slice(0, 80)}".`);
-    query.where('t.cultivar_id', cultivar.id);
+    const cultivar = await cultivarBySlug(filter.cultivarSlug);
+    query = query.where('t.cultivar_id', '=', cultivar.id);
   }
-  return (await query).map(toRecord);
+  return (await query.execute()).map(toRecord);
 }
 
 /** One test with its readings read back from the bucket and the fit recomputed from them. */
@@ -97,11 +111,11 @@ export async function getCompressionTest(
   id: number,
 ): Promise<CompressionTestWithData> {
   assertCan(actor, 'lab-tests:upload');
-  const row = await testQuery().where('t.id', id).first();
+  const row = await testQuery().where('t.id', '=', id).executeTakeFirst();
   if (!row) throw new NotFoundError('No such lab test.');
   const record = toRecord(row);
   try {
-    const object = await getObject(String(row.storage_key));
+    const object = await getObject(row.storage_key);
     if (!object) return { ...record, points: null, fit: null };
     const { points } = parseCompressionCsv(object.body);
     return { ...record, points, fit: fitCompressionCurve(points, record.geometry, record.poisson) };
@@ -147,10 +161,9 @@ function validateUpload(upload: CompressionUpload) {
  */
 export async function createCompressionTest(actor: Actor, upload: CompressionUpload) {
   assertCan(actor, 'lab-tests:upload');
-  const cultivar = await db('cultivars').where({ slug: upload.cultivarSlug }).first();
-  if (!cultivar) throw new NotFoundError(`No cultivar "${upload.cultivarSlug.slice(0, 80)}".`);
+  const cultivar = await cultivarBySlug(upload.cultivarSlug);
   const { geometry, poisson, rows, fit } = validateUpload(upload);
-  const key = `lab-tests/${Number(cultivar.id)}/${randomUUID()}.csv`;
+  const key = `lab-tests/${cultivar.id}/${randomUUID()}.csv`;
   await putObject(key, Buffer.from(upload.bytes), 'text/csv; charset=utf-8');
   try {
     const id = await db.transaction(async (trx) => {
@@ -173,7 +186,7 @@ export async function createCompressionTest(actor: Actor, upload: CompressionUpl
           created_at: new Date(),
         })
         .returning('id');
-      const testId = typeof inserted === 'object' ? Number(inserted.id) : Number(inserted);
+      const testId = insertedId(inserted);
       await recordAudit(trx, {
         actorId: actor.id,
         action: 'compression-test.upload',

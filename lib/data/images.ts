@@ -1,5 +1,9 @@
 import 'server-only';
+import type { Selectable } from 'kysely';
 import { db } from '@/lib/db';
+import { typed } from '@/lib/db-kysely';
+import type { ImagesTable } from '@/lib/db-schema';
+import { toBool, toIso } from '@/lib/db-values';
 import { assertCan, type Actor } from '@/lib/auth/actor';
 import { NotFoundError } from '@/lib/errors';
 import { variantKey, type VariantName } from '@/lib/photos/limits';
@@ -9,31 +13,52 @@ import { deleteObject, getObject, putObject } from '@/lib/storage/object-store';
 
 const bucket: PhotoBucket = { put: putObject, remove: deleteObject };
 
-function toPhoto(r: Record<string, unknown>): PhotoRecord {
+function toPhoto(r: Selectable<ImagesTable>): PhotoRecord {
   return {
-    id: Number(r.id),
-    caption: (r.caption as string | null) ?? null,
-    credit: (r.credit as string | null) ?? null,
-    isDemo: Boolean(r.is_demo),
-    width: Number(r.width),
-    height: Number(r.height),
-    bytes: Number(r.bytes),
-    originalType: String(r.original_type),
-    createdAt: new Date(r.created_at as string | number | Date).toISOString(),
+    id: r.id,
+    caption: r.caption,
+    credit: r.credit,
+    isDemo: toBool(r.is_demo),
+    width: r.width,
+    height: r.height,
+    bytes: r.bytes,
+    originalType: r.original_type,
+    createdAt: toIso(r.created_at),
   };
 }
 
 async function cultivarOf(slug: string) {
-  const cultivar = await db('cultivars').where({ slug }).first();
+  const cultivar = await typed()
+    .selectFrom('cultivars')
+    .select(['id', 'slug'])
+    .where('slug', '=', slug)
+    .executeTakeFirst();
   if (!cultivar) throw new NotFoundError(`No cultivar "${slug.slice(0, 80)}".`);
-  return cultivar as { id: number; slug: string };
+  return cultivar;
+}
+
+/** One photo's row; 404 when unknown. */
+async function photoRow(id: number) {
+  const row = await typed()
+    .selectFrom('images')
+    .selectAll()
+    .where('id', '=', id)
+    .executeTakeFirst();
+  if (!row) throw new NotFoundError('No such photo.');
+  return row;
 }
 
 /** A cultivar's photos, oldest first. */
 export async function listCultivarPhotos(actor: Actor, slug: string): Promise<PhotoRecord[]> {
   assertCan(actor, 'properties:read-published');
   const cultivar = await cultivarOf(slug);
-  const rows = await db('images').where({ cultivar_id: cultivar.id }).orderBy(['created_at', 'id']);
+  const rows = await typed()
+    .selectFrom('images')
+    .selectAll()
+    .where('cultivar_id', '=', cultivar.id)
+    .orderBy('created_at')
+    .orderBy('id')
+    .execute();
   return rows.map(toPhoto);
 }
 
@@ -47,12 +72,12 @@ export async function createCultivarPhoto(
   const cultivar = await cultivarOf(slug);
   const id = await storePhoto(db, bucket, {
     ...input,
-    cultivarId: Number(cultivar.id),
+    cultivarId: cultivar.id,
     cultivarSlug: cultivar.slug,
     isDemo: false,
     uploadedBy: actor.id,
   });
-  return toPhoto(await db('images').where({ id }).first());
+  return toPhoto(await photoRow(id));
 }
 
 /** The WebP bytes of one variant of a photo; 404 when the photo or its object is missing. */
@@ -62,9 +87,8 @@ export async function getPhotoVariant(
   variant: VariantName,
 ): Promise<Buffer> {
   assertCan(actor, 'properties:read-published');
-  const row = await db('images').where({ id }).first();
-  if (!row) throw new NotFoundError('No such photo.');
-  const object = await getObject(variantKey(String(row.storage_prefix), variant));
+  const row = await photoRow(id);
+  const object = await getObject(variantKey(row.storage_prefix, variant));
   if (!object) throw new NotFoundError('The photo file is missing from storage.');
   return object.body;
 }

@@ -1,5 +1,8 @@
 import 'server-only';
-import { db } from '@/lib/db';
+import type { Selectable } from 'kysely';
+import { typed } from '@/lib/db-kysely';
+import type { MailOutboxTable } from '@/lib/db-schema';
+import { toIso } from '@/lib/db-values';
 import { assertCan, type Actor } from '@/lib/auth/actor';
 
 export interface OutboxMessage {
@@ -11,20 +14,25 @@ export interface OutboxMessage {
   receivedAt: string;
 }
 
-function toMessage(r: Record<string, unknown>): OutboxMessage {
+function toMessage(r: Selectable<MailOutboxTable>): OutboxMessage {
   return {
-    id: Number(r.id),
-    from: String(r.from_address),
-    to: String(r.to_addresses),
-    subject: String(r.subject),
-    text: String(r.text_body),
-    receivedAt: new Date(r.received_at as string).toISOString(),
+    id: r.id,
+    from: r.from_address,
+    to: r.to_addresses,
+    subject: r.subject,
+    text: r.text_body,
+    receivedAt: toIso(r.received_at),
   };
 }
 
 /** Messages the local mail catcher received, newest first; admins only. */
 export async function listOutbox(actor: Actor, limit = 100): Promise<OutboxMessage[]> {
   assertCan(actor, 'outbox:read');
-  const rows = await db('mail_outbox').orderBy('id', 'desc').limit(limit);
+  const rows = await typed()
+    .selectFrom('mail_outbox')
+    .selectAll()
+    .orderBy('id', 'desc')
+    .limit(limit)
+    .execute();
   return rows.map(toMessage);
 }
