@@ -1,5 +1,6 @@
 import 'server-only';
 import { db } from '@/lib/db';
+import { typed } from '@/lib/db-kysely';
 import { assertCan, type Actor } from '@/lib/auth/actor';
 import { labTestSource, valuesWithLabTest, type LabTestFacts } from '@/lib/lab-tests/draft-value';
 import { recordAudit } from '@/lib/audit-trail';
@@ -43,11 +44,14 @@ async function ensureSource(actor: Actor, facts: LabTestFacts): Promise<void> {
 /** An editable draft of this actor's already made from the test, if any. */
 async function openDraftOf(actor: Actor, test: CompressionTestWithData): Promise<number | null> {
   if (test.draftRevisionId === null) return null;
-  const row = await db('property_revisions')
-    .where({ id: test.draftRevisionId, author_id: actor.id })
-    .whereIn('status', ['draft', 'returned'])
-    .first();
-  return row ? Number(row.id) : null;
+  const row = await typed()
+    .selectFrom('property_revisions')
+    .select('id')
+    .where('id', '=', test.draftRevisionId)
+    .where('author_id', '=', actor.id)
+    .where('status', 'in', ['draft', 'returned'])
+    .executeTakeFirst();
+  return row ? row.id : null;
 }
 
 // createDraft and updateDraft each commit on their own; if a later step fails, the new draft is

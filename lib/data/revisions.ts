@@ -1,6 +1,8 @@
 import 'server-only';
 import type { Knex } from 'knex';
 import { db } from '@/lib/db';
+import { typed } from '@/lib/db-kysely';
+import { insertedId, toCount } from '@/lib/db-values';
 import { assertCan, type Actor } from '@/lib/auth/actor';
 import { ConflictError, ForbiddenError, NotFoundError, ValidationError } from '@/lib/errors';
 import type { RevisionStatus } from '@/lib/properties/quantities';
@@ -23,9 +25,20 @@ function withoutId(row: Record<string, unknown>): Record<string, unknown> {
 }
 
 async function loadRevision(trx: Knex.Transaction, id: number) {
-  const row = await trx('property_revisions').where({ id }).first();
+  const row = await typed(trx)
+    .selectFrom('property_revisions')
+    .selectAll()
+    .where('id', '=', id)
+    .executeTakeFirst();
   if (!row) throw new NotFoundError('No such revision.');
   return row;
+}
+
+async function cultivarWhere(trx: Knex.Transaction, where: { id: number } | { slug: string }) {
+  const query = typed(trx).selectFrom('cultivars').select(['id', 'published_revision_id']);
+  return 'id' in where
+    ? query.where('id', '=', where.id).executeTakeFirst()
+    : query.where('slug', '=', where.slug).executeTakeFirst();
 }
 
 /** Move a revision from one of `from` to `to`; a racing change (0 rows) is a 409. */
@@ -51,17 +64,18 @@ function stateName(status: string): string {
 export async function createDraft(actor: Actor, slug: string, summary?: string | null) {
   assertCan(actor, 'revisions:edit');
   return db.transaction(async (trx) => {
-    const cultivar = await trx('cultivars').where({ slug }).first();
+    const cultivar = await cultivarWhere(trx, { slug });
     if (!cultivar) throw new NotFoundError(`No cultivar "${slug.slice(0, 80)}".`);
-    const [{ max }] = await trx('property_revisions')
-      .where({ cultivar_id: cultivar.id })
-      .max({ max: 'number' });
-    const base =
-      cultivar.published_revision_id == null ? null : Number(cultivar.published_revision_id);
+    const { max } = await typed(trx)
+      .selectFrom('property_revisions')
+      .select((eb) => eb.fn.max('number').as('max'))
+      .where('cultivar_id', '=', cultivar.id)
+      .executeTakeFirstOrThrow();
+    const base = cultivar.published_revision_id;
     const [row] = await trx('property_revisions')
       .insert({
         cultivar_id: cultivar.id,
-        number: Number(max ?? 0) + 1,
+        number: toCount(max) + 1,
         status: 'draft',
         author_id: actor.id,
         based_on_id: base,
@@ -70,9 +84,14 @@ export async function createDraft(actor: Actor, slug: string, summary?: string |
         updated_at: new Date(),
       })
       .returning('id');
-    const id = typeof row === 'object' ? Number(row.id) : Number(row);
+    const id = insertedId(row);
     if (base !== null) {
-      const copied = await trx('revision_values').where({ revision_id: base }).orderBy('position');
+      const copied = await typed(trx)
+        .selectFrom('revision_values')
+        .selectAll()
+        .where('revision_id', '=', base)
+        .orderBy('position')
+        .execute();
       if (copied.length) {
         await trx('revision_values').insert(
           copied.map((v) => ({ ...withoutId(v), revision_id: id })),
@@ -91,7 +110,7 @@ export async function createDraft(actor: Actor, slug: string, summary?: string |
 }
 
 function assertAuthor(actor: Actor, row: { author_id: number }) {
-  if (Number(row.author_id) !== actor.id) {
+  if (row.author_id !== actor.id) {
     throw new ForbiddenError('Only the author of a draft may change, submit or rebase it.');
   }
 }
@@ -105,9 +124,13 @@ export async function updateDraft(actor: Actor, id: number, input: unknown) {
     assertAuthor(actor, row);
     const keys = [...new Set(change.values.map((v) => v.sourceKey).filter(Boolean))] as string[];
     const sources = keys.length
-      ? await trx('sources').whereIn('key', keys).select('id', 'key')
+      ? await typed(trx)
+          .selectFrom('sources')
+          .select(['id', 'key'])
+          .where('key', 'in', keys)
+          .execute()
       : [];
-    const sourceId = new Map(sources.map((s) => [String(s.key), Number(s.id)]));
+    const sourceId = new Map(sources.map((s) => [s.key, s.id]));
     const unknown: Record<string, string[]> = {};
     change.values.forEach((v, i) => {
       if (v.sourceKey && !sourceId.has(v.sourceKey)) {
@@ -147,8 +170,12 @@ export async function submitDraft(actor: Actor, id: number) {
   return db.transaction(async (trx) => {
     const row = await loadRevision(trx, id);
     assertAuthor(actor, row);
-    const [{ n }] = await trx('revision_values').where({ revision_id: id }).count({ n: '*' });
-    if (Number(n) === 0) throw new ValidationError('Add at least one value before submitting.');
+    const { n } = await typed(trx)
+      .selectFrom('revision_values')
+      .select((eb) => eb.fn.countAll().as('n'))
+      .where('revision_id', '=', id)
+      .executeTakeFirstOrThrow();
+    if (toCount(n) === 0) throw new ValidationError('Add at least one value before submitting.');
     await transition(
       trx,
       id,
@@ -167,7 +194,7 @@ export async function submitDraft(actor: Actor, id: number) {
 }
 
 function assertNotAuthor(actor: Actor, row: { author_id: number }) {
-  if (Number(row.author_id) === actor.id) {
+  if (row.author_id === actor.id) {
     throw new ForbiddenError(
       'Another editor must review this revision: nobody publishes or returns their own.',
     );
@@ -206,13 +233,17 @@ export async function returnRevision(actor: Actor, id: number, input: unknown) {
 
 async function numberOf(trx: Knex.Transaction, id: number | null): Promise<string> {
   if (id === null) return 'nothing';
-  const row = await trx('property_revisions').where({ id }).first();
+  const row = await typed(trx)
+    .selectFrom('property_revisions')
+    .select('number')
+    .where('id', '=', id)
+    .executeTakeFirst();
   return `revision ${row?.number ?? id}`;
 }
 
 /** The 409 text: which revision was published meanwhile, and what to do. */
 async function staleBaseMessage(trx: Knex.Transaction, cultivarId: number, base: number | null) {
-  const cultivar = await trx('cultivars').where({ id: cultivarId }).first();
+  const cultivar = await cultivarWhere(trx, { id: cultivarId });
   const newer = await numberOf(trx, cultivar?.published_revision_id ?? null);
   return `This draft was started from ${await numberOf(trx, base)}, but ${newer} has been published since. Rebase the draft on ${newer}, check its values, and submit it again.`;
 }
@@ -232,7 +263,7 @@ export async function publishRevision(actor: Actor, id: number) {
         `Revision ${row.number} is ${stateName(row.status)}; only a revision in review can be published.`,
       );
     }
-    const base = row.based_on_id == null ? null : Number(row.based_on_id);
+    const base = row.based_on_id;
     const swap = trx('cultivars').where({ id: row.cultivar_id });
     if (base === null) swap.whereNull('published_revision_id');
     else swap.where({ published_revision_id: base });
@@ -263,7 +294,7 @@ export async function publishRevision(actor: Actor, id: number) {
       entityId: id,
       detail: { supersedes: base },
     });
-    return { id, cultivarId: Number(row.cultivar_id), number: Number(row.number), base };
+    return { id, cultivarId: row.cultivar_id, number: row.number, base };
   });
   await notifyFollowers(result);
   return { id, status: 'published' as const };
@@ -275,7 +306,8 @@ export async function rebaseDraft(actor: Actor, id: number) {
   return db.transaction(async (trx) => {
     const row = await loadRevision(trx, id);
     assertAuthor(actor, row);
-    const cultivar = await trx('cultivars').where({ id: row.cultivar_id }).first();
+    const cultivar = await cultivarWhere(trx, { id: row.cultivar_id });
+    if (!cultivar) throw new NotFoundError('No such cultivar.');
     await transition(
       trx,
       id,
@@ -290,6 +322,6 @@ export async function rebaseDraft(actor: Actor, id: number) {
       entityId: id,
       detail: { from: row.based_on_id, to: cultivar.published_revision_id },
     });
-    return { id, basedOnId: cultivar.published_revision_id as number | null };
+    return { id, basedOnId: cultivar.published_revision_id };
   });
 }
