@@ -3,18 +3,11 @@
 import { useState } from 'react';
 import type { DropCheckResult } from '@/lib/checks/drop/check';
 import { DROP_SURFACE_KEYS, DROP_SURFACES, type DropSurface } from '@/lib/checks/surfaces';
-import { CultivarSelect, type CultivarOption } from './check-fields';
-import {
-  CheckFormError,
-  FRUIT_FIELDS,
-  FruitFieldset,
-  MeasureFields,
-  type FieldSpec,
-} from './measure-fields';
+import type { CultivarOption } from './check-fields';
+import { CheckForm, MeasureFields, type FieldSpec } from './measure-fields';
 import { dropDescriptor } from '@/lib/checks/drop/report';
 import { CheckWorkbench } from './check-workbench';
-import { siFields, useCheck } from './use-check';
-import { initialText, type FormText } from './initial-text';
+import { useCheckForm } from './use-check-form';
 import { useUnits } from '@/components/units/units-provider';
 
 const PAD_FIELDS: readonly FieldSpec[] = [
@@ -29,36 +22,23 @@ export function DropCheck({
   cultivars: CultivarOption[];
   initialCultivar: string;
 }) {
-  const units = useUnits();
-  const [cultivar, setCultivar] = useState(initialCultivar);
   const [surface, setSurface] = useState<DropSurface>('steel');
-  const [text, setText] = useState<FormText>(() =>
-    initialText(
-      {
-        heightMm: '150',
-        padModulusMpa: '0.5',
-        padThicknessMm: '25',
-      },
-      units.toDisplay,
-    ),
-  );
-  const set = (key: string) => (value: string) => setText((t) => ({ ...t, [key]: value }));
-  const body: Record<string, unknown> = {
-    surface,
-    ...(cultivar && { cultivar }),
-    ...siFields(text, units.fromDisplay, (key) => !key.startsWith('pad') || surface === 'foam'),
-  };
-  const state = useCheck<DropCheckResult>('/api/checks/drop', body);
-  const fields = { text, set, fieldErrors: state.fieldErrors };
-  const option = cultivars.find((o) => o.slug === cultivar);
+  const { cultivar, setCultivar, body, state, fields } = useCheckForm<DropCheckResult>({
+    endpoint: '/api/checks/drop',
+    initialCultivar,
+    defaults: { heightMm: '150', padModulusMpa: '0.5', padThicknessMm: '25' },
+    choices: { surface },
+    keep: (key) => !key.startsWith('pad') || surface === 'foam',
+  });
   const form = (
-    <form className="space-y-3" onSubmit={(e) => e.preventDefault()} aria-label="Drop inputs">
-      <CultivarSelect
-        options={cultivars}
-        value={cultivar}
-        onChange={setCultivar}
-        errors={state.fieldErrors.cultivar}
-      />
+    <CheckForm
+      label="Drop inputs"
+      cultivars={cultivars}
+      cultivar={cultivar}
+      setCultivar={setCultivar}
+      fields={fields}
+      message={state.message}
+    >
       <MeasureFields fields={[['heightMm', 'Drop height']]} state={fields} />
       <div className="space-y-1">
         <label htmlFor="drop-surface" className="block text-sm font-medium">
@@ -79,9 +59,7 @@ export function DropCheck({
         <p className="text-xs text-stone-500">{DROP_SURFACES[surface].basis}</p>
       </div>
       {surface === 'foam' ? <MeasureFields fields={PAD_FIELDS} state={fields} /> : null}
-      <FruitFieldset fields={FRUIT_FIELDS} state={fields} option={option} />
-      <CheckFormError message={state.message} />
-    </form>
+    </CheckForm>
   );
   return (
     <CheckWorkbench

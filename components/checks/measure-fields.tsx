@@ -1,7 +1,8 @@
 'use client';
 
 import { useUnits } from '@/components/units/units-provider';
-import { MeasureField, publishedHint, type CultivarOption } from './check-fields';
+import type { ReactNode } from 'react';
+import { CultivarSelect, MeasureField, publishedHint, type CultivarOption } from './check-fields';
 import { FIELD_UNITS, type CheckField } from '@/lib/checks/field-units';
 import type { FormText } from './initial-text';
 
@@ -87,3 +88,43 @@ export const FRUIT_FIELDS: readonly FieldSpec[] = [
   ['massG', 'Mass'],
   ['staticThresholdKpa', 'Static bruise threshold'],
 ];
+
+/**
+ * A check form with the cultivar first and the fruit's figures last: the check's own fields go
+ * between. `message` is the route's form-level message.
+ */
+export function CheckForm({
+  label,
+  cultivars,
+  cultivar,
+  setCultivar,
+  fields,
+  message,
+  children,
+}: {
+  label: string;
+  cultivars: CultivarOption[];
+  cultivar: string;
+  setCultivar: (slug: string) => void;
+  fields: FieldsState;
+  message: string | null;
+  children: ReactNode;
+}) {
+  return (
+    <form className="space-y-3" onSubmit={(e) => e.preventDefault()} aria-label={label}>
+      <CultivarSelect
+        options={cultivars}
+        value={cultivar}
+        onChange={setCultivar}
+        errors={fields.fieldErrors.cultivar}
+      />
+      {children}
+      <FruitFieldset
+        fields={FRUIT_FIELDS}
+        state={fields}
+        option={cultivars.find((o) => o.slug === cultivar)}
+      />
+      <CheckFormError message={message} />
+    </form>
+  );
+}

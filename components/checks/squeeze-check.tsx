@@ -3,15 +3,13 @@
 import { useState } from 'react';
 import type { FacingPreset } from '@/lib/checks/facings';
 import type { SqueezeCheckResult } from '@/lib/checks/squeeze/check';
-import { useUnits } from '@/components/units/units-provider';
 import type { CultivarOption } from './check-fields';
-import { initialText, type FormText } from './initial-text';
 import { squeezeDescriptor } from '@/lib/checks/squeeze/report';
 import { CheckWorkbench } from './check-workbench';
+import { useCheckForm } from './use-check-form';
 import { SlipMap } from './slip-map';
 import { SqueezeForm } from './squeeze-form';
 import { SqueezeProbability } from './squeeze-probability';
-import { siFields, useCheck } from './use-check';
 
 export function SqueezeCheck({
   cultivars,
@@ -20,28 +18,21 @@ export function SqueezeCheck({
   cultivars: CultivarOption[];
   initialCultivar: string;
 }) {
-  const units = useUnits();
-  const [cultivar, setCultivar] = useState(initialCultivar);
   const [facing, setFacing] = useState<FacingPreset>('rigid');
-  const [text, setText] = useState<FormText>(() =>
-    initialText(
-      {
-        padDiameterMm: '20',
-        padEdgeMm: '2',
-        safetyFactor: '2',
-        accelerationMs2: '2',
-        maxTravelMm: '2',
-      },
-      units.toDisplay,
-    ),
-  );
-  const set = (key: string) => (value: string) => setText((t) => ({ ...t, [key]: value }));
-  const body: Record<string, unknown> = {
-    facing,
-    ...(cultivar && { cultivar }),
-    ...siFields(text, units.fromDisplay, (key) => !key.startsWith('facing') || facing === 'custom'),
-  };
-  const state = useCheck<SqueezeCheckResult>('/api/checks/squeeze', body, 500);
+  const { cultivar, setCultivar, text, set, body, state } = useCheckForm<SqueezeCheckResult>({
+    endpoint: '/api/checks/squeeze',
+    initialCultivar,
+    defaults: {
+      padDiameterMm: '20',
+      padEdgeMm: '2',
+      safetyFactor: '2',
+      accelerationMs2: '2',
+      maxTravelMm: '2',
+    },
+    choices: { facing },
+    keep: (key) => !key.startsWith('facing') || facing === 'custom',
+    delayMs: 500,
+  });
   return (
     <CheckWorkbench
       check="squeeze"

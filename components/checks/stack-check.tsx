@@ -1,19 +1,11 @@
 'use client';
 
-import { useState } from 'react';
 import type { StackCheckResult } from '@/lib/checks/stack/check';
-import { CultivarSelect, type CultivarOption } from './check-fields';
-import {
-  CheckFormError,
-  FRUIT_FIELDS,
-  FruitFieldset,
-  MeasureFields,
-  type FieldSpec,
-} from './measure-fields';
+import type { CultivarOption } from './check-fields';
+import { CheckForm, MeasureFields, type FieldSpec } from './measure-fields';
 import { stackDescriptor } from '@/lib/checks/stack/report';
 import { CheckWorkbench } from './check-workbench';
-import { siFields, useCheck } from './use-check';
-import { initialText, type FormText } from './initial-text';
+import { useCheckForm } from './use-check-form';
 import { useUnits } from '@/components/units/units-provider';
 
 const BIN_FIELDS: readonly FieldSpec[] = [
@@ -37,37 +29,23 @@ export function StackCheck({
   initialCultivar: string;
 }) {
   const units = useUnits();
-  const [cultivar, setCultivar] = useState(initialCultivar);
-  const [text, setText] = useState<FormText>(() =>
-    initialText(
-      {
-        binLengthMm: '1200',
-        binWidthMm: '1000',
-        fillDepthMm: '600',
-      },
-      units.toDisplay,
-    ),
-  );
-  const set = (key: string) => (value: string) => setText((t) => ({ ...t, [key]: value }));
-  const body: Record<string, unknown> = {
-    ...(cultivar && { cultivar }),
-    ...siFields(text, units.fromDisplay),
-  };
-  const state = useCheck<StackCheckResult>('/api/checks/stack', body);
-  const fields = { text, set, fieldErrors: state.fieldErrors };
-  const option = cultivars.find((o) => o.slug === cultivar);
+  const { cultivar, setCultivar, body, state, fields } = useCheckForm<StackCheckResult>({
+    endpoint: '/api/checks/stack',
+    initialCultivar,
+    defaults: { binLengthMm: '1200', binWidthMm: '1000', fillDepthMm: '600' },
+    choices: {},
+  });
   const form = (
-    <form className="space-y-3" onSubmit={(e) => e.preventDefault()} aria-label="Stack inputs">
-      <CultivarSelect
-        options={cultivars}
-        value={cultivar}
-        onChange={setCultivar}
-        errors={state.fieldErrors.cultivar}
-      />
+    <CheckForm
+      label="Stack inputs"
+      cultivars={cultivars}
+      cultivar={cultivar}
+      setCultivar={setCultivar}
+      fields={fields}
+      message={state.message}
+    >
       <MeasureFields fields={BIN_FIELDS} state={fields} />
-      <FruitFieldset fields={FRUIT_FIELDS} state={fields} option={option} />
-      <CheckFormError message={state.message} />
-    </form>
+    </CheckForm>
   );
   return (
     <CheckWorkbench
