@@ -5,14 +5,15 @@ import { assertCan, type Actor } from '@/lib/auth/actor';
 import { can, invitableRoles, type Role } from '@/lib/auth/roles';
 import { ConflictError, ForbiddenError, NotFoundError } from '@/lib/errors';
 import { recordAudit } from '@/lib/audit-trail';
+import { toIso } from '@/lib/db-values';
 import { mailInvitation, newToken } from './invitation-mail';
 import {
   assertUnderHourlyLimit,
   canManage,
   insertInvitation,
   markReplaced,
+  roleOf,
   stateOf,
-  toDate,
   whereOpen,
   type InvitationRecord,
 } from './invitation-rules';
@@ -43,12 +44,12 @@ export async function listOpenInvitations(actor: Actor, now = new Date()) {
   }
   const rows: (InvitationRecord & { inviter_name: string; inviter_email: string })[] = await query;
   return rows.map((r): OpenInvitation => ({
-    id: Number(r.id),
+    id: r.id,
     email: r.email,
-    role: r.role,
+    role: roleOf(r),
     inviter: { name: r.inviter_name, email: r.inviter_email },
-    createdAt: toDate(r.created_at).toISOString(),
-    expiresAt: toDate(r.expires_at).toISOString(),
+    createdAt: toIso(r.created_at),
+    expiresAt: toIso(r.expires_at),
     expired: stateOf(r, now) === 'expired',
   }));
 }
@@ -69,7 +70,7 @@ async function openInvitationFor(trx: Knex.Transaction, actor: Actor, id: number
   if (state === 'used' || state === 'revoked' || state === 'replaced') {
     throw new ConflictError(`This invitation was already ${state}; there is nothing to change.`);
   }
-  return row;
+  return { ...row, role: roleOf(row) };
 }
 
 /** Withdraw an open invitation: its link stops working and says it was withdrawn. */

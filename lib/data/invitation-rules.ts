@@ -1,7 +1,10 @@
 import 'server-only';
 import type { Knex } from 'knex';
+import type { Selectable } from 'kysely';
+import type { InvitationsTable } from '@/lib/db-schema';
+import { insertedId, toDate } from '@/lib/db-values';
 import type { Actor } from '@/lib/auth/actor';
-import { can, invitableRoles, type Role } from '@/lib/auth/roles';
+import { can, invitableRoles, isRole, type Role } from '@/lib/auth/roles';
 import { RateLimitError } from '@/lib/errors';
 import type { InvitationProblem } from '@/lib/invitations/messages';
 
@@ -9,21 +12,16 @@ export const INVITATION_DAYS = 7;
 export const INVITATIONS_PER_HOUR = 20;
 const HOUR_MS = 3600 * 1000;
 
-/** An invitations row as the database returns it (timestamps are Dates or epoch ms by driver). */
-export interface InvitationRecord {
-  id: number;
-  email: string;
-  role: Role;
-  invited_by: number;
-  expires_at: Date | number | string;
-  accepted_at: unknown;
-  revoked_at: unknown;
-  replaced_at: unknown;
-  created_at: Date | number | string;
-}
+/**
+ * An invitations row as the drivers return it (lib/db-schema.ts). Its role is text: the readers
+ * check it with isRole before handing it on as a Role.
+ */
+export type InvitationRecord = Selectable<InvitationsTable>;
 
-export function toDate(value: Date | number | string): Date {
-  return value instanceof Date ? value : new Date(value);
+/** The row's role; a role the app does not know is a broken row, not something to pass on. */
+export function roleOf(row: Pick<InvitationRecord, 'id' | 'role'>): Role {
+  if (!isRole(row.role)) throw new Error(`invitation ${row.id} has an unknown role`);
+  return row.role;
 }
 
 /** Open means not used, revoked or replaced; an open invitation past its expiry is 'expired'. */
@@ -51,7 +49,8 @@ export function canManage(actor: Actor, row: Pick<InvitationRecord, 'invited_by'
   if (can(actor.role, 'invitations:create-any')) return true;
   return (
     can(actor.role, 'invitations:create-buyer') &&
-    Number(row.invited_by) === actor.id &&
+    row.invited_by === actor.id &&
+    isRole(row.role) &&
     invitableRoles(actor.role).includes(row.role)
   );
 }
@@ -96,7 +95,7 @@ export async function insertInvitation(
       created_at: values.now,
     })
     .returning('id');
-  return { id: typeof row === 'object' ? Number(row.id) : Number(row), expiresAt };
+  return { id: insertedId(row), expiresAt };
 }
 
 /** Mark open invitations as replaced by a newer one; only rows still open are touched. */

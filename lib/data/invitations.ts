@@ -9,6 +9,7 @@ import { invitationTokenSchema, TOKEN_PATTERN } from '@/lib/validation/invitatio
 import { parseInput } from '@/lib/validation/parse';
 import { acceptInvitationSchema, invitationSchema } from '@/lib/validation/users';
 import { recordAudit } from '@/lib/audit-trail';
+import { toDate } from '@/lib/db-values';
 import { hashToken, mailInvitation, newToken } from './invitation-mail';
 import {
   assertUnderHourlyLimit,
@@ -16,7 +17,6 @@ import {
   insertInvitation,
   markReplaced,
   stateOf,
-  toDate,
   whereOpen,
   type InvitationRecord,
 } from './invitation-rules';
@@ -54,7 +54,7 @@ export async function createInvitation(actor: Actor, input: unknown) {
         'Someone else has already invited this address. Ask an admin to revoke that invitation first.',
       );
     }
-    const replaced = open.map((row) => Number(row.id));
+    const replaced = open.map((row) => row.id);
     const row = await insertInvitation(trx, { email, role, tokenHash, invitedBy: actor.id, now });
     await markReplaced(trx, replaced, row.id, now);
     await recordAudit(trx, {
