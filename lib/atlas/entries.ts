@@ -1,5 +1,6 @@
 import 'server-only';
-import { db } from '@/lib/db';
+import { typed } from '@/lib/db-kysely';
+import { toBool } from '@/lib/db-values';
 import type { Actor } from '@/lib/auth/actor';
 import { listCommodities } from '@/lib/data/cultivars';
 import type { CommodityRef } from '@/lib/properties/records';
@@ -22,19 +23,21 @@ export interface AtlasEntry {
 /** The first photo of any cultivar of each commodity (photos are served by /api/photos). */
 async function firstPhotos(commodityIds: number[]): Promise<Map<number, AtlasPhoto>> {
   if (!commodityIds.length) return new Map();
-  const rows = await db('images as i')
-    .join('cultivars as c', 'c.id', 'i.cultivar_id')
-    .whereIn('c.commodity_id', commodityIds)
-    .orderBy([{ column: 'i.created_at' }, { column: 'i.id' }])
-    .select('i.id', 'i.caption', 'i.is_demo', 'c.commodity_id', 'c.name as cultivar');
+  const rows = await typed()
+    .selectFrom('images as i')
+    .innerJoin('cultivars as c', 'c.id', 'i.cultivar_id')
+    .where('c.commodity_id', 'in', commodityIds)
+    .orderBy('i.created_at')
+    .orderBy('i.id')
+    .select(['i.id', 'i.caption', 'i.is_demo', 'c.commodity_id', 'c.name as cultivar'])
+    .execute();
   const out = new Map<number, AtlasPhoto>();
   for (const r of rows) {
-    const key = Number(r.commodity_id);
-    if (out.has(key)) continue;
-    out.set(key, {
-      id: Number(r.id),
-      alt: String(r.caption ?? `Photo of ${r.cultivar}`),
-      isDemo: Boolean(r.is_demo),
+    if (out.has(r.commodity_id)) continue;
+    out.set(r.commodity_id, {
+      id: r.id,
+      alt: r.caption ?? `Photo of ${r.cultivar}`,
+      isDemo: toBool(r.is_demo),
     });
   }
   return out;

@@ -1,5 +1,5 @@
 import 'server-only';
-import { db } from '@/lib/db';
+import { typed } from '@/lib/db-kysely';
 import { assertCan, type Actor } from '@/lib/auth/actor';
 import { toSource } from '@/lib/data/property-rows';
 import type { SourceRef } from '@/lib/properties/records';
@@ -15,8 +15,10 @@ export class UnknownSourceError extends Error {
 /** The sources of the given keys, in the keys' order; throws UnknownSourceError for any missing. */
 export async function getSourcesByKeys(actor: Actor, keys: string[]): Promise<SourceRef[]> {
   assertCan(actor, 'atlas:read');
-  const rows = keys.length ? await db('sources').whereIn('key', keys) : [];
-  const byKey = new Map(rows.map((r) => [String(r.key), toSource(r)]));
+  const rows = keys.length
+    ? await typed().selectFrom('sources').selectAll().where('key', 'in', keys).execute()
+    : [];
+  const byKey = new Map(rows.map((r) => [r.key, toSource(r)]));
   const missing = keys.filter((k) => !byKey.has(k));
   if (missing.length) throw new UnknownSourceError(missing);
   return keys.map((k) => byKey.get(k)!);
