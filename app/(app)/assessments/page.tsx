@@ -2,6 +2,7 @@ import Link from 'next/link';
 import { PageTitle } from '@/components/ui/page-title';
 import { can } from '@/lib/auth/roles';
 import { requirePageActor } from '@/lib/auth/session';
+import { CHECKS } from '@/lib/checks/registry';
 import { CHECK_NAMES_LIST } from '@/lib/validation/check-names';
 import { listAssessments } from '@/lib/data/assessments';
 import { titleFor } from '@/lib/page-title';
@@ -24,7 +25,8 @@ export default async function AssessmentsPage({ searchParams }: { searchParams: 
   const all = await listAssessments(actor, { check, cultivar: q.cultivar || undefined });
   const rows = all.map((a) => ({
     ...a,
-    margin: (a.results as { margin?: { value: number } | null }).margin?.value ?? null,
+    // Read through the check's own result schema, like the report.
+    margin: CHECKS[a.check].show(a.results).margin?.value ?? null,
   }));
   const sort = (Object.keys(SORTS) as (keyof typeof SORTS)[]).find((s) => s === q.sort) ?? 'newest';
   rows.sort(SORTS[sort] as (a: (typeof rows)[number], b: (typeof rows)[number]) => number);
