@@ -32,8 +32,7 @@ function hash(text: string): number {
 
 /**
  * Model work off the main thread. One single-thread piscina pool per thread, so a task can be
- * sent to the thread whose cache holds its body: the key's own thread when it is idle, else an
- * idle one, else (all busy) the key's own queue.
+ * sent to the thread whose cache holds its body (see `lane`).
  */
 export class ComputePool<T extends TaskTable> {
   private lanes: Piscina[] = [];
@@ -58,13 +57,16 @@ export class ComputePool<T extends TaskTable> {
     return this.ready;
   }
 
+  /**
+   * The key's own thread while it is no busier than any other (its cache serves the task);
+   * otherwise the least busy thread, so a burst of one key spreads over every core instead of
+   * queueing on one.
+   */
   private lane(affinity: string | undefined): number {
+    const least = Math.min(...this.busy);
     const own = affinity === undefined ? -1 : hash(affinity) % this.busy.length;
-    if (own >= 0 && this.busy[own] === 0) return own;
-    const idle = this.busy.indexOf(0);
-    if (idle >= 0) return idle;
-    if (own >= 0) return own;
-    return this.busy.indexOf(Math.min(...this.busy));
+    if (own >= 0 && this.busy[own] === least) return own;
+    return this.busy.indexOf(least);
   }
 
   /** Run task `name`; a refusal of the model comes back as its typed error. */

@@ -81,6 +81,17 @@ describe('compute pool (real worker threads)', () => {
     expect(other.threadId).not.toBe((await long).threadId);
   });
 
+  it('spreads a burst of one key over every thread instead of queueing it on one', async () => {
+    // Before: with every thread busy, all of one key's tasks queued on its own thread while the
+    // other stood idle (five of six on one thread). Now each goes to the least busy thread.
+    const runs = await Promise.all(
+      Array.from({ length: 6 }, () => pool.run('spin', { ms: 50 }, { affinity: 'burst' })),
+    );
+    const perThread = new Map<number, number>();
+    for (const r of runs) perThread.set(r.threadId, (perThread.get(r.threadId) ?? 0) + 1);
+    expect([...perThread.values()].sort()).toEqual([3, 3]);
+  });
+
   it('runs inline when asked, with the same typed refusals', async () => {
     const inline = new ComputePool({ filename: '', threads: 1, inline: FIXTURE_TASKS });
     expect(await inline.run('where', { tag: 'i' })).toMatchObject({ mainThread: true });
