@@ -2,27 +2,43 @@ import type { NextAuthOptions } from 'next-auth';
 import CredentialsProvider from 'next-auth/providers/credentials';
 import { attemptSignIn } from '@/lib/auth/sign-in';
 import { signInContext } from '@/lib/auth/sign-in-context';
-import { getSessionUser } from '@/lib/auth/accounts';
-import { endAllSessions } from '@/lib/data/users';
-import { decodeSessionToken, encodeSessionToken, SESSION_MAX_AGE } from '@/lib/auth/session-token';
+import {
+  endSession,
+  SESSION_MAX_AGE,
+  sessionCookieName,
+  sessionCookieOptions,
+  startSession,
+} from '@/lib/auth/session-store';
 import { clientAddress } from '@/lib/http/client-address';
 import { isHttpsApp } from '@/lib/http/origin';
 import { signInSchema } from '@/lib/validation/users';
 
-/** Thrown inside the jwt callback: next-auth then clears the cookie and reports no session. */
-class SessionRevoked extends Error {
+/** Thrown if anything asks next-auth to read a session: lib/auth/read-session.ts does that. */
+class NotTheSessionRead extends Error {
   constructor() {
-    super('The session was ended (signed out, password changed, or account changed).');
-    this.name = 'SessionRevoked';
+    super('Sessions are read by readSession() (lib/auth/read-session.ts), not by next-auth.');
+    this.name = 'NotTheSessionRead';
   }
 }
 
+/**
+ * next-auth checks the credentials and writes the cookie; the session itself is a database row
+ * (lib/auth/session-store.ts). next-auth refuses its 'database' strategy with credentials, so
+ * its 'jwt' strategy is kept and its token codec swapped: "encoding" at sign-in starts a
+ * database session and returns its random token, "decoding" (which next-auth does only to sign
+ * out) hands that token to the signOut event, which deletes the row.
+ */
 export const authOptions: NextAuthOptions = {
   session: { strategy: 'jwt', maxAge: SESSION_MAX_AGE },
-  // The token expires with the session: next-auth would otherwise seal it for 30 days whatever
-  // the cookie lifetime, so a copied cookie value would outlive the cookie.
-  jwt: { encode: encodeSessionToken, decode: decodeSessionToken, maxAge: SESSION_MAX_AGE },
+  jwt: {
+    maxAge: SESSION_MAX_AGE,
+    encode: async ({ token }) => startSession(Number(token?.sub)),
+    decode: async ({ token }) => (token ? { sid: token } : null),
+  },
   useSecureCookies: isHttpsApp(),
+  cookies: {
+    sessionToken: { name: sessionCookieName(), options: sessionCookieOptions() },
+  },
   pages: { signIn: '/sign-in', error: '/sign-in' },
   providers: [
     CredentialsProvider({
@@ -42,48 +58,25 @@ export const authOptions: NextAuthOptions = {
           throw new Error('RateLimited');
         }
         if (outcome.kind === 'failed') return null;
-        const { id, email, name, role, generation } = outcome.user;
-        return { id: String(id), email, name, role, generation };
+        const { id, email, name, role } = outcome.user;
+        return { id: String(id), email, name, role };
       },
     }),
   ],
   callbacks: {
-    /**
-     * At sign-in the token takes the user's generation; on every later read the user must still
-     * be enabled and of that generation, so sign-out, a password change, disabling or a role
-     * change ends the session everywhere, and /api/auth/session agrees with the server.
-     */
+    // Only sign-in runs this (with the user): its token is encoded into a new database session.
     async jwt({ token, user }) {
-      if (user) {
-        token.role = user.role;
-        token.gen = user.generation;
-        return token;
-      }
-      const current = await getSessionUser(Number(token.sub));
-      if (!current || current.generation !== token.gen) throw new SessionRevoked();
-      token.role = current.role;
-      return token;
-    },
-    async session({ session, token }) {
-      if (session.user) {
-        session.user.id = token.sub ?? '';
-        session.user.role = token.role;
-        session.user.generation = token.gen;
-      }
-      return session;
+      if (!user) throw new NotTheSessionRead();
+      return { sub: token.sub };
     },
   },
   events: {
     async signOut({ token }) {
-      const id = Number(token?.sub);
-      if (Number.isInteger(id) && id > 0) await endAllSessions(id, 'sign-out');
+      if (typeof token?.sid === 'string') await endSession(token.sid);
     },
   },
   logger: {
     error(code, metadata) {
-      // A revoked session is expected, not a server fault.
-      const cause = (metadata as { error?: unknown })?.error ?? metadata;
-      if (code === 'JWT_SESSION_ERROR' && cause instanceof SessionRevoked) return;
       console.error(`[next-auth] ${code}`, metadata);
     },
     warn() {},

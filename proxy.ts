@@ -1,6 +1,5 @@
-import { getToken } from 'next-auth/jwt';
 import { NextResponse, type NextRequest } from 'next/server';
-import { decodeSessionToken } from '@/lib/auth/session-token';
+import { readSession, type SessionCookies } from '@/lib/auth/read-session';
 import { crossSiteMessage, crossSiteReason, isHttpsApp } from '@/lib/http/origin';
 import { contentSecurityPolicy, HSTS } from '@/lib/http/security-headers';
 
@@ -8,7 +7,8 @@ import { contentSecurityPolicy, HSTS } from '@/lib/http/security-headers';
  * The first, cheap layer in front of every page and API route:
  * - posts to pages (server actions) from another origin get a plain 403, and a form post that
  *   names no action gets a 400, instead of Next's 500;
- * - signed-out visitors to pages go to /sign-in (API routes answer 401 themselves);
+ * - signed-out visitors to pages go to /sign-in (API routes answer 401 themselves), by the same
+ *   session read as every page, route and action, which also renews the cookie here;
  * - every answer gets a fresh script nonce in its Content-Security-Policy, and HSTS over https.
  * Every page, handler and action still checks the user and role on the server.
  */
@@ -46,13 +46,14 @@ export default async function proxy(request: NextRequest) {
     const problem = await pagePostProblem(request);
     if (problem) return problem;
   }
+  const renewed: Parameters<SessionCookies['set']>[] = [];
   if (!isApi && !PUBLIC_PAGES.some((p) => p.test(pathname))) {
-    const token = await getToken({
-      req: request,
-      secureCookie: isHttpsApp(),
-      decode: decodeSessionToken,
-    });
-    if (!token) {
+    // A page render cannot set cookies, so a renewal is put on this answer instead.
+    const jar: SessionCookies = {
+      get: (name) => request.cookies.get(name),
+      set: (...cookie) => renewed.push(cookie),
+    };
+    if (!(await readSession(jar))) {
       const signIn = new URL('/sign-in', request.url);
       signIn.searchParams.set('callbackUrl', pathname + request.nextUrl.search);
       return NextResponse.redirect(signIn);
@@ -66,6 +67,7 @@ export default async function proxy(request: NextRequest) {
   requestHeaders.set('Content-Security-Policy', csp);
   const response = NextResponse.next({ request: { headers: requestHeaders } });
   response.headers.set('Content-Security-Policy', csp);
+  for (const [name, value, options] of renewed) response.cookies.set(name, value, options);
   if (https) response.headers.set('Strict-Transport-Security', HSTS);
   return response;
 }

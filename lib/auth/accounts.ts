@@ -7,39 +7,21 @@ import { isRole } from './roles';
 // The account reads that signing in and the session need. They live in lib/auth, not lib/data,
 // because lib/data builds on lib/auth (actors, roles, passwords) and must not be imported back.
 
-/** What the session carries about a user: who, their role now, and their session generation. */
-export interface SessionUser extends Actor {
-  generation: number;
-}
-
-function toSessionUser(r: Record<string, unknown>): SessionUser | null {
+function toActor(r: Record<string, unknown>): Actor | null {
   if (!r || r.disabled || !isRole(r.role)) return null;
-  return {
-    id: Number(r.id),
-    email: String(r.email),
-    name: String(r.name),
-    role: r.role,
-    generation: Number(r.session_generation),
-  };
-}
-
-/** An enabled user by id with their session generation, or null (unknown or disabled). */
-export async function getSessionUser(id: number): Promise<SessionUser | null> {
-  return toSessionUser(await db('users').where({ id }).first());
+  return { id: Number(r.id), email: String(r.email), name: String(r.name), role: r.role };
 }
 
 /**
- * The actor for a session of this generation; null when unknown, disabled or signed out since.
- * Without a generation (server-side jobs and tests acting as a user) only the account is checked.
+ * An enabled user by id as an actor, or null (unknown or disabled): for server-side jobs and
+ * tests acting as a user. Requests get theirs from the session (lib/auth/read-session.ts).
  */
-export async function getActiveActor(id: number, generation?: number): Promise<Actor | null> {
-  const user = await getSessionUser(id);
-  if (!user || (generation !== undefined && user.generation !== generation)) return null;
-  return { id: user.id, email: user.email, name: user.name, role: user.role };
+export async function getActiveActor(id: number): Promise<Actor | null> {
+  return toActor(await db('users').where({ id }).first());
 }
 
 export type CredentialsResult =
-  | { user: SessionUser; knownId: number; reason?: undefined }
+  | { user: Actor; knownId: number; reason?: undefined }
   | {
       user: null;
       knownId: number | null;
@@ -57,7 +39,7 @@ export async function findCredentials(email: string, password: string): Promise<
   if (!(await verifyPassword(password, r.password_hash))) {
     return { user: null, knownId: r.id, reason: 'wrong-password' };
   }
-  const user = toSessionUser(r as unknown as Record<string, unknown>);
+  const user = toActor(r as unknown as Record<string, unknown>);
   if (!user) return { user: null, knownId: r.id, reason: 'disabled' };
   return { user, knownId: r.id };
 }

@@ -1,11 +1,12 @@
 import 'server-only';
 import { db } from '@/lib/db';
 import { recordAudit } from '@/lib/audit-trail';
-import { findCredentials, type SessionUser } from './accounts';
+import type { Actor } from './actor';
+import { findCredentials } from './accounts';
 import { beginAttempt, normaliseEmail, refundAttempt } from './sign-in-limits';
 
 export type SignInOutcome =
-  | { kind: 'signed-in'; user: SessionUser }
+  | { kind: 'signed-in'; user: Actor }
   | { kind: 'failed' }
   | { kind: 'limited'; retryAfterMs: number };
 

@@ -1,6 +1,5 @@
 import 'server-only';
 import { isUnitSystem, type UnitSystem } from '@/lib/units';
-import type { Knex } from 'knex';
 import { db } from '@/lib/db';
 import { assertCan, type Actor } from '@/lib/auth/actor';
 import { hashPassword, verifyPassword } from '@/lib/auth/password';
@@ -8,6 +7,7 @@ import { isRole, type Role } from '@/lib/auth/roles';
 import { ConflictError, NotFoundError, ValidationError } from '@/lib/errors';
 import { parseInput } from '@/lib/validation/parse';
 import { changePasswordSchema, unitSystemSchema, userUpdateSchema } from '@/lib/validation/users';
+import { endUserSessions } from '@/lib/auth/session-store';
 import { clearAccountLimits, listAccountLocks, type AccountLock } from '@/lib/auth/sign-in-limits';
 import { recordAudit } from '@/lib/audit-trail';
 
@@ -39,15 +39,10 @@ function toRow(r: Record<string, unknown>): UserRow {
   };
 }
 
-/** End every session of a user: tokens of the old generation are refused from now on. */
-export async function bumpSessionGeneration(trx: Knex.Transaction, userId: number): Promise<void> {
-  await trx('users').where({ id: userId }).increment('session_generation', 1);
-}
-
-/** Sign a user out on every device (their own choice, or next-auth's sign-out). */
+/** Sign a user out on every device ("Sign out everywhere"): their session rows go. */
 export async function endAllSessions(userId: number, reason: string): Promise<void> {
   await db.transaction(async (trx) => {
-    await bumpSessionGeneration(trx, userId);
+    await endUserSessions(trx, userId);
     await recordAudit(trx, {
       actorId: userId,
       action: 'session.end-all',
@@ -86,7 +81,7 @@ export async function updateUser(actor: Actor, userId: number, input: unknown): 
     if (change.disabled !== undefined) patch.disabled = change.disabled;
     await trx('users').where({ id: userId }).update(patch);
     // A disabled account or a changed role starts from a fresh sign-in everywhere.
-    await bumpSessionGeneration(trx, userId);
+    await endUserSessions(trx, userId);
     await recordAudit(trx, {
       actorId: actor.id,
       action: 'user.update',
@@ -114,7 +109,7 @@ export async function changeOwnPassword(actor: Actor, input: unknown): Promise<v
       .where({ id: actor.id })
       .update({ password_hash: hash, updated_at: new Date() });
     // Every session, this one included, must sign in again with the new password.
-    await bumpSessionGeneration(trx, actor.id);
+    await endUserSessions(trx, actor.id);
     await recordAudit(trx, {
       actorId: actor.id,
       action: 'user.password',

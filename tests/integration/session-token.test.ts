@@ -1,40 +1,119 @@
-import { decode, encode } from 'next-auth/jwt';
-import { describe, expect, it } from 'vitest';
-import { decodeSessionToken, encodeSessionToken } from '@/lib/auth/session-token';
+import { vi, afterEach, beforeAll, beforeEach, describe, expect, it } from 'vitest';
+import { requestState, setRequestHeaders } from '../support/request';
+import { freshDatabase } from '../support/db';
+import { ACCOUNTS, DEMO_PASSWORD } from '../support/accounts';
+import {
+  csrf,
+  meStatus,
+  postCredentials,
+  proxyPage,
+  SESSION_COOKIE,
+  signIn,
+  tokenOf,
+} from '../support/next-auth';
+import { db } from '@/lib/db';
+import { readSession } from '@/lib/auth/read-session';
 
-// The cached-key codec against next-auth's own encode/decode (the independent reference): the
-// same secret must read each other's cookies, so nobody is signed out when the codec changes.
-const secret = 'a-test-secret-of-reasonable-length-0123456789';
-const claims = { sub: '7', role: 'engineer' as const, gen: 3, name: 'Test', email: 't@x.example' };
+// The session cookie's life, written out here (not read from the app): 8 hours from its last
+// renewal, renewed once it is an hour old.
+const HOUR = 3600e3;
+const LIFE = 8 * HOUR;
+const savedAppUrl = process.env.APP_URL;
 
-describe('session token codec', () => {
-  it("reads next-auth's tokens and next-auth reads ours", async () => {
-    const theirs = await encode({ token: claims, secret, maxAge: 3600 });
-    expect(await decodeSessionToken({ token: theirs, secret })).toMatchObject(claims);
-    const ours = await encodeSessionToken({ token: claims, secret, maxAge: 3600 });
-    expect(await decode({ token: ours, secret })).toMatchObject(claims);
+/** Move the clock (Date only; the database and timers keep running). */
+const at = (ms: number) => vi.useFakeTimers({ toFake: ['Date'], now: ms });
+
+describe('the session cookie: flags, life and renewal', () => {
+  beforeAll(async () => {
+    await freshDatabase();
+  });
+  beforeEach(async () => {
+    await db('sign_in_limits').delete();
+  });
+  afterEach(() => {
+    vi.useRealTimers();
+    process.env.APP_URL = savedAppUrl;
   });
 
-  it('sets the lifetime from maxAge', async () => {
-    const before = Math.floor(Date.now() / 1000);
-    const t = (await decodeSessionToken({
-      token: await encodeSessionToken({ token: claims, secret, maxAge: 8 * 3600 }),
-      secret,
-    }))!;
-    // Whole seconds: exp − iat is exactly maxAge; iat is now, within the test's own second or two.
-    expect(Number(t.exp) - Number(t.iat)).toBe(8 * 3600);
-    expect(Number(t.iat) - before).toBeLessThanOrEqual(2);
+  it('is set at sign-in HttpOnly, SameSite=Lax, for 8 hours, and not Secure over http', async () => {
+    const before = Date.now();
+    const response = await postCredentials(ACCOUNTS.engineer, DEMO_PASSWORD, await csrf());
+    const cookies = response.headers.getSetCookie();
+    const session = cookies.find((c) => c.startsWith(`${SESSION_COOKIE}=`))!;
+    expect(session).toMatch(/; HttpOnly/i);
+    expect(session).toMatch(/; SameSite=Lax/i);
+    expect(session).toMatch(/; Path=\//i);
+    expect(session).not.toMatch(/; Secure/i);
+    const expires = Date.parse(session.match(/Expires=([^;]+)/i)![1]);
+    expect(expires - before).toBeGreaterThan(LIFE - 5000);
+    expect(expires - before).toBeLessThan(LIFE + 5000);
   });
 
-  it('refuses a token past its expiry, a damaged one, and one sealed with another secret', async () => {
-    const expired = await encodeSessionToken({ token: claims, secret, maxAge: -60 });
-    await expect(decodeSessionToken({ token: expired, secret })).rejects.toThrow(/exp/);
-    const ours = await encodeSessionToken({ token: claims, secret, maxAge: 3600 });
-    const parts = ours.split('.');
-    const body = parts[3];
-    parts[3] = (body[0] === 'A' ? 'B' : 'A') + body.slice(1);
-    await expect(decodeSessionToken({ token: parts.join('.'), secret })).rejects.toThrow();
-    await expect(decodeSessionToken({ token: ours, secret: `${secret}-other` })).rejects.toThrow();
-    expect(await decodeSessionToken({ token: '', secret })).toBeNull();
+  it('is Secure, under the __Secure- name, when the app is served over https', async () => {
+    const cookie = await signIn(ACCOUNTS.engineer);
+    const token = tokenOf(cookie);
+    process.env.APP_URL = 'https://tenderline.example';
+    // Renewal re-sends the cookie: over https it carries the Secure flag.
+    at(Date.now() + 2 * HOUR);
+    const jar = { get: () => ({ value: token }), set: vi.fn() };
+    expect(await readSession(jar)).not.toBeNull();
+    expect(jar.set).toHaveBeenCalledWith(
+      `__Secure-${SESSION_COOKIE}`,
+      token,
+      expect.objectContaining({ secure: true, httpOnly: true, sameSite: 'lax', path: '/' }),
+    );
+  });
+
+  it('is left alone while fresh and renewed (row and cookie) once an hour old', async () => {
+    const start = Date.now();
+    const cookie = await signIn(ACCOUNTS.engineer);
+    expect(await meStatus(cookie)).toBe(200);
+    expect(requestState.setCookies).toEqual([]);
+    at(start + 2 * HOUR);
+    expect(await meStatus(cookie)).toBe(200);
+    expect(requestState.setCookies.map((c) => [c.name, c.value])).toEqual([
+      [SESSION_COOKIE, tokenOf(cookie)],
+    ]);
+    const renewed = requestState.setCookies[0].options as { expires: Date; httpOnly: boolean };
+    expect(renewed).toMatchObject({ httpOnly: true, sameSite: 'lax', path: '/', secure: false });
+    expect(renewed.expires.getTime()).toBe(start + 2 * HOUR + LIFE);
+  });
+
+  it('the proxy renews it on the answer to a page, which a page render cannot', async () => {
+    const start = Date.now();
+    const cookie = await signIn(ACCOUNTS.engineer);
+    expect((await proxyPage(cookie)).headers.getSetCookie()).toEqual([]);
+    at(start + 3 * HOUR);
+    const renewed = (await proxyPage(cookie)).headers.getSetCookie();
+    expect(renewed).toHaveLength(1);
+    expect(renewed[0]).toMatch(new RegExp(`^${SESSION_COOKIE}=${tokenOf(cookie)};`));
+    expect(renewed[0]).toMatch(/; HttpOnly/i);
+  });
+
+  it('ends 8 hours after its last renewal, and use keeps it going', async () => {
+    const start = Date.now();
+    const idle = await signIn(ACCOUNTS.engineer);
+    const busy = await signIn(ACCOUNTS.engineer);
+    at(start + 7 * HOUR);
+    expect(await meStatus(busy)).toBe(200);
+    at(start + 8 * HOUR + 60e3);
+    expect(await meStatus(idle)).toBe(401);
+    expect(await meStatus(busy)).toBe(200); // renewed again: 8 hours from now
+    at(start + 16 * HOUR + 2 * 60e3);
+    expect(await meStatus(busy)).toBe(401);
+  });
+
+  it('refuses a damaged token, an unknown one and none at all', async () => {
+    const cookie = await signIn(ACCOUNTS.engineer);
+    const token = tokenOf(cookie);
+    const others = cookie
+      .split('; ')
+      .filter((c) => !c.startsWith(`${SESSION_COOKIE}=`))
+      .join('; ');
+    expect(await meStatus(`${others}; ${SESSION_COOKIE}=${token.slice(0, -4)}AAAA`)).toBe(401);
+    expect(await meStatus(`${others}; ${SESSION_COOKIE}=x`)).toBe(401);
+    expect(await meStatus(others)).toBe(401);
+    setRequestHeaders();
+    expect(await readSession()).toBeNull();
   });
 });

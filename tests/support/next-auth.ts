@@ -1,5 +1,9 @@
+import { expect } from 'vitest';
 import { NextRequest } from 'next/server';
 import * as nextauth from '@/app/api/auth/[...nextauth]/route';
+import * as me from '@/app/api/me/route';
+import proxy from '@/proxy';
+import { DEMO_PASSWORD } from './accounts';
 import { setRequestHeaders } from './request';
 
 const BASE = 'http://tenderline.test/api/auth';
@@ -47,4 +51,39 @@ export async function getNextAuth(path: string, cookie = ''): Promise<Response> 
   setRequestHeaders(cookie ? { cookie } : {});
   const request = new NextRequest(`${BASE}/${path}`, { headers: cookie ? { cookie } : {} });
   return nextauth.GET(request, context(...path.split('/')));
+}
+
+// The real session, cookie to database, for the session tests (no readSession mock).
+
+export const ORIGIN = 'http://tenderline.test';
+export const SESSION_COOKIE = 'next-auth.session-token';
+
+/** Sign in for real and return the cookie header a browser would send afterwards. */
+export async function signIn(email: string, pass = DEMO_PASSWORD): Promise<string> {
+  const session = await csrf();
+  const response = await postCredentials(email, pass, session);
+  expect(response.status).toBe(200);
+  return `${session.cookie}; ${cookiesOf(response)}`;
+}
+
+/** The session token inside a cookie header. */
+export function tokenOf(cookie: string): string {
+  const pair = cookie.split('; ').find((c) => c.startsWith(`${SESSION_COOKIE}=`));
+  return pair!.slice(SESSION_COOKIE.length + 1);
+}
+
+/** /api/me with this cookie: a route handler reading the session. */
+export async function meStatus(cookie: string): Promise<number> {
+  setRequestHeaders({ cookie });
+  return (await me.GET(new Request(`${ORIGIN}/api/me`, { headers: { cookie } }), {})).status;
+}
+
+/** next-auth's session endpoint with this cookie. */
+export async function sessionBody(cookie: string): Promise<Record<string, unknown>> {
+  return (await (await getNextAuth('session', cookie)).json()) as Record<string, unknown>;
+}
+
+/** proxy.ts in front of a page: 200 lets the visitor through, 307 sends them to sign-in. */
+export async function proxyPage(cookie: string, path = '/account'): Promise<Response> {
+  return proxy(new NextRequest(`${ORIGIN}${path}`, { headers: { cookie } }));
 }

@@ -2,44 +2,24 @@ import { vi } from 'vitest';
 import { setRequestHeaders } from './request';
 
 /**
- * Only the session cookie reading is replaced (next-auth's for pages, ours for routes and actions): tests say who is signed in, and everything after
- * that (the database lookup of the user, the capability table, the handler) runs for real.
- * The mock stands for a freshly signed-in, valid token: it carries the user's current session
- * generation (tests/integration/sessions.test.ts runs the real token checks).
+ * Only the one session read (readSession) is replaced: tests say who is signed in, and everything
+ * after that (the user read fresh from the database, the capability table, the handler) runs for
+ * real. The stand-in is a live session row of that user; tests/integration/sessions.test.ts runs
+ * the real cookie, session rows and their ending.
  */
 export const sessionState: { userId: number | null } = { userId: null };
 
-async function generationOf(): Promise<number> {
-  const { db } = await import('@/lib/db');
-  const row = await db('users').where({ id: sessionState.userId }).first();
-  return Number(row?.session_generation ?? 0);
-}
-
-vi.mock('next-auth', async (importOriginal) => {
-  const actual = await importOriginal<typeof import('next-auth')>();
+vi.mock('@/lib/auth/read-session', async (importOriginal) => {
+  const actual = await importOriginal<typeof import('@/lib/auth/read-session')>();
+  const { getActiveActor } = await import('@/lib/auth/accounts');
   return {
     ...actual,
-    getServerSession: vi.fn(async () =>
-      sessionState.userId == null
-        ? null
-        : {
-            user: { id: String(sessionState.userId), generation: await generationOf() },
-            expires: new Date(Date.now() + 3600e3).toISOString(),
-          },
-    ),
-  };
-});
-
-// The same stand-in for the cookie read of route handlers and server actions.
-vi.mock('@/lib/auth/session-claims', async (importOriginal) => {
-  const actual = await importOriginal<typeof import('@/lib/auth/session-claims')>();
-  return {
-    ...actual,
-    readSessionClaims: vi.fn(async () =>
-      sessionState.userId == null
-        ? null
-        : { id: sessionState.userId, generation: await generationOf() },
-    ),
+    readSession: vi.fn(async () => {
+      if (sessionState.userId == null) return null;
+      // As the real read: a disabled or unknown account has no session.
+      const user = await getActiveActor(sessionState.userId);
+      return user && { user, expires: new Date(Date.now() + 8 * 3600e3) };
+    }),
   };
 });
 
@@ -50,5 +30,5 @@ export function signInAs(userId: number | null) {
   sessionState.userId = userId;
 }
 
-/** The headers the next server action sees (for example a foreign Origin). */
+/** The headers the next server action or next-auth call sees (for example a foreign Origin). */
 export const actionHeaders = setRequestHeaders;

@@ -1,6 +1,7 @@
 import NextAuth from 'next-auth';
 import { NextRequest } from 'next/server';
 import { authOptions } from '@/auth';
+import { readSession } from '@/lib/auth/read-session';
 import { signInContext, type SignInContext } from '@/lib/auth/sign-in-context';
 import { signInMessage } from '@/lib/auth/sign-in-messages';
 import { errorResponse } from '@/lib/http/handler';
@@ -21,9 +22,22 @@ function noStore(response: Response): Response {
   return response;
 }
 
+/**
+ * next-auth's session endpoint, answered by the app's one session read so it agrees with every
+ * page and route: `{}` when signed out, as next-auth's client expects.
+ */
+async function sessionAnswer(): Promise<Response> {
+  const session = await readSession();
+  if (!session) return noStore(Response.json({}));
+  const { id, email, name, role } = session.user;
+  const user = { id: String(id), email, name, role };
+  return noStore(Response.json({ user, expires: session.expires.toISOString() }));
+}
+
 /** Odd requests get a 4xx with a plain message before next-auth sees them. */
 async function GET(request: NextRequest, context: Context) {
   const action = (await context.params).nextauth.join('/');
+  if (action === 'session') return sessionAnswer();
   if (POST_ONLY.has(action)) {
     const error = new AppError(
       405,
@@ -43,6 +57,8 @@ async function GET(request: NextRequest, context: Context) {
  */
 async function POST(request: NextRequest, context: Context) {
   try {
+    // next-auth's client posts here only to update a session, which the app does not do.
+    if ((await context.params).nextauth.join('/') === 'session') return sessionAnswer();
     const reason = crossSiteReason(request.headers);
     if (reason) throw new ForbiddenError(crossSiteMessage(reason));
     const type = request.headers.get('content-type')?.split(';')[0].trim().toLowerCase();
