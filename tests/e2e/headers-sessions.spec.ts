@@ -105,3 +105,16 @@ test('"Sign out everywhere" ends a second browser\'s session', async ({
   await expect(page).toHaveURL(/\/sign-in/);
   await other.close();
 });
+
+test('the session cookie is HttpOnly, SameSite=Lax, not Secure over http, for 8 hours', async ({
+  page,
+  signInAs,
+}) => {
+  await signInAs('buyer');
+  const cookies = await page.context().cookies();
+  const session = cookies.find((c) => c.name === 'next-auth.session-token')!;
+  expect(session).toMatchObject({ httpOnly: true, sameSite: 'Lax', secure: false, path: '/' });
+  const left = session.expires * 1000 - Date.now();
+  expect(left).toBeGreaterThan(8 * 3600e3 - 120e3);
+  expect(left).toBeLessThanOrEqual(8 * 3600e3 + 5e3);
+});
