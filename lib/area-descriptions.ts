@@ -39,7 +39,7 @@ const AREA_PARTS: Record<string, Part[]> = {
   ],
   '/editor': [
     {
-      text: 'Draft property revisions with sources, compression-test uploads that fit an apparent modulus, photos, and review of other editors’ drafts.',
+      text: 'Draft property revisions with sources, lab-test uploads (plate compression) that fit an apparent modulus, photos, and review of other editors’ drafts.',
       capability: 'editor:use',
     },
     { text: 'Invite buyers by e-mail.', capability: 'invitations:create-buyer' },

@@ -1,4 +1,4 @@
-import type { CompressionTestWithData } from '@/lib/data/compression-tests';
+import type { LabTestWithData } from '@/lib/data/lab-tests';
 import { FIT_STRAIN } from '@/lib/lab-tests/limits';
 import { dateText, geometryText, rangeText, sig } from './format';
 
@@ -17,7 +17,7 @@ function Figure({ label, value, testId }: { label: string; value: string; testId
 }
 
 /** The headline result of a test and what it was computed from. */
-export function FitFigures({ test }: { test: CompressionTestWithData }) {
+export function FitFigures({ test }: { test: LabTestWithData }) {
   const points = test.fit?.pointsUsed;
   return (
     <section className="space-y-3">

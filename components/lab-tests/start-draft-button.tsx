@@ -15,7 +15,7 @@ export function StartDraftButton({ testId }: { testId: number }) {
     setPending(true);
     setMessage(undefined);
     try {
-      const response = await fetch(`/api/compression-tests/${testId}/draft`, {
+      const response = await fetch(`/api/lab-tests/${testId}/draft`, {
         method: 'POST',
         headers: { 'content-type': 'application/json' },
         body: '{}',

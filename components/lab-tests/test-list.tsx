@@ -1,9 +1,9 @@
 import Link from 'next/link';
-import type { CompressionTestRecord } from '@/lib/data/compression-tests';
+import type { LabTestRecord } from '@/lib/data/lab-tests';
 import { dateText, rangeText, sig } from './format';
 
 /** Uploaded tests, newest first: a card per test, its result in one line. */
-export function TestList({ tests }: { tests: CompressionTestRecord[] }) {
+export function TestList({ tests }: { tests: LabTestRecord[] }) {
   if (tests.length === 0) {
     return (
       <p

@@ -28,7 +28,7 @@ export function UploadForm({ cultivars }: { cultivars: { slug: string; label: st
     setPending(true);
     setMessage(undefined);
     try {
-      const response = await fetch(`/api/cultivars/${encodeURIComponent(slug)}/compression-tests`, {
+      const response = await fetch(`/api/cultivars/${encodeURIComponent(slug)}/lab-tests`, {
         method: 'POST',
         body: form,
       });

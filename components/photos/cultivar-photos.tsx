@@ -1,6 +1,6 @@
 import { can } from '@/lib/auth/roles';
 import { requirePageActor } from '@/lib/auth/session';
-import { listCultivarPhotos } from '@/lib/data/images';
+import { listCultivarPhotos } from '@/lib/data/photos';
 import { PhotoFigure } from './photo-figure';
 import { PhotoUploadForm } from './photo-upload-form';
 

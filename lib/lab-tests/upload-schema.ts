@@ -17,7 +17,7 @@ const length = (label: string, max: number) =>
  * The fields sent with a lab-test file. Poisson's ratio lies strictly between 0 and 0.5: the
  * numerical core's fit refuses both ends (0.5 is incompressible).
  */
-export const compressionUploadSchema = z
+export const labTestUploadSchema = z
   .object({
     diameterMm: length('The diameter', 500),
     radius1Mm: length('The first radius', 5000),
@@ -43,9 +43,9 @@ export const compressionUploadSchema = z
     }
   });
 
-export type CompressionUploadInput = z.infer<typeof compressionUploadSchema>;
+export type LabTestUploadInput = z.infer<typeof labTestUploadSchema>;
 
-export function geometryOf(input: CompressionUploadInput): SampleGeometry {
+export function geometryOf(input: LabTestUploadInput): SampleGeometry {
   if (input.diameterMm !== undefined) return { kind: 'sphere', diameterMm: input.diameterMm };
   return { kind: 'radii', radiiMm: [input.radius1Mm!, input.radius2Mm!] };
 }

@@ -71,7 +71,7 @@ export function uploadRequest(
   const form = new FormData();
   for (const [k, v] of Object.entries(fields)) form.set(k, v);
   if (file !== null) form.set('file', new File([file], fileName, { type: 'text/csv' }));
-  return new Request('http://tenderline.test/api/cultivars/x/compression-tests', {
+  return new Request('http://tenderline.test/api/cultivars/x/lab-tests', {
     method: 'POST',
     headers,
     body: form,

@@ -5,9 +5,9 @@ import { startTestBucket } from '../support/bucket';
 import { ACCOUNTS } from '../support/accounts';
 import type { Role } from '@/lib/auth/roles';
 import { db } from '@/lib/db';
-import * as uploads from '@/app/api/cultivars/[slug]/compression-tests/route';
-import * as one from '@/app/api/compression-tests/[id]/route';
-import * as draft from '@/app/api/compression-tests/[id]/draft/route';
+import * as uploads from '@/app/api/cultivars/[slug]/lab-tests/route';
+import * as one from '@/app/api/lab-tests/[id]/route';
+import * as draft from '@/app/api/lab-tests/[id]/draft/route';
 import { BAD_FIELDS, BAD_FILES } from './lab-tests-cases';
 import { CURVE, hertzCsv, storedState, uploadRequest } from './lab-tests-support';
 
@@ -176,26 +176,26 @@ describe('lab-test uploads', () => {
     // lab-tests:upload is held by admin and editor; engineers and buyers are refused.
     const table: [string, Record<Who, number>, (who: Who) => Promise<number>][] = [
       [
-        'POST /api/cultivars/[slug]/compression-tests',
+        'POST /api/cultivars/[slug]/lab-tests',
         { 'signed-out': 401, admin: 201, editor: 201, engineer: 403, buyer: 403 },
         async () => (await upload(GOOD)).status,
       ],
       [
-        'GET /api/cultivars/[slug]/compression-tests',
+        'GET /api/cultivars/[slug]/lab-tests',
         { 'signed-out': 401, admin: 200, editor: 200, engineer: 403, buyer: 403 },
         async () =>
           (await uploads.GET(new Request('http://tenderline.test/api'), params({ slug: SLUG })))
             .status,
       ],
       [
-        'GET /api/compression-tests/[id]',
+        'GET /api/lab-tests/[id]',
         { 'signed-out': 401, admin: 200, editor: 200, engineer: 403, buyer: 403 },
         async () =>
           (await one.GET(new Request('http://tenderline.test/api'), params({ id: String(testId) })))
             .status,
       ],
       [
-        'POST /api/compression-tests/[id]/draft',
+        'POST /api/lab-tests/[id]/draft',
         { 'signed-out': 401, admin: 201, editor: 201, engineer: 403, buyer: 403 },
         async () => (await startDraft(testId)).status,
       ],

@@ -43,7 +43,10 @@ export default async function EditorPage() {
         >
           Lab tests
         </Link>
-        <span className="text-stone-600"> — compression-test uploads and fitted moduli.</span>
+        <span className="text-stone-600">
+          {' '}
+          — lab-test uploads (plate compression) and fitted moduli.
+        </span>
       </nav>
       <Section title="Start a draft" id="start-draft">
         <p className="mb-3 text-sm text-stone-600">

@@ -2,17 +2,14 @@ import { TestList } from '@/components/lab-tests/test-list';
 import { UploadForm } from '@/components/lab-tests/upload-form';
 import { PageTitle } from '@/components/ui/page-title';
 import { requirePageActor } from '@/lib/auth/session';
-import { listCompressionTests, listCultivarChoices } from '@/lib/data/compression-tests';
+import { listLabTests, listCultivarChoices } from '@/lib/data/lab-tests';
 import { titleFor } from '@/lib/page-title';
 
 export const generateMetadata = titleFor('lab-tests:upload', 'Lab tests');
 
 export default async function LabTestsPage() {
   const actor = await requirePageActor('lab-tests:upload');
-  const [tests, cultivars] = await Promise.all([
-    listCompressionTests(actor),
-    listCultivarChoices(actor),
-  ]);
+  const [tests, cultivars] = await Promise.all([listLabTests(actor), listCultivarChoices(actor)]);
   return (
     <section>
       <PageTitle title="Lab tests">

@@ -6,7 +6,7 @@ import { StartDraftButton } from '@/components/lab-tests/start-draft-button';
 import { PageTitle } from '@/components/ui/page-title';
 import { can } from '@/lib/auth/roles';
 import { requirePageActor } from '@/lib/auth/session';
-import { getCompressionTest } from '@/lib/data/compression-tests';
+import { getLabTest } from '@/lib/data/lab-tests';
 import { NotFoundError } from '@/lib/errors';
 import { plotSeries } from '@/lib/lab-tests/plot';
 import { titleFor } from '@/lib/page-title';
@@ -18,7 +18,7 @@ async function load(actor: Awaited<ReturnType<typeof requirePageActor>>, raw: st
   const id = idSchema.safeParse(raw);
   if (!id.success) notFound();
   try {
-    return await getCompressionTest(actor, id.data);
+    return await getLabTest(actor, id.data);
   } catch (error) {
     if (error instanceof NotFoundError) notFound();
     throw error;

@@ -1,7 +1,7 @@
 import { NextResponse } from 'next/server';
 import { z } from 'zod';
 import { requireActor } from '@/lib/auth/session';
-import { createCultivarPhoto, listCultivarPhotos } from '@/lib/data/images';
+import { createCultivarPhoto, listCultivarPhotos } from '@/lib/data/photos';
 import { handle } from '@/lib/http/handler';
 import { photoFieldsSchema } from '@/lib/photos/fields';
 import { MAX_UPLOAD_BODY } from '@/lib/photos/limits';

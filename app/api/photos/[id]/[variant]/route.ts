@@ -1,5 +1,5 @@
 import { requireActor } from '@/lib/auth/session';
-import { getPhotoVariant } from '@/lib/data/images';
+import { getPhotoVariant } from '@/lib/data/photos';
 import { NotFoundError } from '@/lib/errors';
 import { handle } from '@/lib/http/handler';
 import { isVariantName } from '@/lib/photos/limits';

@@ -1,6 +1,6 @@
 import { NextResponse } from 'next/server';
 import { requireActor } from '@/lib/auth/session';
-import { createDraftFromCompressionTest } from '@/lib/data/compression-test-drafts';
+import { createDraftFromLabTest } from '@/lib/data/lab-test-drafts';
 import { handle } from '@/lib/http/handler';
 import { parseId } from '@/lib/validation/id';
 
@@ -13,7 +13,7 @@ type Context = { params: Promise<{ id: string }> };
 export const POST = handle(async (_request, context: Context) => {
   const actor = await requireActor('lab-tests:upload');
   const id = parseId((await context.params).id);
-  const { revisionId, created } = await createDraftFromCompressionTest(actor, id);
+  const { revisionId, created } = await createDraftFromLabTest(actor, id);
   return NextResponse.json(
     { revision: { id: revisionId, href: `/editor/revisions/${revisionId}` }, created },
     { status: created ? 201 : 200 },

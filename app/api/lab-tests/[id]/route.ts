@@ -1,6 +1,6 @@
 import { NextResponse } from 'next/server';
 import { requireActor } from '@/lib/auth/session';
-import { getCompressionTest } from '@/lib/data/compression-tests';
+import { getLabTest } from '@/lib/data/lab-tests';
 import { handle } from '@/lib/http/handler';
 import { plotSeries } from '@/lib/lab-tests/plot';
 import { parseId } from '@/lib/validation/id';
@@ -13,10 +13,7 @@ type Context = { params: Promise<{ id: string }> };
  */
 export const GET = handle(async (_request, context: Context) => {
   const actor = await requireActor('lab-tests:upload');
-  const { points, fit, ...test } = await getCompressionTest(
-    actor,
-    parseId((await context.params).id),
-  );
+  const { points, fit, ...test } = await getLabTest(actor, parseId((await context.params).id));
   const fittedCurve =
     points && fit
       ? plotSeries(points, fit).fitted.map((p) => ({ displacementMm: p.d, forceN: p.f }))

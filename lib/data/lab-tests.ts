@@ -8,12 +8,12 @@ import { assertCan, type Actor } from '@/lib/auth/actor';
 import { NotFoundError, ValidationError, type FieldErrors } from '@/lib/errors';
 import { fitCompressionCurve, type CompressionFit, type SampleGeometry } from '@/lib/lab-tests/fit';
 import { parseCompressionCsv, type CurvePoint } from '@/lib/lab-tests/parse-curve';
-import { compressionUploadSchema, geometryOf } from '@/lib/lab-tests/upload-schema';
+import { labTestUploadSchema, geometryOf } from '@/lib/lab-tests/upload-schema';
 import { fieldErrorsOf } from '@/lib/validation/parse';
 import { deleteObject, getObject, putObject } from '@/lib/storage/object-store';
 import { recordAudit } from '@/lib/audit-trail';
 
-export interface CompressionTestRecord {
+export interface LabTestRecord {
   id: number;
   cultivar: { id: number; slug: string; name: string; commodityName: string };
   uploadedBy: { id: number; name: string };
@@ -30,7 +30,7 @@ export interface CompressionTestRecord {
   createdAt: string;
 }
 
-export interface CompressionTestWithData extends CompressionTestRecord {
+export interface LabTestWithData extends LabTestRecord {
   /** the readings and the fit as recomputed from the stored file; null if it cannot be read */
   points: CurvePoint[] | null;
   fit: CompressionFit | null;
@@ -46,7 +46,7 @@ function testQuery() {
     .select(['c.slug as c_slug', 'c.name as c_name', 'm.name as m_name', 'u.name as u_name']);
 }
 
-function toRecord(r: InferResult<ReturnType<typeof testQuery>>[number]): CompressionTestRecord {
+function toRecord(r: InferResult<ReturnType<typeof testQuery>>[number]): LabTestRecord {
   // A test has a diameter or both radii (the upload schema refuses anything else).
   const geometry: SampleGeometry =
     r.diameter_mm !== null
@@ -95,7 +95,7 @@ export async function listCultivarChoices(actor: Actor) {
 }
 
 /** Lab tests, newest first, optionally of one cultivar (404 if that cultivar is unknown). */
-export async function listCompressionTests(actor: Actor, filter: { cultivarSlug?: string } = {}) {
+export async function listLabTests(actor: Actor, filter: { cultivarSlug?: string } = {}) {
   assertCan(actor, 'lab-tests:upload');
   let query = testQuery().orderBy('t.id', 'desc').limit(500);
   if (filter.cultivarSlug !== undefined) {
@@ -106,10 +106,7 @@ export async function listCompressionTests(actor: Actor, filter: { cultivarSlug?
 }
 
 /** One test with its readings read back from the bucket and the fit recomputed from them. */
-export async function getCompressionTest(
-  actor: Actor,
-  id: number,
-): Promise<CompressionTestWithData> {
+export async function getLabTest(actor: Actor, id: number): Promise<LabTestWithData> {
   assertCan(actor, 'lab-tests:upload');
   const row = await testQuery().where('t.id', '=', id).executeTakeFirst();
   if (!row) throw new NotFoundError('No such lab test.');
@@ -125,7 +122,7 @@ export async function getCompressionTest(
   }
 }
 
-export interface CompressionUpload {
+export interface LabTestUpload {
   cultivarSlug: string;
   fileName: string;
   bytes: Uint8Array;
@@ -134,9 +131,9 @@ export interface CompressionUpload {
 }
 
 /** Field and file checks together, so one answer names every problem. */
-function validateUpload(upload: CompressionUpload) {
+function validateUpload(upload: LabTestUpload) {
   const errors: FieldErrors = {};
-  const fields = compressionUploadSchema.safeParse(upload.fields);
+  const fields = labTestUploadSchema.safeParse(upload.fields);
   if (!fields.success) Object.assign(errors, fieldErrorsOf(fields.error));
   let curve: ReturnType<typeof parseCompressionCsv> | null = null;
   let fileMessage: string | null = null;
@@ -159,7 +156,7 @@ function validateUpload(upload: CompressionUpload) {
  * Validate, fit, store the file and record the test. Nothing is stored on any refusal: the
  * object is written only after every check, and deleted again if the transaction fails.
  */
-export async function createCompressionTest(actor: Actor, upload: CompressionUpload) {
+export async function createLabTest(actor: Actor, upload: LabTestUpload) {
   assertCan(actor, 'lab-tests:upload');
   const cultivar = await cultivarBySlug(upload.cultivarSlug);
   const { geometry, poisson, rows, fit } = validateUpload(upload);

@@ -5,10 +5,10 @@ import { assertCan, type Actor } from '@/lib/auth/actor';
 import { labTestSource, valuesWithLabTest, type LabTestFacts } from '@/lib/lab-tests/draft-value';
 import { recordAudit } from '@/lib/audit-trail';
 import { getRevision } from './cultivars';
-import { getCompressionTest, type CompressionTestWithData } from './compression-tests';
+import { getLabTest, type LabTestWithData } from './lab-tests';
 import { createDraft, updateDraft } from './revisions';
 
-function factsOf(test: CompressionTestWithData): LabTestFacts {
+function factsOf(test: LabTestWithData): LabTestFacts {
   return {
     id: test.id,
     createdAt: test.createdAt,
@@ -42,7 +42,7 @@ async function ensureSource(actor: Actor, facts: LabTestFacts): Promise<void> {
 }
 
 /** An editable draft of this actor's already made from the test, if any. */
-async function openDraftOf(actor: Actor, test: CompressionTestWithData): Promise<number | null> {
+async function openDraftOf(actor: Actor, test: LabTestWithData): Promise<number | null> {
   if (test.draftRevisionId === null) return null;
   const row = await typed()
     .selectFrom('property_revisions')
@@ -77,10 +77,10 @@ async function discardDraft(actor: Actor, id: number, reason: string): Promise<v
  * modulus (replacing one from the same test), citing a source for the test. An editable draft
  * already made from the test by the same editor is reused.
  */
-export async function createDraftFromCompressionTest(actor: Actor, testId: number) {
+export async function createDraftFromLabTest(actor: Actor, testId: number) {
   assertCan(actor, 'lab-tests:upload');
   assertCan(actor, 'revisions:edit');
-  const test = await getCompressionTest(actor, testId);
+  const test = await getLabTest(actor, testId);
   const open = await openDraftOf(actor, test);
   if (open !== null) return { revisionId: open, created: false };
   const facts = factsOf(test);

@@ -1,7 +1,7 @@
 import { NextResponse } from 'next/server';
 import { z } from 'zod';
 import { requireActor } from '@/lib/auth/session';
-import { createCompressionTest, listCompressionTests } from '@/lib/data/compression-tests';
+import { createLabTest, listLabTests } from '@/lib/data/lab-tests';
 import { handle } from '@/lib/http/handler';
 import { UPLOAD_BODY_LIMIT } from '@/lib/lab-tests/limits';
 import { readUploadForm, uploadedFile } from '@/lib/lab-tests/read-upload';
@@ -17,7 +17,7 @@ const slugOf = async (context: Context) =>
 /** The cultivar's lab tests, newest first. */
 export const GET = handle(async (_request, context: Context) => {
   const actor = await requireActor('lab-tests:upload');
-  const tests = await listCompressionTests(actor, { cultivarSlug: await slugOf(context) });
+  const tests = await listLabTests(actor, { cultivarSlug: await slugOf(context) });
   return NextResponse.json({ tests });
 });
 
@@ -31,7 +31,7 @@ export const POST = handle(
     const cultivarSlug = await slugOf(context);
     const form = await readUploadForm(request, UPLOAD_BODY_LIMIT);
     const { fileName, bytes } = await uploadedFile(form);
-    const test = await createCompressionTest(actor, {
+    const test = await createLabTest(actor, {
       cultivarSlug,
       fileName,
       bytes,
