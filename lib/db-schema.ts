@@ -218,6 +218,16 @@ export interface AssessmentsTable {
   root_id: number | null;
 }
 
+/** migrations/20261205000200_sessions.ts: one row per signed-in browser, keyed by the token's hash. */
+export interface SessionsTable {
+  id: string;
+  user_id: number;
+  /** epoch milliseconds (bigint: a string from PostgreSQL) */
+  created_ms: number | string;
+  renewed_ms: number | string;
+  expires_ms: number | string;
+}
+
 export interface Database {
   users: UsersTable;
   sign_in_limits: SignInLimitsTable;
@@ -233,4 +243,5 @@ export interface Database {
   images: ImagesTable;
   compression_tests: CompressionTestsTable;
   assessments: AssessmentsTable;
+  sessions: SessionsTable;
 }
