@@ -12,9 +12,14 @@ test('a buyer searches by keyboard, reads the apple article with live values and
   await signInAs('buyer');
 
   // "/" from anywhere puts the cursor in the header's search box; the misspelling still finds it.
-  await page.keyboard.press('/');
+  // The shortcut listens once the page has hydrated: press again until it has (a press before
+  // that does nothing, and the box stays empty).
   const box = page.getByRole('combobox', { name: 'Search the Atlas and the property data' });
-  await expect(box).toBeFocused();
+  await expect(async () => {
+    await page.keyboard.press('/');
+    await expect(box).toBeFocused({ timeout: 500 });
+  }).toPass({ timeout: 10_000 });
+  await expect(box).toHaveValue('');
   await page.keyboard.type('bin tiping');
   const listbox = page.getByRole('listbox', { name: 'Search results' });
   await expect(listbox.getByRole('group', { name: 'Article sections' })).toBeVisible();
