@@ -1,10 +1,15 @@
 'use client';
 
 import Link from 'next/link';
+import { useMutation } from '@tanstack/react-query';
 import { useState } from 'react';
 import { Button } from '@/components/ui/button';
+import { CheckRequestError } from './use-check';
 
-/** Save the check as it stands: the server runs it again and keeps it with the data it used. */
+/**
+ * Save the check as it stands (a TanStack Query mutation): the server runs it again and keeps it
+ * with the data it used.
+ */
 export function SaveAssessment({
   check,
   inputs,
@@ -16,38 +21,34 @@ export function SaveAssessment({
 }) {
   const [title, setTitle] = useState('');
   const [notes, setNotes] = useState('');
-  const [state, setState] = useState<{
-    pending?: boolean;
-    id?: number;
-    error?: string;
-    fieldErrors?: Record<string, string[]>;
-  }>({});
-  async function save() {
-    setState({ pending: true });
-    try {
-      const res = await fetch('/api/assessments', {
-        method: 'POST',
-        headers: { 'content-type': 'application/json' },
-        body: JSON.stringify({ check, title, notes: notes || undefined, inputs }),
-      });
+  const save = useMutation({
+    mutationFn: async (): Promise<number> => {
+      let res: Response;
+      try {
+        res = await fetch('/api/assessments', {
+          method: 'POST',
+          headers: { 'content-type': 'application/json' },
+          body: JSON.stringify({ check, title, notes: notes || undefined, inputs }),
+        });
+      } catch {
+        // No answer at all (offline, server gone): say so, and let them try again.
+        throw new CheckRequestError(
+          'The server could not be reached: nothing was saved. Try again.',
+        );
+      }
       const json = await res.json().catch(() => ({}));
-      setState(
-        res.ok
-          ? { id: json.assessment.id }
-          : { error: json.message ?? 'Could not save.', fieldErrors: json.fieldErrors },
-      );
-    } catch {
-      // The request never got an answer (offline, server gone): say so and let them try again.
-      setState({ error: 'The server could not be reached: nothing was saved. Try again.' });
-    }
-  }
+      if (!res.ok) throw new CheckRequestError(json.message ?? 'Could not save.', json.fieldErrors);
+      return json.assessment.id;
+    },
+  });
+  const error = save.error instanceof CheckRequestError ? save.error : null;
   return (
     <form
       className="space-y-2 rounded-lg border border-stone-200 bg-white p-3"
       data-testid="save-assessment"
       onSubmit={(e) => {
         e.preventDefault();
-        void save();
+        save.mutate();
       }}
     >
       <p className="text-sm font-medium">Save as an assessment</p>
@@ -72,18 +73,18 @@ export function SaveAssessment({
         />
       </label>
       <p id="save-assessment-note" aria-live="polite" className="text-sm">
-        {state.id ? (
-          <Link href={`/assessments/${state.id}`} className="text-leaf-700 underline">
+        {save.data ? (
+          <Link href={`/assessments/${save.data}`} className="text-leaf-700 underline">
             Saved: open the report
           </Link>
-        ) : state.error ? (
+        ) : error ? (
           <span className="text-red-700">
-            {[state.error, ...Object.values(state.fieldErrors ?? {}).flat()].join(' ')}
+            {[error.message, ...Object.values(error.fieldErrors).flat()].join(' ')}
           </span>
         ) : null}
       </p>
-      <Button type="submit" variant="secondary" disabled={disabled || state.pending}>
-        {state.pending ? 'Saving…' : 'Save assessment'}
+      <Button type="submit" variant="secondary" disabled={disabled || save.isPending}>
+        {save.isPending ? 'Saving…' : 'Save assessment'}
       </Button>
     </form>
   );
