@@ -95,3 +95,14 @@ export async function resolveFruit(actor: Actor, entry: FruitEntry): Promise<Res
     extra: pinned?.values ?? [],
   };
 }
+
+/** The fruit's figures as every check's result names them (see fruitUsedShape). */
+export function fruitUsed(f: ResolvedFruit) {
+  return {
+    modulus_mpa: f.modulusMpa,
+    poisson_ratio: f.poisson,
+    diameter_mm: f.diameterMm,
+    mass_g: f.massG,
+    static_bruise_threshold_kpa: f.staticThresholdKpa,
+  };
+}

@@ -93,15 +93,24 @@ function visibleStatuses(actor: Actor): string[] {
     : ['published', 'superseded'];
 }
 
-/** A cultivar's revisions, newest first. */
-export async function listRevisions(actor: Actor, slug: string): Promise<RevisionSummary[]> {
-  assertCan(actor, 'properties:read-history');
+/**
+ * A cultivar's id (and slug) by its slug, or a 404: the lookup every write and listing keyed by
+ * a cultivar starts from. Callers check the actor's capability first.
+ */
+export async function cultivarIdBySlug(slug: string): Promise<{ id: number; slug: string }> {
   const cultivar = await typed()
     .selectFrom('cultivars')
-    .select('id')
+    .select(['id', 'slug'])
     .where('slug', '=', slug)
     .executeTakeFirst();
   if (!cultivar) throw new NotFoundError(`No cultivar "${slug.slice(0, 80)}".`);
+  return cultivar;
+}
+
+/** A cultivar's revisions, newest first. */
+export async function listRevisions(actor: Actor, slug: string): Promise<RevisionSummary[]> {
+  assertCan(actor, 'properties:read-history');
+  const cultivar = await cultivarIdBySlug(slug);
   const rows = await revisionQuery()
     .where('r.cultivar_id', '=', cultivar.id)
     .where('r.status', 'in', visibleStatuses(actor))

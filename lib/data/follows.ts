@@ -1,22 +1,16 @@
 import 'server-only';
 import { db } from '@/lib/db';
 import { assertCan, type Actor } from '@/lib/auth/actor';
-import { NotFoundError } from '@/lib/errors';
 import { diffRevisions, formatValue, type DiffValue } from '@/lib/properties/diff';
 import { appUrl, sendMail } from '@/lib/mail/send';
 import { recordAudit } from '@/lib/audit-trail';
 import type { RevisionValue } from '@/lib/properties/records';
+import { cultivarIdBySlug } from './cultivars';
 import { valuesOf } from './property-rows';
-
-async function cultivarBySlug(slug: string) {
-  const row = await db('cultivars').where({ slug }).first();
-  if (!row) throw new NotFoundError(`No cultivar "${slug.slice(0, 80)}".`);
-  return row;
-}
 
 export async function isFollowing(actor: Actor, slug: string): Promise<boolean> {
   assertCan(actor, 'properties:follow');
-  const cultivar = await cultivarBySlug(slug);
+  const cultivar = await cultivarIdBySlug(slug);
   return Boolean(
     await db('follows').where({ user_id: actor.id, cultivar_id: cultivar.id }).first(),
   );
@@ -25,7 +19,7 @@ export async function isFollowing(actor: Actor, slug: string): Promise<boolean> 
 /** Follow (or stop following) a cultivar: e-mailed when a revision of it is published. */
 export async function setFollowing(actor: Actor, slug: string, follow: boolean): Promise<boolean> {
   assertCan(actor, 'properties:follow');
-  const cultivar = await cultivarBySlug(slug);
+  const cultivar = await cultivarIdBySlug(slug);
   await db.transaction(async (trx) => {
     const key = { user_id: actor.id, cultivar_id: cultivar.id };
     if (follow)

@@ -12,6 +12,7 @@ import { labTestUploadSchema, geometryOf } from '@/lib/lab-tests/upload-schema';
 import { fieldErrorsOf } from '@/lib/validation/parse';
 import { deleteObject, getObject, putObject } from '@/lib/storage/object-store';
 import { recordAudit } from '@/lib/audit-trail';
+import { cultivarIdBySlug } from './cultivars';
 
 export interface LabTestRecord {
   id: number;
@@ -70,17 +71,6 @@ function toRecord(r: InferResult<ReturnType<typeof testQuery>>[number]): LabTest
   };
 }
 
-/** A cultivar by slug; 404 when unknown. */
-async function cultivarBySlug(slug: string) {
-  const cultivar = await typed()
-    .selectFrom('cultivars')
-    .select('id')
-    .where('slug', '=', slug)
-    .executeTakeFirst();
-  if (!cultivar) throw new NotFoundError(`No cultivar "${slug.slice(0, 80)}".`);
-  return cultivar;
-}
-
 /** Every cultivar a test may be uploaded for (published or not), by commodity and name. */
 export async function listCultivarChoices(actor: Actor) {
   assertCan(actor, 'lab-tests:upload');
@@ -99,7 +89,7 @@ export async function listLabTests(actor: Actor, filter: { cultivarSlug?: string
   assertCan(actor, 'lab-tests:upload');
   let query = testQuery().orderBy('t.id', 'desc').limit(500);
   if (filter.cultivarSlug !== undefined) {
-    const cultivar = await cultivarBySlug(filter.cultivarSlug);
+    const cultivar = await cultivarIdBySlug(filter.cultivarSlug);
     query = query.where('t.cultivar_id', '=', cultivar.id);
   }
   return (await query.execute()).map(toRecord);
@@ -158,7 +148,7 @@ function validateUpload(upload: LabTestUpload) {
  */
 export async function createLabTest(actor: Actor, upload: LabTestUpload) {
   assertCan(actor, 'lab-tests:upload');
-  const cultivar = await cultivarBySlug(upload.cultivarSlug);
+  const cultivar = await cultivarIdBySlug(upload.cultivarSlug);
   const { geometry, poisson, rows, fit } = validateUpload(upload);
   const key = `lab-tests/${cultivar.id}/${randomUUID()}.csv`;
   await putObject(key, Buffer.from(upload.bytes), 'text/csv; charset=utf-8');

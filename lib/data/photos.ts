@@ -9,6 +9,7 @@ import { NotFoundError } from '@/lib/errors';
 import { variantKey, type VariantName } from '@/lib/photos/limits';
 import type { PhotoRecord } from '@/lib/photos/record';
 import { storePhoto, type PhotoBucket } from '@/lib/photos/store';
+import { cultivarIdBySlug } from './cultivars';
 import { deleteObject, getObject, putObject } from '@/lib/storage/object-store';
 
 const bucket: PhotoBucket = { put: putObject, remove: deleteObject };
@@ -27,16 +28,6 @@ function toPhoto(r: Selectable<ImagesTable>): PhotoRecord {
   };
 }
 
-async function cultivarOf(slug: string) {
-  const cultivar = await typed()
-    .selectFrom('cultivars')
-    .select(['id', 'slug'])
-    .where('slug', '=', slug)
-    .executeTakeFirst();
-  if (!cultivar) throw new NotFoundError(`No cultivar "${slug.slice(0, 80)}".`);
-  return cultivar;
-}
-
 /** One photo's row; 404 when unknown. */
 async function photoRow(id: number) {
   const row = await typed()
@@ -51,7 +42,7 @@ async function photoRow(id: number) {
 /** A cultivar's photos, oldest first. */
 export async function listCultivarPhotos(actor: Actor, slug: string): Promise<PhotoRecord[]> {
   assertCan(actor, 'properties:read-published');
-  const cultivar = await cultivarOf(slug);
+  const cultivar = await cultivarIdBySlug(slug);
   const rows = await typed()
     .selectFrom('images')
     .selectAll()
@@ -69,7 +60,7 @@ export async function createCultivarPhoto(
   input: { bytes: Buffer; caption: string | null; credit: string | null },
 ): Promise<PhotoRecord> {
   assertCan(actor, 'images:upload');
-  const cultivar = await cultivarOf(slug);
+  const cultivar = await cultivarIdBySlug(slug);
   const id = await storePhoto(db, bucket, {
     ...input,
     cultivarId: cultivar.id,

@@ -5,7 +5,7 @@ import { parseInput } from '@/lib/validation/parse';
 import { dropCheckSchema } from '@/lib/checks/inputs';
 import { heightForEnergy, heightForPressure, impactAt, surfaceSI, type FruitSI } from './model';
 import { pinnedSummary } from '../cultivar-inputs';
-import { resolveFruit, type ResolvedFruit } from '../resolve-fruit';
+import { fruitUsed, resolveFruit, type ResolvedFruit } from '../resolve-fruit';
 import { DROP_SURFACE_KEYS, DROP_SURFACES, type DropSurface } from '../surfaces';
 import { verdictOf } from '../verdict';
 import type { DropResult } from './result';
@@ -136,11 +136,7 @@ export async function runDropCheck(actor: Actor, raw: unknown): Promise<DropResu
     check: 'drop' as const,
     pinned: pinnedSummary(f.pinned),
     inputs_used: {
-      modulus_mpa: f.modulusMpa,
-      poisson_ratio: f.poisson,
-      diameter_mm: f.diameterMm,
-      mass_g: f.massG,
-      static_bruise_threshold_kpa: f.staticThresholdKpa,
+      ...fruitUsed(f),
       height_mm: input.heightMm,
       surface: input.surface,
       surface_basis: DROP_SURFACES[input.surface].basis,

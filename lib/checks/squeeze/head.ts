@@ -1,6 +1,7 @@
 import type { SqueezeCheckInput } from '@/lib/checks/inputs';
 import { pinnedSummary } from '../cultivar-inputs';
 import { FACING_PRESETS } from '../facings';
+import { fruitUsed } from '../resolve-fruit';
 import type { ResolvedSqueeze } from './resolve';
 
 /** The figures resolved on the main thread that open the answer: the pinned revision, inputs used. */
@@ -8,14 +9,10 @@ export function squeezeHead(r: ResolvedSqueeze, input: SqueezeCheckInput) {
   return {
     pinned: pinnedSummary(r.fruit.pinned),
     inputs_used: {
-      modulus_mpa: r.fruit.modulusMpa,
-      poisson_ratio: r.fruit.poisson,
-      diameter_mm: r.fruit.diameterMm,
+      ...fruitUsed(r.fruit),
       axial_diameter_mm: r.axialMm,
-      mass_g: r.fruit.massG,
       density_kg_m3: r.density,
       friction: r.friction,
-      static_bruise_threshold_kpa: r.fruit.staticThresholdKpa,
       failure_stress_kpa: r.failureStress,
       pad_diameter_mm: input.padDiameterMm ?? null,
       pad_edge_mm: input.padEdgeMm ?? null,

@@ -3,7 +3,7 @@ import type { Actor } from '@/lib/auth/actor';
 import { parseInput } from '@/lib/validation/parse';
 import { stackCheckSchema } from '@/lib/checks/inputs';
 import { enteredValue, pinnedSummary, publishedValue, type UsedValue } from '../cultivar-inputs';
-import { resolveFruit } from '../resolve-fruit';
+import { fruitUsed, resolveFruit } from '../resolve-fruit';
 import type { StackResult } from './result';
 import { deepestSafeFill, stackAt, type StackSI } from './model';
 import { verdictOf } from '../verdict';
@@ -95,11 +95,7 @@ export async function runStackCheck(actor: Actor, raw: unknown): Promise<StackRe
     check: 'stack' as const,
     pinned: pinnedSummary(p),
     inputs_used: {
-      modulus_mpa: f.modulusMpa,
-      poisson_ratio: f.poisson,
-      diameter_mm: f.diameterMm,
-      mass_g: f.massG,
-      static_bruise_threshold_kpa: f.staticThresholdKpa,
+      ...fruitUsed(f),
       bulk_density_kg_m3: bulk,
       wall_friction: wall,
       lateral_pressure_ratio: ratio,
