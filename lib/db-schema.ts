@@ -153,6 +153,9 @@ export interface RevisionValuesTable {
   probe: string | null;
   note: string | null;
   is_typical_default: Generated<Bool>;
+  stage: string | null;
+  observation: string | null;
+  typical_basis: string | null;
   source_id: number | null;
   position: Generated<number>;
 }

@@ -2,7 +2,14 @@ import type { Kysely, Selectable } from 'kysely';
 import { typed } from '@/lib/db-kysely';
 import type { Database, PropertyRevisionsTable, SourcesTable } from '@/lib/db-schema';
 import { toBool, toIso, toIsoOrNull } from '@/lib/db-values';
-import { isQuantity, type RevisionStatus, type SourceKind } from '@/lib/properties/quantities';
+import {
+  asObservation,
+  asStage,
+  asTypicalBasis,
+  isQuantity,
+  type RevisionStatus,
+  type SourceKind,
+} from '@/lib/properties/quantities';
 import type { RevisionSummary, RevisionValue, SourceRef } from '@/lib/properties/records';
 
 export function toSource(r: Selectable<SourcesTable>): SourceRef {
@@ -102,6 +109,9 @@ export async function valuesOf(
       probe: r.probe,
       note: r.note,
       isTypicalDefault: toBool(r.is_typical_default),
+      stage: asStage(r.stage),
+      observation: asObservation(r.observation),
+      typicalBasis: asTypicalBasis(r.typical_basis),
       source: r.source_id === null ? null : (sources.get(r.source_id) ?? null),
     });
   }

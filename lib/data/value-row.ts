@@ -29,6 +29,9 @@ export function valueRow(
     probe: v.probe,
     note: v.note,
     is_typical_default: v.isTypicalDefault,
+    stage: v.stage,
+    observation: v.observation,
+    typical_basis: v.typicalBasis,
     source_id: sourceId,
     position,
   };

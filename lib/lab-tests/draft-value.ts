@@ -65,7 +65,10 @@ export function labTestValue(test: LabTestFacts): RevisionValueInput {
     loadingRate: null,
     probe: 'Parallel flat plates',
     note: fitNote(test),
+    stage: null,
+    observation: null,
     isTypicalDefault: false,
+    typicalBasis: null,
     sourceKey: labTestSource(test).key,
   };
 }
@@ -87,7 +90,10 @@ export function toValueInput(v: RevisionValue): RevisionValueInput {
     loadingRate: v.loadingRate,
     probe: v.probe,
     note: v.note,
+    stage: v.stage,
+    observation: v.observation,
     isTypicalDefault: v.isTypicalDefault,
+    typicalBasis: v.typicalBasis,
     sourceKey: v.source?.key ?? null,
   };
 }

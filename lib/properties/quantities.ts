@@ -26,6 +26,18 @@ export const QUANTITIES = {
     hint: 'contact pressure below which a held load leaves no bruise',
   },
   failure_stress: { label: 'Tissue failure stress', unit: 'kPa', variants: [''], hint: '' },
+  bioyield_stress: {
+    label: 'Bioyield stress',
+    unit: 'kPa',
+    variants: [''],
+    hint: 'stress at the bioyield point, where cells begin to fail (force flattens as it deforms)',
+  },
+  penetrometer_firmness: {
+    label: 'Penetrometer firmness',
+    unit: 'N',
+    variants: 'probe',
+    hint: 'peak force of a flat-ended probe pushed into the flesh; the probe diameter is the variant',
+  },
   impact_threshold_energy: {
     label: 'Impact bruise threshold (energy)',
     unit: 'J',
@@ -53,7 +65,7 @@ export const QUANTITIES = {
   },
 } as const satisfies Record<
   string,
-  { label: string; unit: string; variants: readonly string[] | 'surface'; hint: string }
+  { label: string; unit: string; variants: readonly string[] | 'surface' | 'probe'; hint: string }
 >;
 
 export type Quantity = keyof typeof QUANTITIES;
@@ -76,7 +88,64 @@ export const SURFACES = [
   'carton',
   'ground',
   'fruit',
+  'rubber',
+  'plastic',
+  'concrete',
+  'rigid plate',
 ] as const;
+
+/** Probe diameters of the penetrometers quality labs use (Magness–Taylor 7.9 and 11.1 mm). */
+export const PROBES = [
+  '2 mm',
+  '3 mm',
+  '5 mm',
+  '6 mm',
+  '7.9 mm',
+  '8 mm',
+  '11.1 mm',
+  '12 mm',
+] as const;
+
+/**
+ * Ripeness stages a value may be staged by: a cultivar's firm (harvest), firm-ripe and ripe
+ * (eating) fruit can differ two- or three-fold in modulus and threshold.
+ */
+export const STAGES = ['firm', 'firm-ripe', 'ripe'] as const;
+export type Stage = (typeof STAGES)[number];
+export const STAGE_LABELS: Record<Stage, string> = {
+  firm: 'firm (harvest)',
+  'firm-ripe': 'firm-ripe',
+  ripe: 'ripe (eating)',
+};
+
+/**
+ * What kind of observation a drop or impact figure is: the height or energy that left no bruise
+ * (a threshold), the height or energy at which fruit did bruise (an upper bound: the safe value
+ * lies below it), or a recommended maximum of a handling guide.
+ */
+export const OBSERVATIONS = ['no-bruise', 'bruised-at', 'recommended-max'] as const;
+export type Observation = (typeof OBSERVATIONS)[number];
+export const OBSERVATION_LABELS: Record<Observation, string> = {
+  'no-bruise': 'no bruise at this level (threshold)',
+  'bruised-at': 'fruit bruised at this level (upper bound)',
+  'recommended-max': 'recommended maximum',
+};
+/** Quantities whose values must say what kind of observation they are. */
+export const OBSERVED_QUANTITIES = ['drop_threshold_height', 'impact_threshold_energy'] as const;
+
+/** Why a typical value is trusted at all: the trade's common practice, or recalled from memory. */
+export const TYPICAL_BASES = ['common practice', 'from memory'] as const;
+export type TypicalBasis = (typeof TYPICAL_BASES)[number];
+
+const isOneOf =
+  <T extends string>(list: readonly T[]) =>
+  (v: string | null): T | null =>
+    v !== null && (list as readonly string[]).includes(v) ? (v as T) : null;
+
+/** A stored stage, observation or typical basis, or null when the column holds something else. */
+export const asStage = isOneOf(STAGES);
+export const asObservation = isOneOf(OBSERVATIONS);
+export const asTypicalBasis = isOneOf(TYPICAL_BASES);
 
 export function isQuantity(value: unknown): value is Quantity {
   return typeof value === 'string' && Object.hasOwn(QUANTITIES, value);
@@ -85,7 +154,7 @@ export function isQuantity(value: unknown): value is Quantity {
 /** The variants a quantity accepts. */
 export function variantsOf(quantity: Quantity): readonly string[] {
   const v = QUANTITIES[quantity].variants;
-  return v === 'surface' ? SURFACES : v;
+  return v === 'surface' ? SURFACES : v === 'probe' ? PROBES : v;
 }
 
 export const SOURCE_KINDS = [

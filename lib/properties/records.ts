@@ -1,4 +1,11 @@
-import type { Quantity, RevisionStatus, SourceKind } from './quantities';
+import type {
+  Observation,
+  Quantity,
+  RevisionStatus,
+  SourceKind,
+  Stage,
+  TypicalBasis,
+} from './quantities';
 
 // The shapes lib/data reads from the database and every layer shows. Declared here, below
 // lib/data, so lib/validation, lib/lab-tests and lib/properties use them without importing it.
@@ -36,6 +43,12 @@ export interface RevisionValue {
   probe: string | null;
   note: string | null;
   isTypicalDefault: boolean;
+  /** The ripeness stage the value was measured at, where the source stages its values. */
+  stage: Stage | null;
+  /** For drop and impact figures: what was observed at this level. */
+  observation: Observation | null;
+  /** For a typical value: common practice, or recalled from memory. */
+  typicalBasis: TypicalBasis | null;
   source: SourceRef | null;
 }
 

@@ -1,5 +1,14 @@
 import { z } from 'zod';
-import { QUANTITIES, QUANTITY_KEYS, variantsOf, type Quantity } from '@/lib/properties/quantities';
+import {
+  OBSERVATIONS,
+  OBSERVED_QUANTITIES,
+  QUANTITIES,
+  QUANTITY_KEYS,
+  STAGES,
+  TYPICAL_BASES,
+  variantsOf,
+  type Quantity,
+} from '@/lib/properties/quantities';
 
 /** Plausible bounds per quantity, in its canonical unit: a typo (kPa typed as Pa) is refused. */
 const BOUNDS: Record<Quantity, { min: number; max: number; minOpen?: boolean; maxOpen?: boolean }> =
@@ -11,6 +20,8 @@ const BOUNDS: Record<Quantity, { min: number; max: number; minOpen?: boolean; ma
     mass: { min: 0, max: 100_000, minOpen: true },
     static_bruise_threshold: { min: 0, max: 1_000_000, minOpen: true },
     failure_stress: { min: 0, max: 1_000_000, minOpen: true },
+    bioyield_stress: { min: 0, max: 1_000_000, minOpen: true },
+    penetrometer_firmness: { min: 0, max: 2000, minOpen: true },
     impact_threshold_energy: { min: 0, max: 1000, minOpen: true },
     drop_threshold_height: { min: 0, max: 100_000, minOpen: true },
     friction_coefficient: { min: 0, max: 5, minOpen: true },
@@ -62,7 +73,28 @@ export const revisionValueSchema = z
     loadingRate: text(60),
     probe: text(120),
     note: text(1000),
+    /** The ripeness stage the value was measured at, where the source stages its values. */
+    stage: z.preprocess(
+      (v) => (v === '' || v === undefined ? null : v),
+      z.enum(STAGES, { error: 'Choose firm, firm-ripe or ripe (or leave it empty).' }).nullable(),
+    ),
+    /** For drop and impact figures: a no-bruise threshold, a level that bruised, or a maximum. */
+    observation: z.preprocess(
+      (v) => (v === '' || v === undefined ? null : v),
+      z
+        .enum(OBSERVATIONS, {
+          error: 'Choose what was observed: no bruise, bruised at, or a recommended maximum.',
+        })
+        .nullable(),
+    ),
     isTypicalDefault: z.boolean().default(false),
+    /** Why a typical value is kept: the trade's common practice, or recalled from memory. */
+    typicalBasis: z.preprocess(
+      (v) => (v === '' || v === undefined ? null : v),
+      z
+        .enum(TYPICAL_BASES, { error: 'Say whether it is common practice or from memory.' })
+        .nullable(),
+    ),
     sourceKey: text(80),
   })
   .superRefine((v, ctx) => {
@@ -88,6 +120,21 @@ export const revisionValueSchema = z
       issue('low', 'The range must contain the value (low ≤ value ≤ high).');
     }
     if (v.sd !== null && v.sd < 0) issue('sd', 'The standard deviation cannot be negative.');
+    const observed = (OBSERVED_QUANTITIES as readonly string[]).includes(v.quantity);
+    if (observed && v.observation === null)
+      issue(
+        'observation',
+        'Say what kind of observation this is: no bruise at this level, fruit bruised at it, or a recommended maximum.',
+      );
+    if (!observed && v.observation !== null)
+      issue('observation', 'Only drop and impact figures carry an observation kind.');
+    if (v.isTypicalDefault && v.typicalBasis === null)
+      issue('typicalBasis', 'Say why this typical value is kept: common practice or from memory.');
+    if (!v.isTypicalDefault && v.typicalBasis !== null)
+      issue(
+        'typicalBasis',
+        'Only a typical value has a basis; a published value names its source.',
+      );
     if (!v.isTypicalDefault && !v.sourceKey) {
       issue('sourceKey', 'Name the source of this value, or mark it as a typical default.');
     }

@@ -36,6 +36,7 @@ export function typicalJanssenK(): SeedValue {
     high: 0.6,
     note: `${TYPICAL_DEFAULT_NOTE} Bin design practice commonly takes K between 0.3 and 0.6; 0.4 is stored.`,
     isTypicalDefault: true,
+    typicalBasis: 'common practice',
     source: null,
   };
 }

@@ -1,0 +1,4 @@
+import type { SeedSource } from './types';
+
+/** Sources added for the deeper knowledge base (2026-12): see the family's seed file. */
+export const VEGETABLE_SOURCES: SeedSource[] = [];
