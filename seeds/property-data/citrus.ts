@@ -5,6 +5,39 @@ import { frictionFromAngle, typicalJanssenK } from './value-helpers';
 const SHARIFI = 'sharifi-2007-orange';
 const GRADES = 'sweet-orange-bulk-handling';
 const HORTFLORA = 'hortflora-mosambi-kinnow';
+const PUNCH = 'ct-orange-punch-jiroft';
+const MURCOTT = 'ct-rehal-2017-murcott';
+
+/**
+ * A typical value of the trade, kept only where no published value was found: no source, a wide
+ * band, and a note naming what was searched. `basis` says why it is trusted at all.
+ */
+export function typical(
+  quantity: SeedValue['quantity'],
+  variant: string,
+  value: number,
+  [low, high]: [number, number],
+  basis: 'common practice' | 'from memory',
+  note: string,
+  extra: Partial<SeedValue> = {},
+): SeedValue {
+  return {
+    quantity,
+    ...(variant ? { variant } : {}),
+    value,
+    low,
+    high,
+    note: `Typical value, not published for this commodity — replace with a measured value. ${note}`,
+    isTypicalDefault: true,
+    typicalBasis: basis,
+    source: null,
+    ...extra,
+  };
+}
+
+/** What the citrus searches covered, for the notes of the typical values. */
+const CITRUS_SEARCHED =
+  "Searched (stored pages): 'orange fruit Young's modulus Poisson ratio compression', 'Valencia orange compression modulus bioyield rupture', 'Citrus sinensis fruit elastic modulus MPa', 'orange fruit bruise drop height impact', 'orange coefficient of friction rubber plastic', 'mandarin fruit physical mechanical properties rupture force modulus', 'Kinnow Nagpur mandarin modulus'; found peel-only moduli (Jentzsch et al. 2022, five Citrus peels) and whole-fruit relaxation without a modulus value (Moresi et al. 2012, Tarocco), nothing for the whole fruit.";
 
 /** Size, weight, specific gravity and friction as the HortFlora study gives them. */
 function hortflora(
@@ -73,6 +106,14 @@ export const CITRUS: SeedCommodity[] = [
           { quantity: 'mass', value: 215.4, note: 'Grade two (medium) fruit.', source: SHARIFI },
           { quantity: 'density', value: 1030, note: 'Grade two fruit.', source: SHARIFI },
           { quantity: 'bulk_density', value: 440, note: 'Grade two fruit.', source: SHARIFI },
+          {
+            quantity: 'diameter',
+            value: 77.4,
+            low: 75.5,
+            high: 84.1,
+            note: 'Grade two fruit: major, intermediate and minor diameters 84.1, 77.4 and 75.5 mm; the intermediate is stored. The abstract does not say which axis is the stem axis, so no equatorial/axial variant is given.',
+            source: SHARIFI,
+          },
           frictionFromAngle('galvanised steel', 20.2, SHARIFI, 'Grade two fruit.'),
           frictionFromAngle('glass', 23.4, SHARIFI, 'Grade two fruit.'),
           frictionFromAngle('plywood', 23.5, SHARIFI, 'Grade two fruit.'),
@@ -86,17 +127,54 @@ export const CITRUS: SeedCommodity[] = [
       },
       {
         slug: 'orange-type',
-        name: 'Orange (cultivar not named)',
+        name: 'Orange (commodity record)',
         isType: true,
         values: [
+          typical(
+            'youngs_modulus',
+            'apparent',
+            2,
+            [0.5, 5],
+            'from memory',
+            `Whole-fruit apparent modulus of a few MPa is what compression studies of firm fruit usually report; the band is wide on purpose. ${CITRUS_SEARCHED}`,
+          ),
+          typical(
+            'poisson_ratio',
+            '',
+            0.4,
+            [0.3, 0.49],
+            'common practice',
+            `Contact calculations for fruit flesh commonly take 0.3–0.49 (nearly incompressible turgid tissue). Note: citrus PEEL alone gave a Poisson's ratio near zero or slightly negative (Jentzsch et al. 2022, Front. Mater. 9:979151, read in the abstract) — peel, not whole fruit, so not stored here. ${CITRUS_SEARCHED}`,
+          ),
           graded('mass', '', [248.77, 152.62, 96.8], ''),
           graded('density', '', [880, 1060, 1090], ''),
-          graded('bulk_density', '', [500, 580, 520], ''),
+          graded(
+            'diameter',
+            'equatorial',
+            [84.32, 66.99, 58.41],
+            'Published as breadth (mean); the width was 84.00, 66.75 and 58.02 mm.',
+          ),
+          graded(
+            'diameter',
+            'axial',
+            [75.97, 61.08, 53.71],
+            'Published as length (mean), taken as the stem (axial) dimension.',
+          ),
+          {
+            quantity: 'failure_stress',
+            value: 300,
+            low: 300,
+            high: 1500,
+            method:
+              'Punch test of the fruit with punches 4.3–14.3 mm; stress = peak force / punch area',
+            note: "Lowest and highest mean punch stress over five cultivars ('Valencia', 'March', 'Washington Navel', 'Blood', local Jiroft) and seven punch diameters: 0.3 and 1.5 MPa, stored as 300 and 1500 kPa. The lowest is stored because a check should take the weakest fruit; the stored abstract breaks off before naming the punch of each extreme. A punch (penetration) stress through the peel, not a no-bruise contact pressure: a bruise threshold under a broad contact lies lower.",
+            source: PUNCH,
+          },
           graded(
             'friction_coefficient',
             'mild steel',
             [0.2, 0.16, 0.19],
-            "Static coefficient. About a third of the 0.45 measured on mild steel for 'Phule Mosambi' (next value), and under half of 'Thompson' on galvanised steel (0.368): the sources disagree.",
+            "Static coefficient. About a third of the 0.45 measured on mild steel for 'Phule Mosambi' (next value), and under half of 'Thompson' on galvanised steel (0.368): the sources disagree. First because it is the study of unnamed sweet oranges in three grades.",
           ),
           {
             quantity: 'friction_coefficient',
@@ -107,6 +185,41 @@ export const CITRUS: SeedCommodity[] = [
           },
           graded('friction_coefficient', 'glass', [0.22, 0.21, 0.22], 'Static coefficient.'),
           graded('friction_coefficient', 'plywood', [0.23, 0.18, 0.21], 'Static coefficient.'),
+          typical(
+            'friction_coefficient',
+            'belt rubber',
+            0.5,
+            [0.3, 0.8],
+            'common practice',
+            `Fruit on conveyor rubber is commonly taken above fruit on steel or plywood (0.16–0.45 measured for orange here); no orange-on-rubber value was found. ${CITRUS_SEARCHED}`,
+          ),
+          typical(
+            'friction_coefficient',
+            'hard plastic',
+            0.3,
+            [0.15, 0.5],
+            'common practice',
+            `Taken between the measured glass (0.21–0.22) and plywood (0.18–0.23) values and the higher mild-steel value for 'Phule Mosambi' (0.45); no orange-on-plastic value was found. ${CITRUS_SEARCHED}`,
+          ),
+          typical(
+            'drop_threshold_height',
+            'rigid plate',
+            300,
+            [150, 600],
+            'common practice',
+            `Handling guides commonly cap fruit drops at about 30 cm onto hard surfaces; citrus, with its thick peel, is usually held more tolerant than stone fruit. No orange drop threshold was found. ${CITRUS_SEARCHED}`,
+            { observation: 'recommended-max' },
+          ),
+          typical(
+            'drop_threshold_height',
+            'padded surface',
+            600,
+            [300, 1000],
+            'common practice',
+            `A padded surface is commonly allowed about twice the hard-surface height. No orange drop threshold was found. ${CITRUS_SEARCHED}`,
+            { observation: 'recommended-max' },
+          ),
+          graded('bulk_density', '', [500, 580, 520], ''),
         ],
       },
     ],
@@ -121,6 +234,159 @@ export const CITRUS: SeedCommodity[] = [
         slug: 'mandarin-kinnow',
         name: 'Kinnow',
         values: hortflora(66.44, 156.71, 1086, [0.36, 0.41, 0.42]),
+      },
+      {
+        slug: 'mandarin-w-murcott',
+        name: 'W. Murcott',
+        values: [
+          {
+            quantity: 'diameter',
+            variant: 'equatorial',
+            value: 75.395,
+            low: 68.97,
+            high: 81.82,
+            note: 'Published as a range of fruit diameter, 68.97–81.82 mm; the midpoint (68.97 + 81.82) / 2 = 75.395 mm is stored. The abstract also gives an "equatorial length" of 68.43–86.51 mm.',
+            source: MURCOTT,
+          },
+          {
+            quantity: 'diameter',
+            variant: 'axial',
+            value: 56.705,
+            low: 52.08,
+            high: 61.33,
+            note: 'Published as a range of length, 52.08–61.33 mm; the midpoint (52.08 + 61.33) / 2 = 56.705 mm is stored.',
+            source: MURCOTT,
+          },
+        ],
+      },
+      {
+        slug: 'mandarin-page',
+        name: 'Page',
+        values: [
+          {
+            quantity: 'density',
+            value: 970,
+            note: 'Published as specific gravity 0.97 (printed "0/97"); stored as 0.97 × 1000 kg/m³ (water).',
+            source: 'ct-khadivi-2013-mandarin',
+          },
+        ],
+      },
+      {
+        slug: 'mandarin-type',
+        name: 'Mandarin (commodity record)',
+        isType: true,
+        values: [
+          typical(
+            'youngs_modulus',
+            'apparent',
+            1.5,
+            [0.3, 4],
+            'from memory',
+            `Mandarins are softer and looser-skinned than oranges; a lower typical value than orange's is kept, with a wide band. ${CITRUS_SEARCHED}`,
+          ),
+          typical(
+            'poisson_ratio',
+            '',
+            0.4,
+            [0.3, 0.49],
+            'common practice',
+            `Contact calculations for fruit flesh commonly take 0.3–0.49. ${CITRUS_SEARCHED}`,
+          ),
+          {
+            quantity: 'density',
+            value: 1086,
+            note: "Measured on 'Kinnow' (given as specific gravity in kg/m³ in the abstract); the commodity record takes it as typical of mandarin. 'Page' gave 970 kg/m³ (Khadivi-Khub 2013).",
+            source: HORTFLORA,
+          },
+          {
+            quantity: 'diameter',
+            variant: 'equatorial',
+            value: 75.395,
+            low: 68.97,
+            high: 81.82,
+            note: "Measured on 'W. Murcott' (midpoint of the published 68.97–81.82 mm); the commodity record takes it as typical of mandarin. 'Kinnow' gave an equivalent diameter of 66.44 mm (HortFlora).",
+            source: MURCOTT,
+          },
+          {
+            quantity: 'diameter',
+            variant: 'axial',
+            value: 56.705,
+            low: 52.08,
+            high: 61.33,
+            note: "Measured on 'W. Murcott' (midpoint of the published length 52.08–61.33 mm); the commodity record takes it as typical of mandarin.",
+            source: MURCOTT,
+          },
+          {
+            quantity: 'mass',
+            value: 156.71,
+            note: "Measured on 'Kinnow' (average fruit weight); the commodity record takes it as typical of mandarin.",
+            source: HORTFLORA,
+          },
+          typical(
+            'failure_stress',
+            '',
+            300,
+            [150, 1500],
+            'from memory',
+            `No mandarin value was found; the orange punch-test stresses (0.3–1.5 MPa, 'ct-orange-punch-jiroft') bound it, and the lowest is kept. A punch stress, not a no-bruise contact pressure. ${CITRUS_SEARCHED}`,
+          ),
+          {
+            quantity: 'friction_coefficient',
+            variant: 'mild steel',
+            value: 0.42,
+            note: "Measured on 'Kinnow' (average static coefficient); the commodity record takes it as typical of mandarin.",
+            source: HORTFLORA,
+          },
+          {
+            quantity: 'friction_coefficient',
+            variant: 'plywood',
+            value: 0.36,
+            note: "Measured on 'Kinnow' (average static coefficient); the commodity record takes it as typical of mandarin.",
+            source: HORTFLORA,
+          },
+          typical(
+            'friction_coefficient',
+            'belt rubber',
+            0.5,
+            [0.3, 0.8],
+            'common practice',
+            `Fruit on conveyor rubber is commonly taken above fruit on steel (0.42 measured on 'Kinnow'); no mandarin-on-rubber value was found. ${CITRUS_SEARCHED}`,
+          ),
+          typical(
+            'friction_coefficient',
+            'hard plastic',
+            0.35,
+            [0.2, 0.5],
+            'common practice',
+            `Taken just below the measured 'Kinnow' values on plywood (0.36) and aluminium (0.41); no mandarin-on-plastic value was found. ${CITRUS_SEARCHED}`,
+          ),
+          typical(
+            'drop_threshold_height',
+            'rigid plate',
+            300,
+            [150, 600],
+            'common practice',
+            `Handling guides commonly cap fruit drops at about 30 cm onto hard surfaces. No mandarin drop threshold was found. ${CITRUS_SEARCHED}`,
+            { observation: 'recommended-max' },
+          ),
+          typical(
+            'drop_threshold_height',
+            'padded surface',
+            600,
+            [300, 1000],
+            'common practice',
+            `A padded surface is commonly allowed about twice the hard-surface height. No mandarin drop threshold was found. ${CITRUS_SEARCHED}`,
+            { observation: 'recommended-max' },
+          ),
+          typical(
+            'bulk_density',
+            '',
+            550,
+            [440, 650],
+            'common practice',
+            `No mandarin bulk density was found; the orange studies give 440–580 kg/m³ (Sharifi et al. 2007; sweet-orange grades), and smaller fruit pack slightly denser. ${CITRUS_SEARCHED}`,
+          ),
+        ],
       },
     ],
   },
