@@ -1,9 +1,35 @@
 import type { SeedCommodity, SeedValue } from './types';
-import { frictionFromAngle, storageModulus } from './value-helpers';
+import { frictionFromAngle, storageModulus, typicalJanssenK } from './value-helpers';
 
 const SELCUK = 'selcuk-1992-apple-poisson';
 const STORAGE_STUDY = 'tjaf-pear-apple-storage';
 const CHAKESPARI = 'gorji-chakespari-apple-compression';
+const GOLAB = 'meisami-asl-golab';
+const SLUPSKA = 'pome-slupska-2022-apple-drops';
+const VURSAVUS = 'pome-vursavus-1999-apple';
+const KJFP = 'pome-kjfp-apple-size';
+const WA_GRADES = 'pome-wa-apple-grades';
+
+/** Washington minimum pressure at shipment, published in pounds-force (1 lbf = 4.4482216 N). */
+const waMinimumFirmness = (lbf: number, newtons: number): SeedValue => ({
+  quantity: 'penetrometer_firmness',
+  variant: '11.1 mm',
+  value: newtons,
+  method: 'Pressure (penetrometer) test for the Washington grade, at the time of shipment',
+  note: `A grade minimum, not a measured mean: published as ${lbf} lb internal pressure, × 4.4482216 = ${newtons} N (10 % tolerance allowed). The page does not name the probe; apples are tested with the 7/16-inch (11.1 mm) plunger (WSU TFREC, Measuring fruit firmness with a penetrometer).`,
+  source: WA_GRADES,
+});
+
+/** Apparent modulus of the Turkish four-cultivar study (8 mm die, 6 mm/min). */
+const vursavusModulus = (value: number, note: string): SeedValue => ({
+  quantity: 'youngs_modulus',
+  variant: 'apparent',
+  value,
+  method: 'Whole-fruit compression with an 8 mm diameter die (Instron 4300)',
+  loadingRate: '6 mm/min',
+  note,
+  source: VURSAVUS,
+});
 
 /** Poisson's ratio of one cultivar in the Konya study (flesh cylinders at 62 mm/min). */
 const konyaPoisson = (value: number, note?: string): SeedValue => ({
@@ -69,7 +95,7 @@ export const APPLE: SeedCommodity = {
     {
       slug: 'apple-golden-delicious',
       name: 'Golden Delicious',
-      values: [konyaPoisson(0.382, "Named 'Golden' in the abstract.")],
+      values: [konyaPoisson(0.382, "Named 'Golden' in the abstract."), waMinimumFirmness(10, 44.5)],
     },
     {
       slug: 'apple-starking',
@@ -89,11 +115,31 @@ export const APPLE: SeedCommodity = {
           quantity: 'mass',
           value: 74.87,
           note: 'Average fruit mass.',
-          source: 'meisami-asl-golab',
+          source: GOLAB,
         },
-        frictionFromAngle('galvanised steel', 20, 'meisami-asl-golab'),
-        frictionFromAngle('glass', 26.3, 'meisami-asl-golab'),
-        frictionFromAngle('plywood', 26.8, 'meisami-asl-golab'),
+        {
+          quantity: 'diameter',
+          value: 53.5,
+          low: 35.14,
+          high: 65.04,
+          note: 'Published as the maximum, average and minimum diameters of the sample; the abstract does not say which axis, so no equatorial/axial variant is given.',
+          source: GOLAB,
+        },
+        {
+          quantity: 'density',
+          value: 742.7,
+          note: "Published as 0.7427 g/cm³, the 'density' of 'an apple pile' (× 1000 = kg/m³). Read as the fruit's own density: the published mean mass and volume give 74.87 g / 104.5 cm³ = 0.716 g/cm³, close to it.",
+          source: GOLAB,
+        },
+        {
+          quantity: 'bulk_density',
+          value: 240.1,
+          note: "Published as the 'apparent density' of 'an apple pile', 0.2401 g/cm³ (× 1000 = kg/m³). Caution: the same abstract gives a porosity of 54.13 %, which with 742.7 kg/m³ would imply about 340 kg/m³; the label is ambiguous, and these are small (75 g) fruit.",
+          source: GOLAB,
+        },
+        frictionFromAngle('galvanised steel', 20, GOLAB),
+        frictionFromAngle('glass', 26.3, GOLAB),
+        frictionFromAngle('plywood', 26.8, GOLAB),
       ],
     },
     {
@@ -125,22 +171,68 @@ export const APPLE: SeedCommodity = {
       ],
     },
     {
-      slug: 'apple-royal-gala',
-      name: 'Royal Gala',
+      slug: 'apple-braeburn',
+      name: 'Braeburn',
+      values: [
+        vursavusModulus(
+          4.88,
+          "Published as 4.88 N/mm² (= MPa), the highest of the four cultivars tested; bruise damage in the study's impact test rose as the modulus fell.",
+        ),
+      ],
+    },
+    {
+      slug: 'apple-granny-smith',
+      name: 'Granny Smith',
+      values: [
+        vursavusModulus(
+          2.37,
+          "Published as 2.37 N/mm² (= MPa), the lowest of the four cultivars tested; 'Granny Smith' was the most susceptible to bruise damage in the study's impact test.",
+        ),
+      ],
+    },
+    {
+      slug: 'apple-fuji',
+      name: 'Fuji',
       values: [
         {
-          quantity: 'impact_threshold_energy',
-          variant: 'steel',
-          value: 0.08,
-          method: 'Pendulum impacts in 2 cm height steps; bruise thickness method',
-          note: 'Weak source: an undergraduate report. Given as the bruise threshold, the energy at which bruising began. The abstract does not name the impactor material: filed under steel as a rigid impactor. Turgor was varied by soaking fruit 0, 1 or 18 h; one threshold is reported.',
-          source: 'shen-shan-ubc-royal-gala',
+          quantity: 'mass',
+          value: 267,
+          low: 174,
+          high: 409,
+          samples: 3,
+          method: 'Fruit weighed by size class (apples per 15 kg box)',
+          note: 'Size class 5D (50–59 apples per 15 kg), the middle class; the range runs from class 8D (174 g) to 3D (409 g). Mean of three determinations (Table 1).',
+          source: KJFP,
+        },
+        {
+          quantity: 'density',
+          value: 878,
+          low: 847,
+          high: 885,
+          method: 'Fruit mass over fruit volume (Table 1)',
+          note: 'Derived: size class 5D weighs 267 g for a volume of 304 mL, 267 / 304 = 0.878 g/mL = 878 kg/m³. The range is from the published specific volumes of the Fuji classes, 1.13–1.18 mL/g (1/1.18 = 0.847, 1/1.13 = 0.885 g/mL).',
+          source: KJFP,
         },
       ],
     },
     {
+      slug: 'apple-red-delicious',
+      name: 'Red Delicious',
+      values: [waMinimumFirmness(12, 53.4)],
+    },
+    {
+      slug: 'apple-gala',
+      name: 'Gala',
+      values: [waMinimumFirmness(11, 48.9)],
+    },
+    {
+      slug: 'apple-jonagold',
+      name: 'Jonagold',
+      values: [waMinimumFirmness(11, 48.9)],
+    },
+    {
       slug: 'apple-type',
-      name: 'Apple (cultivar not named)',
+      name: 'Apple (commodity record)',
       isType: true,
       values: [
         {
@@ -189,12 +281,119 @@ export const APPLE: SeedCommodity = {
         },
         {
           quantity: 'density',
+          value: 878,
+          low: 847,
+          high: 885,
+          method: 'Fruit mass over fruit volume, by size class',
+          note: "Measured on 'Fuji'; the commodity record takes it as typical of apple. Derived: 267 g / 304 mL = 0.878 g/mL (size class 5D); range from the published specific volumes 1.13–1.18 mL/g. Taken first because it is whole commercial fruit; the 'Golab' figure below is for small (75 g) fruit and its label is ambiguous.",
+          source: KJFP,
+        },
+        {
+          quantity: 'density',
+          value: 742.7,
+          note: "Measured on 'Golab' (0.7427 g/cm³, the 'density' of 'an apple pile'); kept beside the 'Fuji' figure, which it undercuts by 15 %.",
+          source: GOLAB,
+        },
+        {
+          quantity: 'density',
           value: 825,
           low: 800,
           high: 850,
           note: 'Apple flesh, recalled as 800–850 kg/m³; the value is the middle.',
           source: 'mohsenin-1986',
         },
+        {
+          quantity: 'diameter',
+          variant: 'equatorial',
+          value: 75,
+          low: 60,
+          high: 90,
+          note: "Typical value, not published: no source read this session gives an apple's equatorial diameter by axis (the 'Golab' study gives 35–65 mm without naming the axis, for small 75 g fruit). Searched: 'apple physical properties length width thickness mass density', 'Golden Delicious apple mean mass equatorial diameter'. Dessert apples are commonly sized about 60–90 mm across; 75 mm matches a fruit of about 200–270 g at 850–880 kg/m³.",
+          isTypicalDefault: true,
+          typicalBasis: 'from memory',
+          source: null,
+        },
+        {
+          quantity: 'diameter',
+          variant: 'axial',
+          value: 68,
+          low: 55,
+          high: 85,
+          note: 'Typical value, not published (searched as for the equatorial diameter). Apples are usually a little shorter stem-to-calyx than across; 68 mm is about 0.9 × the typical equatorial 75 mm.',
+          isTypicalDefault: true,
+          typicalBasis: 'from memory',
+          source: null,
+        },
+        {
+          quantity: 'mass',
+          value: 267,
+          low: 174,
+          high: 409,
+          method: 'Fruit weighed by size class',
+          note: "Measured on 'Fuji'; the commodity record takes it as typical of apple. Middle size class 5D; range over the classes 8D–3D.",
+          source: KJFP,
+        },
+        frictionFromAngle(
+          'galvanised steel',
+          20,
+          GOLAB,
+          "Measured on 'Golab'; the commodity record takes it as typical of apple.",
+        ),
+        {
+          quantity: 'friction_coefficient',
+          variant: 'rubber',
+          value: 0.55,
+          low: 0.4,
+          high: 0.8,
+          note: "Typical value, not published here: Puchalski et al. (Int. Agrophys. 2001, 2002) measured 'Gala' and 'McLemore' apples on rubber and plastic, but the coefficients are not in the abstracts read. Searched: 'apple coefficient of friction rubber steel plastic', 'static and dynamic coefficient of friction apple rubber plastic masonite'. Wide band: friction rose with ripeness and varied with humidity in those studies.",
+          isTypicalDefault: true,
+          typicalBasis: 'from memory',
+          source: null,
+        },
+        {
+          quantity: 'friction_coefficient',
+          variant: 'plastic',
+          value: 0.35,
+          low: 0.25,
+          high: 0.5,
+          note: "Typical value, not published here (searched as for rubber; the Puchalski et al. plastic values are not in the abstracts). An Iranian four-cultivar study (Atirli, Kapak, Kowse, Paiez; IJABBR) found PVC the lowest of its surfaces, without values in the abstract; 0.35 sits just below the published galvanised-steel 0.364 for 'Golab'.",
+          isTypicalDefault: true,
+          typicalBasis: 'from memory',
+          source: null,
+        },
+        {
+          quantity: 'drop_threshold_height',
+          variant: 'foam',
+          value: 50,
+          observation: 'no-bruise',
+          method:
+            'Free fall from 10 to 150 mm in 10 mm steps onto wood, concrete, corrugated cardboard and foam',
+          note: "Measured on 'Idared', 'Golden Delicious' and 'Jonagold'; the commodity record takes it as typical of apple. 'The foam protected apples from bruising up to a drop height of 50 mm'; the foam's kind and thickness are not in the abstract. On wood and concrete (which behaved alike) and on cardboard no no-bruise height is given in the abstract. 'Idared' was the most resistant, 'Jonagold' the least.",
+          source: SLUPSKA,
+        },
+        {
+          quantity: 'drop_threshold_height',
+          variant: 'rigid plate',
+          value: 20,
+          low: 10,
+          high: 30,
+          observation: 'recommended-max',
+          note: "Typical value, not published: no no-bruise drop height onto a named hard surface was readable. Found instead: Komarnicki & Stopa 2013 (Inż. Roln. 3(146)) estimate 30 mm as not causing plastic deformation, on a pendulum whose impact surface is not named; Pang et al. 1994 (Trans. ASAE 37(3)) give per-cultivar heights for a 100 mm² bruise onto steel, rubber and plastic, not visible in the abstract (tested range 6–143 mm); 'Jazz' apples struck by a bare aluminium plate did not bruise at 22 N peak force (Fu et al. 2017), a force, not a height; 'Royal Gala' bruising began at about 0.08 J on a pendulum whose impactor is not named (Shen & Shan, UBC student report, weak). 20 mm is kept below the 30 mm estimate.",
+          isTypicalDefault: true,
+          typicalBasis: 'from memory',
+          source: null,
+        },
+        {
+          quantity: 'bulk_density',
+          value: 480,
+          low: 350,
+          high: 600,
+          note: "Typical value, not published for commercial fruit: the only published figure read, 240.1 kg/m³ ('apparent density' of a pile of small 'Golab' apples), is ambiguous and kept on that cultivar. Searched: 'apple bulk density bin kg/m3', 'apple physical properties bulk density porosity'. 480 kg/m³ is about 0.55 × the 'Fuji' fruit density 878 kg/m³, i.e. a bin porosity near 45 % (the 'Golab' study reports 50–57 %).",
+          isTypicalDefault: true,
+          typicalBasis: 'from memory',
+          source: null,
+        },
+        typicalJanssenK(),
       ],
     },
   ],

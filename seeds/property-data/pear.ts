@@ -1,7 +1,25 @@
-import type { SeedCommodity } from './types';
+import type { SeedCommodity, SeedValue } from './types';
 import { storageModulus, typicalJanssenK } from './value-helpers';
 
 const STORAGE_STUDY = 'tjaf-pear-apple-storage';
+const UCD_BARTLETT = 'pome-ucd-bartlett';
+const LBF = 4.4482216;
+
+/** A typical pear value kept where nothing published could be read (see its note). */
+const typical = (
+  v: Omit<SeedValue, 'isTypicalDefault' | 'typicalBasis' | 'source'>,
+): SeedValue => ({
+  ...v,
+  isTypicalDefault: true,
+  typicalBasis: 'from memory',
+  source: null,
+});
+
+const PEAR_FRICTION_NOTE =
+  "Typical value, not published here: Öztürk et al. 2009 measured the static friction of 'Deveci' and 'Santa Maria' pears, but the coefficients are not in the abstract read. Searched: 'pear physical properties density bulk density friction coefficient cultivar', 'pear fruit length width mass true density static coefficient of friction rubber plywood galvanized'.";
+
+const PEAR_DROP_NOTE =
+  "Typical value, not published: no pear drop height that left no bruise onto a named surface could be read. Found instead: 'Bartlett' share bruised 40 % at 10 cm, 44 % at 15 cm, 56 % at 23 cm, 78 % at 30 cm, 100 % at 41 cm, surface not named (Mitchell, read second-hand in a shelf-life text); 'even short drops of 3 inches' cause substantial impact bruising of 'Bartlett' (California Agriculture 54(3), 2000, citing Mitcham et al. 1994; the text's 'about 8 mm' is a slip for 76 mm), surface not named; all fruit bruised in 10–20 cm pendulum drops ('Williams', 'Ankara'; Turk. J. Agric. For.), impactor not named; Stropek & Gołacki 2020 (rigid plate) state no bruise forms below some impact velocity, not given in the part read; Celik 2017 simulated 0.25–1 m drops onto steel, wood and rubber (rubber least damaging).";
 
 export const PEAR: SeedCommodity = {
   slug: 'pear',
@@ -9,7 +27,35 @@ export const PEAR: SeedCommodity = {
   family: 'Pome fruit',
   botanicalName: 'Pyrus communis',
   cultivars: [
-    { slug: 'pear-williams', name: 'Williams', values: storageModulus(1.68, 0.51, STORAGE_STUDY) },
+    {
+      slug: 'pear-williams',
+      name: 'Williams',
+      values: [
+        ...storageModulus(1.68, 0.51, STORAGE_STUDY),
+        {
+          quantity: 'penetrometer_firmness',
+          variant: '8 mm',
+          value: 84.5,
+          low: 84.5,
+          high: 97.9,
+          stage: 'firm',
+          method: 'Penetrometer, 8 mm (5/16 inch) tip; California maturity standard',
+          note: `Published as 'Bartlett' (the North American name of 'Williams'). The maximum flesh firmness allowed at harvest, 19.0–22.0 lbf depending on soluble solids (below 10 % to 12 %) and fruit size; no maximum at 13 % SSC or more. × ${LBF} = 84.5–97.9 N; the value is the strictest maximum, 19.0 lbf.`,
+          source: UCD_BARTLETT,
+        },
+        {
+          quantity: 'penetrometer_firmness',
+          variant: '8 mm',
+          value: 13.3,
+          low: 8.9,
+          high: 17.8,
+          stage: 'ripe',
+          method: 'Penetrometer, 8 mm (5/16 inch) tip',
+          note: `Published as 'Bartlett': ripe pears for eating have a flesh firmness of 2–4 lbf; × ${LBF} = 8.9–17.8 N, the value is the middle (3 lbf).`,
+          source: UCD_BARTLETT,
+        },
+      ],
+    },
     { slug: 'pear-ankara', name: 'Ankara', values: storageModulus(1.34, 0.8, STORAGE_STUDY) },
     {
       slug: 'pear-deveci',
@@ -37,9 +83,108 @@ export const PEAR: SeedCommodity = {
     },
     {
       slug: 'pear-type',
-      name: 'Pear (cultivar not named)',
+      name: 'Pear (commodity record)',
       isType: true,
       values: [
+        {
+          quantity: 'youngs_modulus',
+          variant: 'apparent',
+          value: 1.68,
+          low: 0.51,
+          high: 1.68,
+          method: 'Whole fruit compressed by a probe',
+          probe: '8 mm diameter cylinder with a curved end',
+          loadingRate: '7 mm/min',
+          storage: 'Harvest day (range: harvest to 4 months of storage)',
+          note: "Measured on 'Williams'; the commodity record takes it as typical of pear. The stiffest figure of the study ('Williams' at harvest) is taken, as it gives the highest contact pressure; the range covers 'Williams' 1.68 → 0.51 MPa and 'Ankara' 1.34 → 0.80 MPa over 4 months of storage.",
+          source: STORAGE_STUDY,
+        },
+        typical({
+          quantity: 'poisson_ratio',
+          value: 0.35,
+          low: 0.3,
+          high: 0.45,
+          note: "Typical value, not published: no stored source gives a Poisson's ratio for pear flesh (searched: 'pear Poisson ratio modulus of elasticity compression', 'pear fruit Poisson's ratio flesh', 'Celik Ankara pear material properties Poisson'). Apple flesh measured 0.38–0.39 (Konya study) and is recalled as 0.2–0.35; 0.35 lies between.",
+        }),
+        typical({
+          quantity: 'density',
+          value: 1030,
+          low: 1000,
+          high: 1070,
+          note: "Typical value, not published here: Öztürk et al. 2009 measured fruit density of 'Deveci' and 'Santa Maria', but the values are not in the abstract read. Pears sink in water, which is why packing-house immersion dumps use flotation salts (California Agriculture 54(3), 2000), so the density exceeds 1000 kg/m³.",
+        }),
+        {
+          quantity: 'diameter',
+          variant: 'equatorial',
+          value: 63.5,
+          note: "Published for 'Bartlett' ('Williams'); the commodity record takes it as typical of pear. The California maturity standard sorts fruit into diameter classes 2⅜–2½ in and over 2½ in; 2½ in × 25.4 = 63.5 mm, the boundary between them (2⅜ in = 60.3 mm).",
+          source: UCD_BARTLETT,
+        },
+        typical({
+          quantity: 'diameter',
+          variant: 'axial',
+          value: 85,
+          low: 70,
+          high: 110,
+          note: 'Typical value, not published here: Öztürk et al. 2009 measured fruit length, but the values are not in the abstract read. European pears are longer than wide; 85 mm is about 1.3 × the published 63.5 mm diameter class.',
+        }),
+        {
+          quantity: 'mass',
+          value: 240.1,
+          low: 190.36,
+          high: 289.85,
+          note: "Range between 'Santa Maria' (190.36 g) and 'Deveci' (289.85 g); the value is the middle of the range.",
+          source: 'ozturk-2009-pear',
+        },
+        typical({
+          quantity: 'static_bruise_threshold',
+          value: 70,
+          low: 40,
+          high: 120,
+          note: "Typical value, not published: no static bruise threshold, bioyield or failure stress for pear could be read (Öztürk et al. give rupture forces 23.04–39.59 N, forces not stresses; the storage study gives bioyield forces without values in its abstract; Blahovec et al. test static bruising of nine pear varieties by hysteresis loss). Searched: 'pear fruit compression bioyield stress failure stress', 'pear cultivars elastic modulus rupture stress'. Kept below the published apple value (100 kPa, Wang et al. 2024): pears are softer (ripe 'Bartlett' 2–4 lbf against 19–22 lbf at harvest).",
+        }),
+        typical({
+          quantity: 'friction_coefficient',
+          variant: 'rubber',
+          value: 0.5,
+          low: 0.35,
+          high: 0.7,
+          note: PEAR_FRICTION_NOTE,
+        }),
+        typical({
+          quantity: 'friction_coefficient',
+          variant: 'steel',
+          value: 0.35,
+          low: 0.25,
+          high: 0.45,
+          note: `${PEAR_FRICTION_NOTE} Close to the apple figure on galvanised steel (μ = tan 20° = 0.364, 'Golab').`,
+        }),
+        typical({
+          quantity: 'friction_coefficient',
+          variant: 'plastic',
+          value: 0.3,
+          low: 0.2,
+          high: 0.45,
+          note: PEAR_FRICTION_NOTE,
+        }),
+        typical({
+          quantity: 'drop_threshold_height',
+          variant: 'rigid plate',
+          value: 20,
+          low: 10,
+          high: 50,
+          observation: 'recommended-max',
+          note: PEAR_DROP_NOTE,
+        }),
+        typical({
+          quantity: 'drop_threshold_height',
+          variant: 'rubber',
+          value: 40,
+          low: 20,
+          high: 80,
+          observation: 'recommended-max',
+          note: `${PEAR_DROP_NOTE} Rubber is taken at twice the rigid-plate value.`,
+        }),
         {
           quantity: 'bulk_density',
           value: 454.5,
