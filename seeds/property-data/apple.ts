@@ -9,6 +9,20 @@ const SLUPSKA = 'pome-slupska-2022-apple-drops';
 const VURSAVUS = 'pome-vursavus-1999-apple';
 const KJFP = 'pome-kjfp-apple-size';
 const WA_GRADES = 'pome-wa-apple-grades';
+const STORED_TENSILE = 'pome-stored-apples-tensile';
+
+/** Ultimate tensile strength of flesh specimens, at harvest and after 18 weeks in cool store. */
+const storedTensile = (): SeedValue[] =>
+  [
+    { value: 250, low: 200, high: 300, storage: 'Straight after harvest (start of cool storage)' },
+    { value: 10, storage: 'After 18 weeks in cool store' },
+  ].map((v) => ({
+    quantity: 'failure_stress' as const,
+    ...v,
+    method: 'Ultimate tensile strength of flesh specimens (tension, not compression)',
+    note: "Published as 200–300 kPa at the start, falling to 10 kPa after 18 weeks, across 'Granny Smith', 'Delicious' and 'Jonathan' (not split by cultivar in the abstract); the first value is the middle of the range. Tensile strength, lower than a compressive failure stress, so a check using it errs on the safe side. Bruise resistance of whole fruit under slow and impact compression stayed fairly constant over storage.",
+    source: STORED_TENSILE,
+  }));
 
 /** Washington minimum pressure at shipment, published in pounds-force (1 lbf = 4.4482216 N). */
 const waMinimumFirmness = (lbf: number, newtons: number): SeedValue => ({
@@ -188,6 +202,7 @@ export const APPLE: SeedCommodity = {
           2.37,
           "Published as 2.37 N/mm² (= MPa), the lowest of the four cultivars tested; 'Granny Smith' was the most susceptible to bruise damage in the study's impact test.",
         ),
+        ...storedTensile(),
       ],
     },
     {
@@ -218,7 +233,7 @@ export const APPLE: SeedCommodity = {
     {
       slug: 'apple-red-delicious',
       name: 'Red Delicious',
-      values: [waMinimumFirmness(12, 53.4)],
+      values: [waMinimumFirmness(12, 53.4), ...storedTensile()],
     },
     {
       slug: 'apple-gala',

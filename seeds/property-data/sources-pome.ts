@@ -179,4 +179,13 @@ export const POME_SOURCES: SeedSource[] = [
     url: 'https://www.mendeley.com/papers/bruise-development-fruit-response-pear-cv-blanquilla-under-impact-conditions/',
     note: 'Read in the abstract.',
   },
+  {
+    key: 'pome-stored-apples-tensile',
+    kind: 'paper',
+    authors: null,
+    year: null,
+    title: 'Mechanical properties and texture of stored apples',
+    url: 'https://discovery.researcher.life/article/mechanical-properties-and-texture-of-stored-apples/e745e077a97337999103f5d2a6de4d7d',
+    note: 'Read in the abstract; authors, journal, year and pages not shown on the page read.',
+  },
 ];
