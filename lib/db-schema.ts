@@ -212,6 +212,8 @@ export interface AssessmentsTable {
   results: JsonText;
   cultivar_id: number | null;
   revision_id: number | null;
+  /** migrations/20261205000400: the commodity record's revision the result inherited from */
+  commodity_revision_id: number | null;
   version: Generated<number>;
   parent_id: number | null;
   created_at: Generated<Timestamp>;

@@ -2,6 +2,7 @@
 
 import { useId } from 'react';
 import { useUnits } from '@/components/units/units-provider';
+import { RUNG_SHORT, type Rung } from '@/lib/evidence/rungs';
 
 /** A number input with its unit beside it and its error below, announced politely. */
 export function MeasureField({
@@ -56,11 +57,14 @@ export function MeasureField({
 export interface CultivarOption {
   slug: string;
   label: string;
-  prefill: Record<string, number | undefined>;
+  prefill: Record<string, { value: number; rung: Rung } | undefined>;
   complete: boolean;
 }
 
-/** The placeholder of a fruit field: the published figure it falls back to, or a prompt. */
+/**
+ * The placeholder of a fruit field: the figure the check takes when nothing is typed, with the
+ * rung of evidence it comes from in words, or a prompt when no rung has one.
+ */
 export function publishedHint(
   option: CultivarOption | undefined,
   key: string,
@@ -68,7 +72,9 @@ export function publishedHint(
 ): string {
   if (!option) return '';
   const v = option.prefill[key];
-  return v === undefined ? 'none published' : `${Number(toDisplay(v).toPrecision(4))} (published)`;
+  return v === undefined
+    ? 'no value: enter one'
+    : `${Number(toDisplay(v.value).toPrecision(4))} (${RUNG_SHORT[v.rung]})`;
 }
 
 export function CultivarSelect({

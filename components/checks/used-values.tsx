@@ -1,36 +1,52 @@
 import { Measure } from '@/components/units/measure';
+import { RUNG_LABELS, type Rung } from '@/lib/evidence/rungs';
 
 export interface UsedValueView {
   value: number;
   unit: string;
-  origin: 'published' | 'derived' | 'entered' | 'typical default';
+  rung: Rung;
   source: string | null;
+  note: string | null;
 }
 
-/** Which figure the check used for each input, and where it came from. */
+/**
+ * Which figure the check used for each input and the rung of evidence it came from, in words
+ * (this cultivar's, the commodity's, derived, typical, or entered), with its source.
+ */
 export function UsedValues({ rows }: { rows: [string, UsedValueView | null | undefined][] }) {
   return (
     <table className="w-full text-left text-sm" data-testid="used-values">
       <caption className="mb-1 text-left text-xs font-medium uppercase tracking-wide text-stone-600">
-        Inputs used
+        Inputs used, and where each came from
       </caption>
       <tbody>
         {rows.map(([label, v]) => (
-          <tr key={label} className="border-t border-stone-200 align-top">
+          <tr key={label} className="border-t border-stone-200 align-top" data-rung={v?.rung}>
             <th scope="row" className="py-1 pr-2 font-normal text-stone-700">
               {label}
             </th>
             <td className="num py-1 pr-2">{v ? <Measure value={v.value} unit={v.unit} /> : '—'}</td>
             <td className="py-1 text-xs text-stone-600">
-              {!v
-                ? 'no published value'
-                : v.origin === 'entered'
-                  ? 'entered'
-                  : v.origin === 'derived'
-                    ? `derived${v.source ? ` — ${v.source}` : ''}`
-                    : v.origin === 'typical default'
-                      ? `typical default, no source${v.source ? ` — ${v.source}` : ''}`
-                      : `published${v.source ? ` — ${v.source}` : ''}`}
+              {!v ? (
+                'no value on any rung'
+              ) : (
+                <>
+                  <span
+                    className={
+                      v.rung === 'typical'
+                        ? 'font-medium text-amber-800'
+                        : v.rung === 'own' || v.rung === 'entered'
+                          ? 'font-medium text-stone-800'
+                          : 'font-medium text-stone-700'
+                    }
+                    data-testid="rung"
+                  >
+                    {RUNG_LABELS[v.rung]}
+                  </span>
+                  {v.source ? ` — ${v.source}` : ''}
+                  {v.note ? <span className="block text-stone-500">{v.note}</span> : null}
+                </>
+              )}
             </td>
           </tr>
         ))}

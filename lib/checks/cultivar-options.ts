@@ -1,51 +1,68 @@
 import 'server-only';
 import type { Actor } from '@/lib/auth/actor';
 import { listPublishedCultivars } from '@/lib/data/cultivars';
-import { pickValue } from './cultivar-inputs';
-import type { RevisionValue } from '@/lib/properties/records';
-import type { Quantity } from '@/lib/properties/quantities';
+import type { Rung } from '@/lib/evidence/rungs';
+import { ValidationError } from '@/lib/errors';
+import { evidenceFor } from './cultivar-inputs';
+import { fruitFromEvidence } from './resolve-fruit';
+import type { UsedValue } from './used-value';
 
-/** The published figures a check form shows as placeholders, keyed like the form's fields. */
-export interface CultivarPrefill extends Record<string, number | undefined> {
-  modulusMpa?: number;
-  poisson?: number;
-  diameterMm?: number;
-  massG?: number;
-  staticThresholdKpa?: number;
+/** A figure a check form shows as a placeholder: the value the check would take, and its rung. */
+export interface PrefillFigure {
+  value: number;
+  rung: Rung;
 }
 
-const FIELDS: [keyof CultivarPrefill, Quantity][] = [
-  ['modulusMpa', 'youngs_modulus'],
-  ['poisson', 'poisson_ratio'],
-  ['diameterMm', 'diameter'],
-  ['massG', 'mass'],
-  ['staticThresholdKpa', 'static_bruise_threshold'],
-];
+/** The figures a check form shows as placeholders, keyed like the form's fields. */
+export type CultivarPrefill = Record<string, PrefillFigure | undefined>;
 
-/** The figures a check would take from these values (the same choice as resolveFruit). */
-function prefillOf(values: RevisionValue[]): CultivarPrefill {
-  const out: CultivarPrefill = {};
-  for (const [field, quantity] of FIELDS) {
-    const pick = pickValue(values, quantity);
-    if (pick) out[field] = pick.value;
-  }
-  return out;
-}
+const figure = (u: UsedValue | null): PrefillFigure | undefined =>
+  u ? { value: u.value, rung: u.rung } : undefined;
 
 /**
- * Published cultivars for a check's select, the ones with every figure a check needs first
- * (the others are marked, and their missing figures must be typed in).
+ * Published cultivars and commodity records for a check's select, each with the figures the
+ * evidence ladder gives it when nothing is typed (the same choice the check makes). A record
+ * whose ladder runs dry somewhere is marked, and the missing figure must be typed in.
  */
 export async function cultivarOptions(actor: Actor) {
-  const cultivars = await listPublishedCultivars(actor);
-  const options = cultivars.map((c) => {
-    const prefill = prefillOf(c.values);
-    const hasMass = prefill.massG !== undefined || c.values.some((v) => v.quantity === 'density');
-    const complete = ['modulusMpa', 'poisson', 'diameterMm'].every((k) => k in prefill) && hasMass;
-    const label = `${c.commodity.name} — ${c.name}${complete ? '' : ' (some figures to enter)'}`;
-    return { slug: c.slug, label, prefill, complete };
+  const records = await listPublishedCultivars(actor);
+  const options = records.map((c) => {
+    let prefill: CultivarPrefill = {};
+    let complete = true;
+    try {
+      const f = fruitFromEvidence(null, evidenceFor(c, records, null), {});
+      prefill = {
+        modulusMpa: figure(f.modulusMpa),
+        poisson: figure(f.poisson),
+        diameterMm: figure(f.diameterMm),
+        axialMm: figure(f.axialMm),
+        massG: figure(f.massG),
+        densityKgM3: figure(f.densityKgM3),
+        staticThresholdKpa: figure(f.staticThresholdKpa),
+      };
+      complete = f.staticThresholdKpa !== null;
+    } catch (error) {
+      if (!(error instanceof ValidationError)) throw error;
+      complete = false;
+    }
+    const name = c.isType ? 'commodity record (no cultivar named)' : c.name;
+    const label = `${c.commodity.name} — ${name}${complete ? '' : ' (some figures to enter)'}`;
+    return {
+      slug: c.slug,
+      label,
+      prefill,
+      complete,
+      commodity: c.commodity.name,
+      isType: c.isType,
+    };
   });
-  return options.sort((a, b) => Number(b.complete) - Number(a.complete));
+  return options.sort(
+    (a, b) =>
+      Number(b.complete) - Number(a.complete) ||
+      a.commodity.localeCompare(b.commodity) ||
+      Number(b.isType) - Number(a.isType) ||
+      a.label.localeCompare(b.label),
+  );
 }
 
 /** The cultivar a check page starts on: the one asked for, else the first with every figure. */

@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { FACING_KEYS } from './facings';
 import { DROP_SURFACE_KEYS } from './surfaces';
 import { slugSchema } from '@/lib/validation/cultivars';
+import { STAGES } from '@/lib/properties/quantities';
 
 /**
  * A number in a stated range; `unit` goes into the message so the user sees what is meant, and
@@ -27,10 +28,14 @@ const poisson = z
 /** The fruit, from a cultivar's published values and/or the user's own figures. */
 export const fruitSchema = {
   cultivar: slugSchema.optional(),
+  /** The ripeness stage whose values the check should take, where values are staged. */
+  stage: z.enum(STAGES, { error: 'Stage must be firm, firm-ripe or ripe.' }).optional(),
   modulusMpa: measure("Young's modulus", 'MPa', 0, 1000).optional(),
   poisson: poisson.optional(),
   diameterMm: measure('Diameter', 'mm', 0, 500).optional(),
+  axialMm: measure('Axial diameter', 'mm', 0, 500).optional(),
   massG: measure('Mass', 'g', 0, 20_000).optional(),
+  densityKgM3: measure('Density', 'kg/m³', 0, 3000).optional(),
   staticThresholdKpa: measure('Static bruise threshold', 'kPa', 0, 100_000).optional(),
 };
 
@@ -81,8 +86,6 @@ export type StackCheckInput = z.infer<typeof stackCheckSchema>;
 export const squeezeCheckSchema = z
   .object({
     ...fruitSchema,
-    axialMm: measure('Axial diameter', 'mm', 0, 500).optional(),
-    densityKgM3: measure('Density', 'kg/m³', 0, 3000).optional(),
     /** Omit both for flat plates wider than the contact. */
     padDiameterMm: measure('Pad diameter', 'mm', 0, 300).optional(),
     padEdgeMm: measure('Pad edge radius', 'mm', 0, 100).optional(),

@@ -122,14 +122,18 @@ export function fruitUsedRows(u: {
   modulus_mpa: UsedValue;
   poisson_ratio: UsedValue;
   diameter_mm: UsedValue;
+  axial_diameter_mm?: UsedValue;
   mass_g: UsedValue;
+  density_kg_m3?: UsedValue;
   static_bruise_threshold_kpa: UsedValue | null;
 }): CheckReport['used'] {
   return [
     { label: "Young's modulus", value: u.modulus_mpa },
     { label: "Poisson's ratio", value: u.poisson_ratio },
-    { label: 'Diameter', value: u.diameter_mm },
+    { label: 'Diameter (equatorial)', value: u.diameter_mm },
+    ...(u.axial_diameter_mm ? [{ label: 'Axial diameter', value: u.axial_diameter_mm }] : []),
     { label: 'Mass', value: u.mass_g },
+    ...(u.density_kg_m3 ? [{ label: 'Density', value: u.density_kg_m3 }] : []),
     { label: 'Static bruise threshold', value: u.static_bruise_threshold_kpa },
   ];
 }

@@ -9,7 +9,16 @@ export const DROP_SURFACES = {
     modulusMpa: 200_000,
     poisson: 0.3,
     basis: 'Handbook value for structural steel (E ≈ 200 GPa, ν ≈ 0.3).',
-    thresholdVariants: ['steel', 'stainless steel', 'mild steel', 'galvanised steel'],
+    // A rigid plate, concrete or aluminium is as hard as steel beside a fruit: their figures apply.
+    thresholdVariants: [
+      'steel',
+      'stainless steel',
+      'mild steel',
+      'galvanised steel',
+      'aluminium',
+      'rigid plate',
+      'concrete',
+    ],
   },
   'hard plastic': {
     label: 'Hard plastic (polyethylene)',
@@ -17,7 +26,7 @@ export const DROP_SURFACES = {
     poisson: 0.42,
     basis:
       'Typical value for high-density polyethylene (E ≈ 0.8–1.2 GPa); not from a single source.',
-    thresholdVariants: ['hard plastic'],
+    thresholdVariants: ['hard plastic', 'plastic'],
   },
   'belt rubber': {
     label: 'Conveyor belt rubber',
@@ -25,7 +34,7 @@ export const DROP_SURFACES = {
     poisson: 0.49,
     basis:
       'Typical value for a belt cover rubber of about 60 Shore A (E ≈ 3–8 MPa); not from a single source.',
-    thresholdVariants: ['belt rubber'],
+    thresholdVariants: ['belt rubber', 'rubber'],
   },
   foam: {
     label: 'Foam or padded surface',

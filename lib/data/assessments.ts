@@ -16,6 +16,7 @@ import { recordAudit } from '@/lib/audit-trail';
 interface Pinned {
   cultivar: string;
   revision_id: number;
+  commodity_record?: { cultivar: string; revision_id: number } | null;
 }
 
 export interface Assessment {
@@ -33,6 +34,10 @@ export interface Assessment {
   revisionNumber: number | null;
   /** The cultivar's published revision now, when it is newer than the pinned one. */
   newerRevision: { id: number; number: number } | null;
+  /** The commodity record's pinned revision, where the result inherited from it. */
+  commodityRevisionId: number | null;
+  /** The commodity record's published revision now, when it is newer than the pinned one. */
+  newerCommodityRevision: { id: number; number: number } | null;
   version: number;
   parentId: number | null;
   /** The first assessment of this one's chain of re-runs (itself for a first version). */
@@ -49,6 +54,9 @@ function query() {
     .leftJoin('cultivars as c', 'c.id', 'a.cultivar_id')
     .leftJoin('property_revisions as r', 'r.id', 'a.revision_id')
     .leftJoin('property_revisions as now', 'now.id', 'c.published_revision_id')
+    .leftJoin('property_revisions as cr', 'cr.id', 'a.commodity_revision_id')
+    .leftJoin('cultivars as t', 't.id', 'cr.cultivar_id')
+    .leftJoin('property_revisions as tnow', 'tnow.id', 't.published_revision_id')
     .selectAll('a')
     .select([
       'u.name as owner_name',
@@ -57,6 +65,8 @@ function query() {
       'r.number as revision_number',
       'now.id as now_id',
       'now.number as now_number',
+      'tnow.id as tnow_id',
+      'tnow.number as tnow_number',
     ]);
 }
 
@@ -67,6 +77,13 @@ function toAssessment(r: InferResult<ReturnType<typeof query>>[number]): Assessm
     r.revision_id !== null &&
     r.now_id !== r.revision_id
       ? { id: r.now_id, number: r.now_number }
+      : null;
+  const newerCommodity =
+    r.tnow_id !== null &&
+    r.tnow_number !== null &&
+    r.commodity_revision_id !== null &&
+    r.tnow_id !== r.commodity_revision_id
+      ? { id: r.tnow_id, number: r.tnow_number }
       : null;
   return {
     id: r.id,
@@ -83,6 +100,8 @@ function toAssessment(r: InferResult<ReturnType<typeof query>>[number]): Assessm
     revisionId: r.revision_id,
     revisionNumber: r.revision_number,
     newerRevision: newer,
+    commodityRevisionId: r.commodity_revision_id,
+    newerCommodityRevision: newerCommodity,
     version: r.version,
     parentId: r.parent_id,
     rootId: r.root_id ?? r.id,
@@ -173,6 +192,7 @@ async function insertRow(
       result_schema: run.resultSchema,
       cultivar_id: cultivar?.id ?? null,
       revision_id: pinned?.revision_id ?? null,
+      commodity_revision_id: pinned?.commodity_record?.revision_id ?? null,
       version,
       parent_id: meta.rerunOf?.id ?? null,
       root_id: root,
@@ -187,7 +207,12 @@ async function insertRow(
     action: meta.rerunOf ? 'assessment.rerun' : 'assessment.create',
     entity: 'assessment',
     entityId: id,
-    detail: { check: run.check, revision: pinned?.revision_id ?? null, version },
+    detail: {
+      check: run.check,
+      revision: pinned?.revision_id ?? null,
+      commodityRevision: pinned?.commodity_record?.revision_id ?? null,
+      version,
+    },
   });
   return id;
 }

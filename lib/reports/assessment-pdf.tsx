@@ -3,6 +3,7 @@ import type { Assessment } from '@/lib/data/assessments';
 import type { RegisteredCheck } from '@/lib/checks/registry';
 import type { ChartSpec, Figure } from '@/lib/checks/report';
 import type { UsedValue } from '@/lib/checks/used-value';
+import { rungText } from '@/lib/evidence/rungs';
 import { MACHINERY_CAUTION, STANDING_CAUTION } from '@/lib/cautions';
 import { VERDICT_RULE } from '@/lib/checks/verdict';
 import { PdfLineChart, type PdfSeries } from './pdf-chart';
@@ -33,10 +34,7 @@ function figureText(f: Figure): string {
 function usedText(v: UsedValue | null): [string, string] {
   if (!v) return ['—', 'no published value'];
   const unit = v.unit === '–' ? '' : ` ${v.unit}`;
-  return [
-    `${Number(v.value.toPrecision(4))}${unit}`,
-    `${v.origin}${v.source ? ` — ${v.source}` : ''}`,
-  ];
+  return [`${Number(v.value.toPrecision(4))}${unit}`, rungText(v)];
 }
 
 function chartSeries(c: ChartSpec): PdfSeries[] {
@@ -74,6 +72,9 @@ function Report({ a, check }: { a: Assessment; check: RegisteredCheck }) {
             ? `Data: ${a.cultivarName}, property revision ${a.revisionNumber} (id ${a.revisionId})`
             : 'Data: values entered by hand'}
           {a.newerRevision ? ` — revision ${a.newerRevision.number} has been published since` : ''}
+          {a.newerCommodityRevision
+            ? ` — commodity record revision ${a.newerCommodityRevision.number} has been published since`
+            : ''}
         </Text>
         <Text style={s.margin}>
           Bruise margin{' '}

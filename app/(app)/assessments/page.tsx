@@ -137,6 +137,11 @@ export default async function AssessmentsPage({ searchParams }: { searchParams: 
                       newer data: revision {a.newerRevision.number}
                     </span>
                   ) : null}
+                  {a.newerCommodityRevision ? (
+                    <span className="ml-2 rounded bg-amber-100 px-1.5 text-xs text-amber-900">
+                      newer commodity data: revision {a.newerCommodityRevision.number}
+                    </span>
+                  ) : null}
                 </div>
                 <div className="num text-right">
                   {a.margin === null ? '—' : `margin ${a.margin.toFixed(2)}`}

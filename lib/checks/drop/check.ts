@@ -4,6 +4,9 @@ import type { RevisionValue } from '@/lib/properties/records';
 import { parseInput } from '@/lib/validation/parse';
 import { dropCheckSchema } from '@/lib/checks/inputs';
 import { heightForEnergy, heightForPressure, impactAt, surfaceSI, type FruitSI } from './model';
+import { citationOf } from '@/lib/evidence/ladder';
+import type { Rung } from '@/lib/evidence/rungs';
+import type { Observation } from '@/lib/properties/quantities';
 import { pinnedSummary } from '../cultivar-inputs';
 import { fruitUsed, resolveFruit, type ResolvedFruit } from '../resolve-fruit';
 import { DROP_SURFACE_KEYS, DROP_SURFACES, type DropSurface } from '../surfaces';
@@ -21,34 +24,52 @@ function fruitSI(f: ResolvedFruit): FruitSI {
   };
 }
 
-/** The published dynamic thresholds of a surface as safe heights, m, each with its origin. */
-function dynamicLimits(f: ResolvedFruit, fruit: FruitSI, surface: DropSurface) {
+interface Limit {
+  heightM: number;
+  basis: string;
+  source: string | null;
+  note: string | null;
+  rung: Rung;
+  /** True when fruit bruised at this level: the safe height lies somewhere below it. */
+  upperBound: boolean;
+  observation: Observation | null;
+}
+
+/**
+ * The dynamic limits of a surface as heights, m, from the first rung that has any (the
+ * cultivar's, else the commodity record's, else a stored typical one): thresholds (no bruise, or
+ * a guide's maximum) first, lowest first; levels at which fruit bruised after them, as upper
+ * bounds.
+ */
+function dynamicLimits(f: ResolvedFruit, fruit: FruitSI, surface: DropSurface): Limit[] {
   const variants: readonly string[] = DROP_SURFACES[surface].thresholdVariants;
-  const onSurface = (v: RevisionValue) => variants.includes(v.variant);
-  return f.extra.filter(onSurface).flatMap((v) => {
-    const source = v.source
-      ? `${v.source.authors?.split(/[;,]/)[0] ?? v.source.title} ${v.source.year ?? ''}`.trim()
-      : null;
-    if (v.quantity === 'drop_threshold_height')
-      return [
-        {
-          heightM: v.value / 1000,
-          basis: `${v.value} mm drop onto ${v.variant}`,
-          source,
-          note: v.note,
-        },
-      ];
-    if (v.quantity === 'impact_threshold_energy')
-      return [
-        {
-          heightM: heightForEnergy(fruit, v.value),
-          basis: `${v.value} J onto ${v.variant}`,
-          source,
-          note: v.note,
-        },
-      ];
-    return [];
+  const set = f.evidence;
+  const onSurface = (v: RevisionValue) =>
+    variants.includes(v.variant) &&
+    (v.quantity === 'drop_threshold_height' || v.quantity === 'impact_threshold_energy');
+  const rungs: [Rung, RevisionValue[]][] = [
+    ['own', set.own.filter((v) => onSurface(v) && !v.isTypicalDefault)],
+    ['commodity', set.commodity.filter((v) => onSurface(v) && !v.isTypicalDefault)],
+    ['typical', [...set.own, ...set.commodity].filter((v) => onSurface(v) && v.isTypicalDefault)],
+  ];
+  const [rung, values] = rungs.find(([, list]) => list.length) ?? ['own', []];
+  const limits = values.map((v): Limit => {
+    const energy = v.quantity === 'impact_threshold_energy';
+    return {
+      heightM: energy ? heightForEnergy(fruit, v.value) : v.value / 1000,
+      basis: `${v.value} ${energy ? 'J' : 'mm drop'} onto ${v.variant}${
+        energy ? ` (a height for this ${round(f.massG.value, 3)} g fruit)` : ''
+      }`,
+      source: citationOf(v.source) ?? (v.isTypicalDefault ? 'typical value' : null),
+      note: v.note,
+      rung,
+      upperBound: v.observation === 'bruised-at',
+      observation: v.observation,
+    };
   });
+  return limits.sort(
+    (a, b) => Number(a.upperBound) - Number(b.upperBound) || a.heightM - b.heightM,
+  );
 }
 
 /** The lowest published safe height of a surface first; each surface worked out once per check. */
@@ -57,7 +78,7 @@ function limitsOf(f: ResolvedFruit, fruit: FruitSI) {
   return (surface: DropSurface) => {
     let limits = known.get(surface);
     if (!limits) {
-      limits = dynamicLimits(f, fruit, surface).sort((a, b) => a.heightM - b.heightM);
+      limits = dynamicLimits(f, fruit, surface);
       known.set(surface, limits);
     }
     return limits;
@@ -83,6 +104,8 @@ function safeHeights(
       dynamic_basis: limits[0]?.basis ?? null,
       dynamic_source: limits[0]?.source ?? null,
       dynamic_note: limits[0]?.note ?? null,
+      dynamic_rung: limits[0]?.rung ?? null,
+      dynamic_upper_bound: limits[0]?.upperBound ?? null,
       static_safe_height_mm: staticM === null ? null : round(staticM * 1000),
     };
   });
@@ -120,7 +143,12 @@ export async function runDropCheck(actor: Actor, raw: unknown): Promise<DropResu
   const staticMargin = f.staticThresholdKpa
     ? (f.staticThresholdKpa.value * 1000) / impact.peakPressure
     : null;
-  const warnings: string[] = [];
+  const warnings: string[] = [...f.warnings];
+  const bound = limits[0]?.upperBound ? limits[0] : null;
+  if (bound)
+    warnings.push(
+      `The only published figure for a drop onto ${DROP_SURFACES[input.surface].label.toLowerCase()} is a height at which fruit bruised (${round(bound.heightM * 1000)} mm): an upper bound. The safe height lies somewhere below it, so a drop under it is at best "tight", never proven safe.`,
+    );
   if (surface.thickness !== undefined && surface.thickness < 3 * impact.contactRadius) {
     warnings.push(
       `The padding (${input.padThicknessMm} mm) is thin beside the contact (radius ${round(impact.contactRadius * 1000, 3)} mm): the base under it stiffens it, so the real peak pressure is higher than shown.`,
@@ -156,7 +184,8 @@ export async function runDropCheck(actor: Actor, raw: unknown): Promise<DropResu
         : {
             value: round(margin, 3),
             basis: dynamicMargin !== null ? 'dynamic' : 'static',
-            verdict: verdictOf(margin),
+            verdict: bound && verdictOf(margin) === 'comfortable' ? 'tight' : verdictOf(margin),
+            upper_bound: Boolean(bound),
           },
     dynamic: limits[0]
       ? {
@@ -165,6 +194,9 @@ export async function runDropCheck(actor: Actor, raw: unknown): Promise<DropResu
           basis: limits[0].basis,
           source: limits[0].source,
           note: limits[0].note,
+          rung: limits[0].rung,
+          observation: limits[0].observation,
+          upper_bound: limits[0].upperBound,
         }
       : null,
     static:
@@ -174,6 +206,7 @@ export async function runDropCheck(actor: Actor, raw: unknown): Promise<DropResu
             margin: round(staticMargin, 3),
             threshold_kpa: f.staticThresholdKpa!.value,
             source: f.staticThresholdKpa!.source,
+            rung: f.staticThresholdKpa!.rung,
           },
     safe_heights: safeHeights(f, fruit, pad, limitsFor),
     series: series(fruit, surface, heightM),

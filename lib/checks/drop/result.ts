@@ -1,4 +1,6 @@
 import { z } from 'zod';
+import { RUNGS } from '@/lib/evidence/rungs';
+import { OBSERVATIONS } from '@/lib/properties/quantities';
 import { fruitUsedShape, pinnedSchema, verdictSchema } from '../used-value';
 
 const n = z.number();
@@ -24,7 +26,13 @@ export const dropResultSchema = z.object({
     max_approach_mm: n,
   }),
   margin: z
-    .object({ value: n, basis: z.enum(['dynamic', 'static']), verdict: verdictSchema })
+    .object({
+      value: n,
+      basis: z.enum(['dynamic', 'static']),
+      verdict: verdictSchema,
+      /** True when the margin is against a height at which fruit bruised (an upper bound). */
+      upper_bound: z.boolean().default(false),
+    })
     .nullable(),
   dynamic: z
     .object({
@@ -33,9 +41,19 @@ export const dropResultSchema = z.object({
       basis: z.string(),
       source: z.string().nullable(),
       note: z.string().nullable(),
+      rung: z.enum(RUNGS).optional(),
+      observation: z.enum(OBSERVATIONS).nullable().optional(),
+      upper_bound: z.boolean().default(false),
     })
     .nullable(),
-  static: z.object({ margin: n, threshold_kpa: n, source: z.string().nullable() }).nullable(),
+  static: z
+    .object({
+      margin: n,
+      threshold_kpa: n,
+      source: z.string().nullable(),
+      rung: z.enum(RUNGS).optional(),
+    })
+    .nullable(),
   safe_heights: z.array(
     z.object({
       surface: z.string(),
@@ -44,6 +62,8 @@ export const dropResultSchema = z.object({
       dynamic_basis: z.string().nullable(),
       dynamic_source: z.string().nullable(),
       dynamic_note: z.string().nullable(),
+      dynamic_rung: z.enum(RUNGS).nullable().optional(),
+      dynamic_upper_bound: z.boolean().nullable().optional(),
       static_safe_height_mm: nn,
     }),
   ),

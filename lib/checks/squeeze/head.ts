@@ -10,7 +10,6 @@ export function squeezeHead(r: ResolvedSqueeze, input: SqueezeCheckInput) {
     pinned: pinnedSummary(r.fruit.pinned),
     inputs_used: {
       ...fruitUsed(r.fruit),
-      axial_diameter_mm: r.axialMm,
       density_kg_m3: r.density,
       friction: r.friction,
       failure_stress_kpa: r.failureStress,

@@ -120,7 +120,6 @@ export const squeezeDescriptor: CheckDescriptor<SqueezeResult> = {
           text: plate ? '—' : undefined,
         },
         { label: 'Pad facing', value: null, unit: '–', text: `${u.facing} (${u.facing_basis})` },
-        { label: 'Axial diameter', value: u.axial_diameter_mm, unit: 'mm' },
         { label: 'Safety factor on weight', value: u.safety_factor, unit: '–' },
         { label: 'Peak acceleration of the move', value: u.acceleration_m_s2, unit: 'm/s²' },
         { label: 'Maximum travel per pad', value: u.max_travel_mm, unit: 'mm' },
@@ -162,7 +161,6 @@ export const squeezeDescriptor: CheckDescriptor<SqueezeResult> = {
       ],
       used: [
         ...fruitUsedRows(u),
-        { label: 'Density', value: u.density_kg_m3 },
         { label: 'Friction', value: u.friction },
         { label: 'Failure stress', value: u.failure_stress_kpa },
       ],

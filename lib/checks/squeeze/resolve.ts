@@ -2,9 +2,10 @@ import 'server-only';
 import { STANDARD_GRAVITY, type SqueezeInput, type Spreads } from '@/fem';
 import type { Actor } from '@/lib/auth/actor';
 import type { SqueezeCheckInput } from '@/lib/checks/inputs';
-import { chooseValue, publishedValue, type UsedValue } from '../cultivar-inputs';
+import { climb } from '@/lib/evidence/ladder';
+import type { UsedValue } from '../used-value';
 import { FACING_PRESETS, frictionSurfacesFor } from '../facings';
-import { resolveFruit, type ResolvedFruit } from '../resolve-fruit';
+import { required, resolveFruit, type ResolvedFruit } from '../resolve-fruit';
 
 export interface ResolvedSqueeze {
   fruit: ResolvedFruit;
@@ -15,37 +16,24 @@ export interface ResolvedSqueeze {
   model: SqueezeInput;
 }
 
-/** Density: typed, published, or the sphere's (spheroid's) mass over its volume. */
-function densityOf(v: SqueezeCheckInput, f: ResolvedFruit, axialMm: number): UsedValue {
-  if (v.densityKgM3 !== undefined)
-    return chooseValue('densityKgM3', 'Density', v.densityKgM3, null, 'kg/m³');
-  const published = publishedValue(f.pinned, 'density');
-  if (published && f.massG.origin !== 'entered') return published;
-  const volume = (Math.PI / 6) * (f.diameterMm.value / 1000) ** 2 * (axialMm / 1000);
-  return {
-    value: Number((f.massG.value / 1000 / volume).toPrecision(4)),
-    unit: 'kg/m³',
-    origin: 'derived',
-    source: `mass ÷ volume of the fruit (${f.massG.source ?? 'entered mass'})`,
-    low: null,
-    high: null,
-    sd: null,
-  };
-}
-
 /** The squeeze case in SI from the form's figures and the cultivar's published ones. */
 export async function resolveSqueeze(actor: Actor, v: SqueezeCheckInput): Promise<ResolvedSqueeze> {
   const fruit = await resolveFruit(actor, v);
-  const axialMm = v.axialMm ?? fruit.diameterMm.value;
-  const density = densityOf(v, fruit, axialMm);
-  const friction = chooseValue(
+  const axialMm = fruit.axialMm.value;
+  const density = fruit.densityKgM3;
+  const friction = required(
+    climb(
+      fruit.evidence,
+      { quantity: 'friction_coefficient', variants: frictionSurfacesFor(v.facing) },
+      { entered: v.friction, unit: '–' },
+    ),
     'friction',
-    'Friction coefficient',
-    v.friction,
-    publishedValue(fruit.pinned, 'friction_coefficient', frictionSurfacesFor(v.facing)),
+    `Friction coefficient against ${FACING_PRESETS[v.facing].label.toLowerCase()}`,
     '–',
+    fruit.evidence,
   );
-  const failureStress = publishedValue(fruit.pinned, 'failure_stress');
+  const failureStress =
+    climb(fruit.evidence, { quantity: 'failure_stress' }, { unit: 'kPa' })?.used ?? null;
   const preset = FACING_PRESETS[v.facing];
   const facingModulus = v.facing === 'custom' ? v.facingModulusMpa : preset.modulusMpa;
   const facingThickness = v.facing === 'custom' ? v.facingThicknessMm : preset.thicknessMm;
@@ -85,9 +73,14 @@ export function sweepDiameters(v: SqueezeCheckInput, diameterMm: number): number
   return Array.from({ length: 12 }, (_, i) => (lo + ((hi - lo) * i) / 11) / 1000);
 }
 
-/** A published value's spread in SI (×scale), as the Monte Carlo takes it; null without one. */
+/**
+ * A used figure's band in SI (×scale), as the Monte Carlo takes it; null without one. The band
+ * follows the evidence: a cultivar's own spread, the spread across the commodity for an inherited
+ * value, the inputs' spreads for a derived one, a wide stated band for a typical one; a typed
+ * figure is taken as exact.
+ */
 function spreadOf(u: UsedValue | null, scale: number) {
-  if (!u || u.origin !== 'published') return null;
+  if (!u || u.rung === 'entered') return null;
   if (u.sd !== null && u.sd > 0) return { sd: u.sd * scale };
   if (u.low !== null && u.high !== null && u.high > u.low)
     return { low: u.low * scale, high: u.high * scale };

@@ -27,7 +27,6 @@ export const squeezeResultSchema = z.object({
   pinned: pinnedSchema,
   inputs_used: z.object({
     ...fruitUsedShape,
-    axial_diameter_mm: n,
     density_kg_m3: usedValueSchema,
     friction: usedValueSchema,
     failure_stress_kpa: usedValueSchema.nullable(),

@@ -2,24 +2,15 @@ import 'server-only';
 import type { Actor } from '@/lib/auth/actor';
 import { parseInput } from '@/lib/validation/parse';
 import { stackCheckSchema } from '@/lib/checks/inputs';
-import { enteredValue, pinnedSummary, publishedValue, type UsedValue } from '../cultivar-inputs';
+import { checkTypical, climb } from '@/lib/evidence/ladder';
+import { pinnedSummary } from '../cultivar-inputs';
 import { fruitUsed, resolveFruit } from '../resolve-fruit';
+import type { UsedValue } from '../used-value';
 import type { StackResult } from './result';
 import { deepestSafeFill, stackAt, type StackSI } from './model';
 import { verdictOf } from '../verdict';
 
 const round = (x: number, digits = 4) => Number(x.toPrecision(digits));
-
-/** A default with no source behind it, used only when neither the user nor the data gives one. */
-const typical = (value: number, why: string): UsedValue => ({
-  value,
-  unit: '–',
-  origin: 'typical default',
-  source: why,
-  low: null,
-  high: null,
-  sd: null,
-});
 
 /** Random loose packing of like spheres fills about 60 % of a bin's volume [from memory]. */
 const PACKING_FRACTION = 0.6;
@@ -29,31 +20,54 @@ export async function runStackCheck(actor: Actor, raw: unknown): Promise<StackRe
   const input = parseInput(stackCheckSchema, raw);
   const f = await resolveFruit(actor, input);
   const p = f.pinned;
-  const fruitDensity =
-    f.massG.value / 1000 / ((4 / 3) * Math.PI * (f.diameterMm.value / 2000) ** 3);
-  const bulk =
-    input.bulkDensityKgM3 !== undefined
-      ? enteredValue(input.bulkDensityKgM3, 'kg/m³')
-      : (publishedValue(p, 'bulk_density') ?? {
-          ...typical(
-            round(PACKING_FRACTION * fruitDensity, 3),
-            `${PACKING_FRACTION * 100} % of the fruit's own density (random loose packing, from memory)`,
-          ),
-          unit: 'kg/m³',
-        });
-  const wall =
-    input.wallFriction !== undefined
-      ? enteredValue(input.wallFriction, '–')
-      : (publishedValue(p, 'friction_coefficient', ['plywood', 'wood']) ??
-        typical(
+  const set = f.evidence;
+  const fruitDensity = f.densityKgM3.value;
+  const bulk: UsedValue = climb(
+    set,
+    { quantity: 'bulk_density' },
+    {
+      entered: input.bulkDensityKgM3,
+      unit: 'kg/m³',
+      fallback: () =>
+        checkTypical(
+          round(PACKING_FRACTION * fruitDensity, 3),
+          'kg/m³',
+          `${PACKING_FRACTION * 100} % of the fruit's own density (random loose packing of like spheres fills 55–64 % of a volume; Scott G.D., Nature 188:908, 1960 [from memory]).`,
+          { low: round(0.55 * fruitDensity, 3), high: round(0.64 * fruitDensity, 3) },
+        ),
+    },
+  )!.used;
+  const wall: UsedValue = climb(
+    set,
+    { quantity: 'friction_coefficient', variants: ['plywood', 'wood', 'hard plastic', 'plastic'] },
+    {
+      entered: input.wallFriction,
+      unit: '–',
+      fallback: () =>
+        checkTypical(0.4, '–', 'wall friction of fruit on a wooden or plastic bin.', {
+          low: 0.25,
+          high: 0.6,
+        }),
+    },
+  )!.used;
+  const ratio: UsedValue = climb(
+    set,
+    { quantity: 'lateral_pressure_ratio' },
+    {
+      entered: input.lateralRatio,
+      unit: '–',
+      fallback: () =>
+        checkTypical(
           0.4,
-          'Typical wall friction of fruit on a wooden bin; no published source for this fruit.',
-        ));
-  const ratio =
-    input.lateralRatio !== undefined
-      ? enteredValue(input.lateralRatio, '–')
-      : (publishedValue(p, 'lateral_pressure_ratio') ??
-        typical(0.4, 'Typical Janssen ratio K for a bulk of round fruit; no published source.'));
+          '–',
+          "Janssen's ratio K for a bulk of round fruit (bin design takes 0.3–0.6).",
+          {
+            low: 0.3,
+            high: 0.6,
+          },
+        ),
+    },
+  )!.used;
   const s: StackSI = {
     length: input.binLengthMm / 1000,
     width: input.binWidthMm / 1000,
@@ -80,7 +94,7 @@ export async function runStackCheck(actor: Actor, raw: unknown): Promise<StackRe
       margin: threshold === null ? null : round(threshold / at.peakPressure, 3),
     };
   });
-  const warnings: string[] = [];
+  const warnings: string[] = [...f.warnings];
   if (threshold === null)
     warnings.push('No static bruise threshold: enter one to get a margin and a safe depth.');
   for (const [name, v] of [
@@ -88,8 +102,10 @@ export async function runStackCheck(actor: Actor, raw: unknown): Promise<StackRe
     ['Wall friction', wall],
     ['Lateral pressure ratio', ratio],
   ] as const) {
-    if (v.origin === 'typical default')
-      warnings.push(`${name} is a typical default (${v.value}), not a measured value: ${v.source}`);
+    if (v.rung === 'typical')
+      warnings.push(
+        `${name} is a typical value (${v.value}), not a measured one: ${v.note ?? v.source}`,
+      );
   }
   return {
     check: 'stack' as const,

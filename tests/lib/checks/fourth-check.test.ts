@@ -20,8 +20,10 @@ const result: RollResult = {
     mass_g: {
       value: 180,
       unit: 'g',
-      origin: 'entered',
+      rung: 'entered',
       source: null,
+      note: null,
+      spread: null,
       low: null,
       high: null,
       sd: null,

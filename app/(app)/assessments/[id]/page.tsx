@@ -64,9 +64,19 @@ export default async function AssessmentReport({ params }: { params: Promise<{ i
             the newer data (the re-run is saved beside this one).
           </p>
         ) : null}
+        {a.newerCommodityRevision ? (
+          <p
+            className="rounded-md bg-amber-50 px-3 py-2 text-amber-900"
+            data-testid="newer-commodity-data"
+          >
+            Revision {a.newerCommodityRevision.number} of the commodity record this result inherited
+            figures from has been published since. Re-run to see the figures with the newer data
+            (the re-run is saved beside this one).
+          </p>
+        ) : null}
         {a.notes ? <p className="whitespace-pre-wrap text-stone-700">{a.notes}</p> : null}
       </div>
-      <ReportActions id={a.id} canRerun={Boolean(a.newerRevision)} />
+      <ReportActions id={a.id} canRerun={Boolean(a.newerRevision || a.newerCommodityRevision)} />
       <MarginPanel hasResult margin={margin} pending={false} basis={marginBasis(report)} />
       <ReportResults report={report} />
       <section className="space-y-1 text-sm text-stone-700">
