@@ -1,8 +1,29 @@
-import type { SeedCommodity } from './types';
+import type { SeedCommodity, SeedValue } from './types';
 import { typicalJanssenK } from './value-helpers';
 
 const CHERRY = 'polat-2007-cherry-tomato';
 const RAMOS = 'stropek-golacki-2022-potato';
+const TEMPEST = 'thomson-lopresti-2008-tomato';
+const BUCCHERI = 'veg-buccheri-cantwell-tomato-slices';
+const IDAHO_STORAGE = 'veg-hendricks-2022-spudman-storage-bruise';
+const SALEH = 'veg-saleh-awolola-irish-potato';
+
+/** A typical value kept only because no published one was found; the note says what was searched. */
+function typical(
+  v: Omit<SeedValue, 'isTypicalDefault' | 'typicalBasis' | 'source'>,
+  basis: 'common practice' | 'from memory',
+): SeedValue {
+  return { ...v, isTypicalDefault: true, typicalBasis: basis, source: null };
+}
+
+const TOMATO_NOT_FOUND =
+  'No published whole-tomato figure found; searched "tomato physical properties density bulk density friction coefficient rubber galvanized", "tomato coefficient of friction rubber steel plywood", "tomato fruit density mass equatorial diameter cultivar" (abstracts read: five Saudi varieties, storage and packaging study, deficit-irrigation study — none prints the value in its abstract).';
+
+const CHERRY_NOT_FOUND =
+  'No published cherry-tomato figure found; searched "cherry tomato Young\'s modulus firmness compression", "cherry tomato compression modulus elasticity rupture force bruise", "cherry tomato drop test damage height surface", "cherry tomato collision damage rubber steel plastic".';
+
+const POTATO_NOT_FOUND =
+  'No published figure read; searched "potato bulk density coefficient of static friction physical properties cultivars", "potato tubers bulk density true density porosity", "Schaper Yaeger coefficients of friction of Irish potatoes" (only cited, not read), "Agria potato bulk density" (the Agria paper measures it but the value is not in the part stored).';
 
 export const VEGETABLES: SeedCommodity[] = [
   {
@@ -19,31 +40,163 @@ export const VEGETABLES: SeedCommodity[] = [
             quantity: 'drop_threshold_height',
             variant: 'steel',
             value: 600,
+            observation: 'bruised-at',
+            stage: 'firm',
             method: 'Laboratory drops onto steel and a pendulum impact rig',
             ripeness: 'Mature green',
-            note: 'Drops above 60 cm onto steel caused internal bruising judged commercially important. Bruise severity already rose with drop height below that, so this is where injury became serious, not a no-bruise height. Coloured fruit (more than 75 % pink to red) bruised and split less.',
-            source: 'thomson-lopresti-2008-tomato',
+            note: 'Drops above 60 cm onto steel caused internal bruising judged commercially important; bruise severity already rose with drop height below that, so fruit bruised at this height: an upper bound, the no-bruise height lies lower (observation changed from a threshold in 2026-12). Coloured fruit (more than 75 % pink to red) bruised and split less.',
+            source: TEMPEST,
           },
         ],
       },
       {
         slug: 'tomato-type',
-        name: 'Tomato (cultivar not named)',
+        name: 'Tomato (commodity record)',
         isType: true,
         values: [
           {
             quantity: 'youngs_modulus',
             variant: 'apparent',
             value: 0.4,
-            note: 'Weak secondary figure: the kind of modulus and the test are not stated.',
+            note: 'Weak secondary figure: the kind of modulus and the test are not stated. No whole-tomato modulus in MPa was found in a stored abstract (searched "tomato fruit Young\'s modulus compression whole fruit", "tomato apparent modulus of elasticity MPa whole fruit parallel plate ripening stage"); the deficit-irrigation study (Misr J. Agric. Eng.) and the Super Bta / Petoerly Ch study measure it but print no value in the abstract.',
             source: 'tomato-secondary-weak',
           },
           {
             quantity: 'poisson_ratio',
             value: 0.3,
-            note: 'Weak secondary figure. A skin study (International Agrophysics 26(1):39–44, 2012) gives Poisson ratios of 0.4–0.8 for the skin of two greenhouse cultivars, falling in storage; skin values above 0.5 lie outside what this catalogue accepts for a bulk Poisson ratio and are not stored.',
+            note: 'Weak secondary figure. The skin study (intagro-2012-tomato-skin) gives Poisson ratios of 0.4–0.8 for the skin of Admiro and Encore, falling in storage, and about 0.5 at room temperature; skin values above 0.5 lie outside what this catalogue accepts for a bulk Poisson ratio and are not stored.',
             source: 'tomato-secondary-weak',
           },
+          typical(
+            {
+              quantity: 'density',
+              value: 1000,
+              low: 940,
+              high: 1100,
+              note: `${TOMATO_NOT_FOUND} A tomato is mostly water and floats or barely sinks in water, so about 1000 kg/m³ is stored with a wide band; the one published figure read is for cherry tomato 'Forme' (1194.1 kg/m³ true density, Polat et al. 2007), a different commodity here.`,
+            },
+            'from memory',
+          ),
+          typical(
+            {
+              quantity: 'diameter',
+              variant: 'equatorial',
+              value: 57,
+              low: 40,
+              high: 67,
+              note: `${TOMATO_NOT_FOUND} Trade size grades for round tomatoes read on a trader's specification page: MMM 40–47 mm, MM 47–57 mm, M 57–67 mm; 57 mm (the MM/M boundary) is stored with the three grades as the band.`,
+            },
+            'common practice',
+          ),
+          typical(
+            {
+              quantity: 'diameter',
+              variant: 'axial',
+              value: 50,
+              low: 35,
+              high: 65,
+              note: `${TOMATO_NOT_FOUND} Round tomatoes are slightly oblate, so the stem-to-blossom height is taken a little below the equatorial diameter.`,
+            },
+            'from memory',
+          ),
+          typical(
+            {
+              quantity: 'mass',
+              value: 100,
+              low: 50,
+              high: 180,
+              note: `${TOMATO_NOT_FOUND} About 100 g is the mass of a sphere of 57 mm at 1000 kg/m³ (computed: π/6 × 5.7³ cm³ ≈ 97 g); the band covers the MMM to M grades.`,
+            },
+            'from memory',
+          ),
+          typical(
+            {
+              quantity: 'bioyield_stress',
+              value: 150,
+              low: 80,
+              high: 300,
+              note: 'No tomato bioyield or failure stress in kPa found in a stored abstract; searched "tomato bioyield stress", "Babarinsa Ige Roma tomatoes bioyield stress" (the Roma study measures stress at bioyield at three ripeness stages but its values are not in the part stored), "Mechanical properties of tomato exocarp, mesocarp and locular gel tissues". Wide band: ripe fruit lie near the low end.',
+            },
+            'from memory',
+          ),
+          typical(
+            {
+              quantity: 'friction_coefficient',
+              variant: 'belt rubber',
+              value: 0.6,
+              low: 0.4,
+              high: 0.9,
+              note: `${TOMATO_NOT_FOUND} Rubber belting grips produce more than metal; stored high with a wide band.`,
+            },
+            'from memory',
+          ),
+          typical(
+            {
+              quantity: 'friction_coefficient',
+              variant: 'steel',
+              value: 0.3,
+              low: 0.1,
+              high: 0.5,
+              note: `${TOMATO_NOT_FOUND} The one published figure read is 0.099 on galvanised steel for cherry tomato 'Forme' (Polat et al. 2007); the band reaches down to it.`,
+            },
+            'from memory',
+          ),
+          typical(
+            {
+              quantity: 'friction_coefficient',
+              variant: 'hard plastic',
+              value: 0.3,
+              low: 0.15,
+              high: 0.5,
+              note: TOMATO_NOT_FOUND,
+            },
+            'from memory',
+          ),
+          {
+            quantity: 'drop_threshold_height',
+            variant: 'steel',
+            value: 600,
+            observation: 'bruised-at',
+            stage: 'firm',
+            ripeness: 'Mature green',
+            method: 'Laboratory drops onto steel and a pendulum impact rig',
+            note: "Measured on 'Tempest'; the commodity record takes it as typical of tomato. Drops above 60 cm onto steel caused commercially important internal bruising and bruising rose with height below that: an upper bound. Related figures whose surface is not named (not stored as drop heights): no rupture but latent damage from falls up to 59 cm, rupture from 1.58 J (first ripening stage) and 0.84 J (third) by pendulum (veg-mohammadi-aylar-2010-tomato, Super Bta and Petoerly-ch); cracking height for 50 % of fruit 150 cm for Roma VF, 100–125 cm for Ibadan Local, 220 cm for NHLe 158-13 (veg-adebooye-2005-tomato-cracking); bruised area at 20, 40 and 60 cm drops, 129.59 / 259.18 / 388.77 mJ (veg-pathare-2023-tomato-drop); a pendulum force equal to two 40 cm drops changed ripening of Roma 'BHN 467' (veg-lee-sargent-huber-2007-roma); breaker fruit of '901' and 'Bobcat' dropped once 1 m onto a 'hard surface' were damaged (veg-buccheri-cantwell-tomato-slices).",
+            source: TEMPEST,
+          },
+          {
+            quantity: 'impact_threshold_energy',
+            variant: 'steel',
+            value: 0.65,
+            observation: 'bruised-at',
+            stage: 'firm',
+            ripeness: 'Breaker',
+            method:
+              'Three impacts of a 67 g steel ball dropped from 99 cm onto the fruit, then ripened at 20 °C',
+            note: "Measured on '901' and 'Bobcat'; the commodity record takes it as typical of tomato. Energy computed by exact arithmetic: 0.067 kg × 9.80665 m/s² × 0.99 m = 0.650 J per impact (three impacts). Fruit so treated were damaged (less firm when ripe, lower lycopene 3.5 against 4.0 mg/kg). The abstract also lists 33 and 66 cm (0.217 and 0.434 J) but does not say whether those damaged the fruit, so they are not stored.",
+            source: BUCCHERI,
+          },
+          typical(
+            {
+              quantity: 'drop_threshold_height',
+              variant: 'padded surface',
+              value: 150,
+              low: 100,
+              high: 300,
+              observation: 'recommended-max',
+              note: `No padded-surface tomato drop limit found in a stored source (searched "tomato drop height bruise threshold surface", "Pathare tomato drop height", "cherry tomato drop test damage height surface"; the Brazilian packing-line study found padding cut impact damage by up to 31 % but gives no height). Handling guides commonly keep drops onto padding to about 15 cm; the band is wide.`,
+            },
+            'common practice',
+          ),
+          typical(
+            {
+              quantity: 'bulk_density',
+              value: 580,
+              low: 450,
+              high: 700,
+              note: `${TOMATO_NOT_FOUND} Cherry tomato 'Forme' gives 464.5 kg/m³ (Polat et al. 2007); larger round fruit pack to a similar void fraction, so a value a little higher is stored with a wide band.`,
+            },
+            'from memory',
+          ),
         ],
       },
     ],
@@ -64,6 +217,13 @@ export const VEGETABLES: SeedCommodity[] = [
             variant: 'equatorial',
             value: 24.95,
             note: 'Fruit diameter; length 21.23 mm, geometric mean diameter 23.80 mm.',
+            source: CHERRY,
+          },
+          {
+            quantity: 'diameter',
+            variant: 'axial',
+            value: 21.23,
+            note: 'Published as the fruit length (stem to blossom end).',
             source: CHERRY,
           },
           {
@@ -89,6 +249,129 @@ export const VEGETABLES: SeedCommodity[] = [
           typicalJanssenK(),
         ],
       },
+      {
+        slug: 'cherry-tomato-type',
+        name: 'Cherry tomato (commodity record)',
+        isType: true,
+        values: [
+          typical(
+            {
+              quantity: 'youngs_modulus',
+              variant: 'apparent',
+              value: 0.4,
+              low: 0.2,
+              high: 1,
+              note: `${CHERRY_NOT_FOUND} Taken at the tomato record's 0.4 MPa with a wide band; small fruit with a tougher skin may read higher.`,
+            },
+            'from memory',
+          ),
+          typical(
+            {
+              quantity: 'poisson_ratio',
+              value: 0.45,
+              low: 0.3,
+              high: 0.49,
+              note: `${CHERRY_NOT_FOUND} Turgid, watery fruit tissue is nearly incompressible, so a value near 0.45 is usual in models.`,
+            },
+            'from memory',
+          ),
+          {
+            quantity: 'density',
+            value: 1194.1,
+            note: "Measured on 'Forme' (true density; the abstract prints the unit as kg/sq m); the commodity record takes it as typical of cherry tomato.",
+            source: CHERRY,
+          },
+          {
+            quantity: 'diameter',
+            variant: 'equatorial',
+            value: 24.95,
+            note: "Measured on 'Forme'; the commodity record takes it as typical of cherry tomato.",
+            source: CHERRY,
+          },
+          {
+            quantity: 'diameter',
+            variant: 'axial',
+            value: 21.23,
+            note: "Published as the fruit length of 'Forme'; the commodity record takes it as typical of cherry tomato.",
+            source: CHERRY,
+          },
+          {
+            quantity: 'mass',
+            value: 8.69,
+            note: "Measured on 'Forme' (greenhouse-grown); the commodity record takes it as typical of cherry tomato.",
+            source: CHERRY,
+          },
+          typical(
+            {
+              quantity: 'bioyield_stress',
+              value: 150,
+              low: 80,
+              high: 300,
+              note: `${CHERRY_NOT_FOUND} Polat et al. 2007 measured "hardness" but the abstract gives no value. Taken at the tomato record's value with the same wide band.`,
+            },
+            'from memory',
+          ),
+          typical(
+            {
+              quantity: 'friction_coefficient',
+              variant: 'belt rubber',
+              value: 0.5,
+              low: 0.3,
+              high: 0.8,
+              note: `${CHERRY_NOT_FOUND} The published figures for 'Forme' are low on hard smooth surfaces (plywood 0.169, glass 0.147, galvanised steel 0.099); rubber grips more, so a higher value is stored with a wide band.`,
+            },
+            'from memory',
+          ),
+          {
+            quantity: 'friction_coefficient',
+            variant: 'galvanised steel',
+            value: 0.099,
+            note: "Measured on 'Forme'; the commodity record takes it as typical of cherry tomato. Low beside other produce: treat as a smooth-skinned, greenhouse value.",
+            source: CHERRY,
+          },
+          typical(
+            {
+              quantity: 'friction_coefficient',
+              variant: 'hard plastic',
+              value: 0.2,
+              low: 0.1,
+              high: 0.4,
+              note: `${CHERRY_NOT_FOUND} Set between the published glass (0.147) and plywood (0.169) values of 'Forme' and higher friction rubber; wide band.`,
+            },
+            'from memory',
+          ),
+          typical(
+            {
+              quantity: 'drop_threshold_height',
+              variant: 'steel',
+              value: 300,
+              low: 150,
+              high: 600,
+              observation: 'recommended-max',
+              note: `${CHERRY_NOT_FOUND} Kept below the 60 cm at which mature-green 'Tempest' tomatoes bruised seriously on steel; a small fruit carries less energy per unit contact area, but ripe cherry tomatoes split easily. Wide band.`,
+            },
+            'from memory',
+          ),
+          typical(
+            {
+              quantity: 'drop_threshold_height',
+              variant: 'padded surface',
+              value: 150,
+              low: 100,
+              high: 300,
+              observation: 'recommended-max',
+              note: `${CHERRY_NOT_FOUND} Handling guides commonly keep drops onto padding to about 15 cm, as for the tomato record.`,
+            },
+            'common practice',
+          ),
+          {
+            quantity: 'bulk_density',
+            value: 464.5,
+            note: "Measured on 'Forme' (the abstract prints the unit as kg/sq m); the commodity record takes it as typical of cherry tomato.",
+            source: CHERRY,
+          },
+        ],
+      },
     ],
   },
   {
@@ -103,17 +386,18 @@ export const VEGETABLES: SeedCommodity[] = [
         values: [
           {
             quantity: 'drop_threshold_height',
-            variant: 'steel',
+            variant: 'rigid plate',
             value: 50,
+            observation: 'bruised-at',
             method: 'Impacts onto a flat rigid plate, filmed with a high-speed camera',
-            note: 'Bruising began at an impact velocity of 1 m/s, given as a bruise threshold drop height of 50 mm onto the rigid plate (filed under steel). Tubers of 160–190 g; restitution coefficient 0.44–0.49 over the velocities tested.',
+            note: 'Bruising began at an impact velocity of 1 m/s, which the paper gives as a bruise threshold drop height of 50 mm (1/(2 × 9.80665) m = 51 mm). It is where bruises first appeared, so stored as bruised-at: the safe height lies just below. The plate material is not named (previously filed under steel, a guessed surface; corrected in 2026-12). Tubers of 160–190 g; restitution coefficient 0.44–0.49 over the velocities tested.',
             source: RAMOS,
           },
           {
             quantity: 'failure_stress',
             value: 900,
             method: 'Impacts onto a flat rigid plate at 1–1.75 m/s',
-            note: 'Maximum impact stress, constant at 0.9 MPa from 1 to 1.75 m/s (a critical-stress criterion for bruising).',
+            note: 'Maximum impact stress, constant at 0.9 MPa from 1 to 1.75 m/s, where bruising had begun (the paper confirms a critical-stress criterion for bruising).',
             source: RAMOS,
           },
           {
@@ -127,25 +411,242 @@ export const VEGETABLES: SeedCommodity[] = [
         ],
       },
       {
+        slug: 'potato-russet-burbank',
+        name: 'Russet Burbank',
+        values: [
+          {
+            quantity: 'impact_threshold_energy',
+            variant: 'steel',
+            value: 0.1744,
+            observation: 'bruised-at',
+            method:
+              'A 100 g steel weight dropped 7 in (177.8 mm) onto the bud and stem ends of each tuber at harvest',
+            temperature: '55 °F (12.8 °C) pulp',
+            note: 'Energy computed by exact arithmetic: 0.1 kg × 9.80665 m/s² × 0.1778 m = 0.1744 J. The impact was chosen to bruise; blackspot incidence, severity and depth rose in the first month of storage, so this is an upper bound. 675 tubers per cultivar.',
+            samples: 675,
+            source: IDAHO_STORAGE,
+          },
+        ],
+      },
+      {
+        slug: 'potato-russet-norkotah',
+        name: 'Russet Norkotah',
+        values: [
+          {
+            quantity: 'impact_threshold_energy',
+            variant: 'steel',
+            value: 0.1744,
+            observation: 'bruised-at',
+            method:
+              'A 100 g steel weight dropped 7 in (177.8 mm) onto the bud and stem ends of each tuber at harvest',
+            temperature: '55 °F (12.8 °C) pulp',
+            note: 'Energy computed by exact arithmetic: 0.1 kg × 9.80665 m/s² × 0.1778 m = 0.1744 J. The impact was chosen to bruise; blackspot incidence, severity and depth rose in the first month of storage, so this is an upper bound. 675 tubers per cultivar.',
+            samples: 675,
+            source: IDAHO_STORAGE,
+          },
+        ],
+      },
+      {
+        slug: 'potato-nicola',
+        name: 'Nicola',
+        values: [
+          {
+            quantity: 'diameter',
+            variant: 'equatorial',
+            value: 37.3,
+            note: 'Published as the mean width; thickness 32.4 mm, volume 42.61 cm³. Tubers grown in Nigeria.',
+            source: SALEH,
+          },
+          {
+            quantity: 'diameter',
+            variant: 'axial',
+            value: 66.5,
+            note: 'Published as the mean length.',
+            source: SALEH,
+          },
+        ],
+      },
+      {
+        slug: 'potato-diamant',
+        name: 'Diamant',
+        values: [
+          {
+            quantity: 'diameter',
+            variant: 'equatorial',
+            value: 35.2,
+            note: 'Published as the mean width; thickness 31.7 mm, volume 34.08 cm³. Tubers grown in Nigeria.',
+            source: SALEH,
+          },
+          {
+            quantity: 'diameter',
+            variant: 'axial',
+            value: 57.4,
+            note: 'Published as the mean length.',
+            source: SALEH,
+          },
+        ],
+      },
+      {
         slug: 'potato-type',
-        name: 'Potato (cultivar not named)',
+        name: 'Potato (commodity record)',
         isType: true,
         values: [
           {
             quantity: 'youngs_modulus',
             variant: 'flesh',
             value: 2,
-            note: 'Recalled as about 2 MPa; filed as flesh, the specimen type is not recalled.',
+            note: 'Recalled, not re-read: about 2 MPa, from Finney & Hall 1967 (a scan of the paper is stored but its tables are not legible in the copy). Filed as flesh since the paper tested cylinders cut from tubers (seen in its figure caption). Kept first: a compressive value of tuber flesh, which the squeeze check needs; the read tensile figure below depends strongly on specimen size and water status.',
             source: 'finney-hall-1967',
+          },
+          {
+            quantity: 'youngs_modulus',
+            variant: 'flesh',
+            value: 19,
+            low: 1.2,
+            high: 19,
+            method:
+              'Uniaxial tension of solid and hollow cylindrical plugs of tuber pith parenchyma',
+            note: 'Tensile modulus: 19 MPa for the largest plugs (2.5 cm² section) near full turgor; it fell to 5 MPa for 0.2 cm² plugs and to 1.2 MPa as water potential dropped from −0.4 to −1.4 MPa. A tensile, size-dependent figure: not the one the checks should take.',
+            source: 'veg-pith-tensile-modulus',
           },
           {
             quantity: 'poisson_ratio',
             value: 0.47,
             low: 0.45,
             high: 0.49,
-            note: 'Recalled as about 0.45–0.49; the value is the middle.',
+            note: 'Recalled, not re-read: about 0.45–0.49 from Finney & Hall 1967; the value is the middle.',
             source: 'finney-hall-1967',
           },
+          typical(
+            {
+              quantity: 'density',
+              value: 1080,
+              low: 1050,
+              high: 1110,
+              note: `${POTATO_NOT_FOUND} Ware potatoes sink in water and are graded by specific gravity, commonly 1.06–1.10; 1080 kg/m³ is stored.`,
+            },
+            'from memory',
+          ),
+          typical(
+            {
+              quantity: 'diameter',
+              variant: 'equatorial',
+              value: 55,
+              low: 40,
+              high: 80,
+              note: `${POTATO_NOT_FOUND} Ware grading commonly passes tubers of about 40–80 mm square mesh; one trade specification read gives 40–60 mm. The published widths read (Nicola 37.3 mm, Diamant 35.2 mm, small Nigerian-grown tubers) lie below the ware range and are kept on those cultivars.`,
+            },
+            'common practice',
+          ),
+          typical(
+            {
+              quantity: 'diameter',
+              variant: 'axial',
+              value: 80,
+              low: 55,
+              high: 120,
+              note: `${POTATO_NOT_FOUND} Tubers are elongated: Nicola and Diamant measure 1.8 and 1.6 times as long as wide (Saleh & Awolola); about 1.5 × the equatorial 55 mm is stored.`,
+            },
+            'from memory',
+          ),
+          {
+            quantity: 'mass',
+            value: 175,
+            low: 160,
+            high: 190,
+            note: "Measured on 'Ramos' (tubers chosen in the 160–190 g class, the value is the middle); the commodity record takes it as typical of potato.",
+            source: RAMOS,
+          },
+          {
+            quantity: 'failure_stress',
+            value: 900,
+            method: 'Impacts onto a flat rigid plate at 1–1.75 m/s',
+            note: "Measured on 'Ramos'; the commodity record takes it as typical of potato. Maximum impact stress, constant at 0.9 MPa once bruising had begun (critical-stress criterion). No static bruise threshold for potato was found; the Spunta study gives bioyield forces of 84.25–114.12 N and rupture forces of 100.90–139.78 N, forces without a contact area (veg-almady-2024-spunta), so not stored as stresses.",
+            source: RAMOS,
+          },
+          typical(
+            {
+              quantity: 'friction_coefficient',
+              variant: 'rubber',
+              value: 0.5,
+              low: 0.35,
+              high: 0.7,
+              note: `${POTATO_NOT_FOUND} The Writtle/Lincoln study (veg-writtle-2012-potato-friction) ranks the dynamic coefficient of single tubers: mild steel lowest (CV 9.8 %), rubber higher (CV 9.3 %, the most consistent across dry, wet, clean and dirty tubers), plastic highest and most variable (CV 19.2 %); soil and water both lowered it; its chart axis runs to 0.7. The values stored keep that ranking.`,
+            },
+            'from memory',
+          ),
+          typical(
+            {
+              quantity: 'friction_coefficient',
+              variant: 'mild steel',
+              value: 0.4,
+              low: 0.25,
+              high: 0.6,
+              note: `${POTATO_NOT_FOUND} Lowest of the three surfaces in the Writtle/Lincoln ranking (veg-writtle-2012-potato-friction); Sante and Marfona tubers also gave their lowest static coefficient on galvanised sheet (Abedi et al., Res. Agr. Eng. 65:77–84, 2019, abstract, values not shown).`,
+            },
+            'from memory',
+          ),
+          typical(
+            {
+              quantity: 'friction_coefficient',
+              variant: 'plastic',
+              value: 0.55,
+              low: 0.3,
+              high: 0.7,
+              note: `${POTATO_NOT_FOUND} Highest but most variable of the three surfaces in the Writtle/Lincoln ranking (veg-writtle-2012-potato-friction): lowest of all for wet dirty tubers, highest for clean dry ones.`,
+            },
+            'from memory',
+          ),
+          {
+            quantity: 'drop_threshold_height',
+            variant: 'rigid plate',
+            value: 50,
+            observation: 'bruised-at',
+            method: 'Impacts onto a flat rigid plate, filmed with a high-speed camera',
+            note: "Measured on 'Ramos' (160–190 g); the commodity record takes it as typical of potato. Bruising began at 1 m/s, given as a 50 mm bruise threshold drop height: bruised at this level, the safe height lies just below. Steel caused the greatest damage among cardboard, wood, steel, plastic and foam in 10–40 cm drops (veg-ejb-2015-potato-impact, no threshold given).",
+            source: RAMOS,
+          },
+          {
+            quantity: 'drop_threshold_height',
+            variant: 'fruit',
+            value: 355.6,
+            observation: 'bruised-at',
+            method:
+              'Drops of an impact recording device onto a bed of potatoes, as reported from a talk',
+            note: 'Published as "you may not see a bruise until a drop of 14 inches" onto potatoes; 14 in × 25.4 = 355.6 mm. Bruise appears at this height: an upper bound. The same talk gives a peak of 80–100 g as about the bruise threshold and "about a two inch drop" (50.8 mm) onto unpadded harvester chain; the chain material is not named, so that figure is not stored as a drop height. Secondary (news report) and instrumented-device based.',
+            source: 'veg-olsen-2021-potato-bruise-talk',
+          },
+          {
+            quantity: 'impact_threshold_energy',
+            variant: 'steel',
+            value: 0.1744,
+            observation: 'bruised-at',
+            method:
+              'A 100 g steel weight dropped 7 in (177.8 mm) onto the bud and stem ends of each tuber at harvest',
+            temperature: '55 °F (12.8 °C) pulp',
+            note: "Measured on 'Russet Burbank' and 'Russet Norkotah'; the commodity record takes it as typical of potato. 0.1 kg × 9.80665 m/s² × 0.1778 m = 0.1744 J, an impact chosen to bruise (an upper bound). Molema et al. 1997 (pendulum) found that lowering impact energy from 0.600 to 0.067 J cut discoloured volume by about 95 % (read second-hand in /work/shared/PROPERTY-SOURCES.md; no threshold given).",
+            source: IDAHO_STORAGE,
+          },
+          {
+            quantity: 'drop_threshold_height',
+            variant: 'concrete',
+            value: 150,
+            observation: 'recommended-max',
+            method:
+              'Boxes and bales of potatoes with an impact recording device, dropped 15–91 cm onto concrete, a plastic slip or a wooden pallet',
+            note: 'The study advises keeping drops of boxed potatoes below 15 cm, especially for the first layer of a pallet stack; bottom-layer tubers of boxes dropped onto concrete or a plastic slip read above 100 g. A box drop, not a bare tuber: for a loose tuber on concrete use the rigid-plate figure above.',
+            source: 'veg-packaged-potato-ird',
+          },
+          typical(
+            {
+              quantity: 'bulk_density',
+              value: 670,
+              low: 600,
+              high: 750,
+              note: `${POTATO_NOT_FOUND} The bin-load sources named in /work/shared/PROPERTY-SOURCES.md (Willson, USDA ARS 52-32, 1968; ASABE EP446) were not read. With a tuber density near 1080 kg/m³ and a void fraction of roughly 0.35–0.4, bulk density lies near 650–700 kg/m³.`,
+            },
+            'from memory',
+          ),
         ],
       },
     ],
