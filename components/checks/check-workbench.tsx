@@ -50,6 +50,7 @@ export function CheckWorkbench<R>({
           margin={report?.margin ?? null}
           pending={pending}
           basis={basis(result)}
+          restsOn={report?.restsOn}
         />
         {result && report ? (
           <>

@@ -12,9 +12,12 @@ export function MarginPanel({
   basis,
   pending,
   hasResult,
+  restsOn,
 }: {
   margin: { value: number; verdict: Verdict } | null;
   basis: string;
+  /** The weakest rung of evidence the verdict rests on, in words. */
+  restsOn?: string | null;
   pending: boolean;
   hasResult: boolean;
 }) {
@@ -42,6 +45,11 @@ export function MarginPanel({
         </p>
       )}
       <p className="mt-2 text-xs">{basis}</p>
+      {restsOn ? (
+        <p className="mt-1 text-xs font-medium" data-testid="rests-on">
+          {restsOn}
+        </p>
+      ) : null}
       <p className="mt-1 text-xs opacity-80">{VERDICT_RULE}</p>
       {pending ? (
         <p className="mt-1 text-xs" role="status">

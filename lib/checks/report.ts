@@ -50,6 +50,8 @@ export interface CheckReport {
   /** The fruit's figures as used: value, rung and source. */
   used: { label: string; value: UsedValue | null }[];
   margin: MarginView | null;
+  /** The weakest rung of evidence the verdict rests on, in words (null for older results). */
+  restsOn: string | null;
   charts: ChartSpec[];
   /** The curves as columns (each named with its unit) and rows. */
   curves: { columns: string[]; rows: (number | null)[][] };

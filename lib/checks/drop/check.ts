@@ -8,6 +8,7 @@ import { citationOf } from '@/lib/evidence/ladder';
 import type { Rung } from '@/lib/evidence/rungs';
 import type { Observation } from '@/lib/properties/quantities';
 import { pinnedSummary } from '../cultivar-inputs';
+import { verdictEvidence } from '../evidence-summary';
 import { fruitUsed, resolveFruit, type ResolvedFruit } from '../resolve-fruit';
 import { DROP_SURFACE_KEYS, DROP_SURFACES, type DropSurface } from '../surfaces';
 import { verdictOf } from '../verdict';
@@ -160,15 +161,17 @@ export async function runDropCheck(actor: Actor, raw: unknown): Promise<DropResu
     );
   }
   const margin = dynamicMargin ?? staticMargin;
+  const inputsUsed = {
+    ...fruitUsed(f),
+    height_mm: input.heightMm,
+    surface: input.surface,
+    surface_basis: DROP_SURFACES[input.surface].basis,
+  };
   return {
     check: 'drop' as const,
     pinned: pinnedSummary(f.pinned),
-    inputs_used: {
-      ...fruitUsed(f),
-      height_mm: input.heightMm,
-      surface: input.surface,
-      surface_basis: DROP_SURFACES[input.surface].basis,
-    },
+    inputs_used: inputsUsed,
+    evidence: verdictEvidence(inputsUsed, limits[0] ? [['dynamic_threshold', limits[0].rung]] : []),
     impact: {
       impact_velocity_m_s: round(impact.velocity),
       impact_energy_j: round(impact.impactEnergy),

@@ -38,6 +38,7 @@ export const dropDescriptor: CheckDescriptor<DropResult> = {
       ],
       used: [...fruitUsedRows(u)],
       margin: r.margin,
+      restsOn: r.evidence?.rests_on ?? null,
       charts: [
         {
           id: 'drop-pressure',

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { evidenceSummarySchema } from '../evidence-summary';
 import { RUNGS } from '@/lib/evidence/rungs';
 import { OBSERVATIONS } from '@/lib/properties/quantities';
 import { fruitUsedShape, pinnedSchema, verdictSchema } from '../used-value';
@@ -69,6 +70,8 @@ export const dropResultSchema = z.object({
   ),
   series: z.array(z.object({ height_mm: n, peak_pressure_kpa: n, impact_energy_j: n })),
   warnings: z.array(z.string()),
+  /** The weakest rung of evidence the verdict rests on (absent in results saved before it). */
+  evidence: evidenceSummarySchema.optional(),
   units: z.record(z.string(), z.string()),
 });
 

@@ -36,9 +36,12 @@ export async function runSqueezeCheck(
         input: r.model,
         sweep: input.sweep ? sweepDiameters(input, r.fruit.diameterMm.value) : null,
         head: squeezeHead(r, input),
-        inputWarnings: r.fruit.staticThresholdKpa
-          ? []
-          : ['No static bruise threshold: enter one to get a bruise margin.'],
+        inputWarnings: [
+          ...r.fruit.warnings,
+          ...(r.fruit.staticThresholdKpa
+            ? []
+            : ['No static bruise threshold on any rung: enter one to get a bruise margin.']),
+        ],
       },
       { signal, affinity: `${bodyKey(r.model)}|${input.mesh}` },
     );

@@ -165,6 +165,7 @@ export const squeezeDescriptor: CheckDescriptor<SqueezeResult> = {
         { label: 'Failure stress', value: u.failure_stress_kpa },
       ],
       margin: r.margin,
+      restsOn: r.evidence?.rests_on ?? null,
       charts: charts(r),
       // Curves as CSV: the force–travel steps of the squeeze (it used to export an empty file).
       curves: curvesOf(r.model.steps, [

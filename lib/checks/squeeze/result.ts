@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { evidenceSummarySchema } from '../evidence-summary';
 import { fruitUsedShape, pinnedSchema, usedValueSchema, verdictSchema } from '../used-value';
 
 const n = z.number();
@@ -88,6 +89,8 @@ export const squeezeResultSchema = z.object({
     })
     .nullable(),
   warnings: z.array(z.string()),
+  /** The weakest rung of evidence the verdict rests on (absent in results saved before it). */
+  evidence: evidenceSummarySchema.optional(),
 });
 
 export type SqueezeResult = z.infer<typeof squeezeResultSchema>;

@@ -4,6 +4,7 @@ import { parseInput } from '@/lib/validation/parse';
 import { stackCheckSchema } from '@/lib/checks/inputs';
 import { checkTypical, climb } from '@/lib/evidence/ladder';
 import { pinnedSummary } from '../cultivar-inputs';
+import { verdictEvidence } from '../evidence-summary';
 import { fruitUsed, resolveFruit } from '../resolve-fruit';
 import type { UsedValue } from '../used-value';
 import type { StackResult } from './result';
@@ -107,18 +108,20 @@ export async function runStackCheck(actor: Actor, raw: unknown): Promise<StackRe
         `${name} is a typical value (${v.value}), not a measured one: ${v.note ?? v.source}`,
       );
   }
+  const inputsUsed = {
+    ...fruitUsed(f),
+    bulk_density_kg_m3: bulk,
+    wall_friction: wall,
+    lateral_pressure_ratio: ratio,
+    fill_depth_mm: input.fillDepthMm,
+    bin_length_mm: input.binLengthMm,
+    bin_width_mm: input.binWidthMm,
+  };
   return {
     check: 'stack' as const,
     pinned: pinnedSummary(p),
-    inputs_used: {
-      ...fruitUsed(f),
-      bulk_density_kg_m3: bulk,
-      wall_friction: wall,
-      lateral_pressure_ratio: ratio,
-      fill_depth_mm: input.fillDepthMm,
-      bin_length_mm: input.binLengthMm,
-      bin_width_mm: input.binWidthMm,
-    },
+    inputs_used: inputsUsed,
+    evidence: verdictEvidence(inputsUsed),
     bottom: {
       vertical_pressure_kpa: round(bottom.verticalPressure / 1000),
       contact_force_n: round(bottom.force),

@@ -39,6 +39,7 @@ export const stackDescriptor: CheckDescriptor<StackResult> = {
         { label: 'Lateral pressure ratio', value: u.lateral_pressure_ratio },
       ],
       margin: r.margin,
+      restsOn: r.evidence?.rests_on ?? null,
       charts: [
         {
           id: 'stack-pressure',

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { evidenceSummarySchema } from '../evidence-summary';
 import { fruitUsedShape, pinnedSchema, usedValueSchema, verdictSchema } from '../used-value';
 
 const n = z.number();
@@ -34,6 +35,8 @@ export const stackResultSchema = z.object({
     }),
   ),
   warnings: z.array(z.string()),
+  /** The weakest rung of evidence the verdict rests on (absent in results saved before it). */
+  evidence: evidenceSummarySchema.optional(),
   units: z.record(z.string(), z.string()),
 });
 

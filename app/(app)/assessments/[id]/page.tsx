@@ -77,7 +77,13 @@ export default async function AssessmentReport({ params }: { params: Promise<{ i
         {a.notes ? <p className="whitespace-pre-wrap text-stone-700">{a.notes}</p> : null}
       </div>
       <ReportActions id={a.id} canRerun={Boolean(a.newerRevision || a.newerCommodityRevision)} />
-      <MarginPanel hasResult margin={margin} pending={false} basis={marginBasis(report)} />
+      <MarginPanel
+        hasResult
+        margin={margin}
+        pending={false}
+        basis={marginBasis(report)}
+        restsOn={report.restsOn}
+      />
       <ReportResults report={report} />
       <section className="space-y-1 text-sm text-stone-700">
         <h2 className="font-semibold">Assumptions</h2>

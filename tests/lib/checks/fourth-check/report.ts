@@ -11,6 +11,7 @@ export const rollDescriptor: CheckDescriptor<RollResult> = {
     figures: [{ label: 'Rolling speed', value: r.speed_m_s, unit: 'm/s' }],
     used: [{ label: 'Mass', value: r.inputs_used.mass_g }],
     margin: r.margin,
+    restsOn: null,
     charts: [
       {
         id: 'roll-speed',
