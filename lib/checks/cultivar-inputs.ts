@@ -2,6 +2,7 @@ import 'server-only';
 import type { Actor } from '@/lib/auth/actor';
 import { getCultivar, listPublishedCultivars } from '@/lib/data/cultivars';
 import type { EvidenceSet } from '@/lib/evidence/ladder';
+import { evidenceForRecords } from './evidence-set';
 import type { Stage } from '@/lib/properties/quantities';
 import type { CultivarRecord } from '@/lib/properties/records';
 import { NotFoundError, ValidationError } from '@/lib/errors';
@@ -32,23 +33,6 @@ const pinOf = (r: CultivarRecord): PinnedRecord | null =>
   r.published
     ? { slug: r.slug, name: r.name, revisionId: r.published.id, revisionNumber: r.published.number }
     : null;
-
-/** The evidence a record has: its own values, its commodity record's, and every record's. */
-export function evidenceFor(
-  record: CultivarRecord,
-  all: CultivarRecord[],
-  stage: Stage | null,
-): EvidenceSet {
-  const type = all.find((r) => r.isType && r.commodity.id === record.commodity.id);
-  const mine = all.filter((r) => r.commodity.id === record.commodity.id);
-  return {
-    commodityName: record.commodity.name,
-    own: record.isType ? [] : record.values,
-    commodity: record.isType ? record.values : (type?.values ?? []),
-    across: mine.map((r) => r.values),
-    stage,
-  };
-}
 
 /** The pinned revisions as a check's answer names them (so an assessment can reproduce it). */
 export function pinnedSummary(p: PinnedCultivar | null) {
@@ -100,6 +84,6 @@ export async function pinCultivar(
     isCommodityRecord: record.isType,
     commodityRecord: type ? pinOf(type) : null,
     stage,
-    evidence: evidenceFor(record, all, stage),
+    evidence: evidenceForRecords(record, all, stage),
   };
 }

@@ -3,7 +3,7 @@ import type { Actor } from '@/lib/auth/actor';
 import { listPublishedCultivars } from '@/lib/data/cultivars';
 import type { Rung } from '@/lib/evidence/rungs';
 import { ValidationError } from '@/lib/errors';
-import { evidenceFor } from './cultivar-inputs';
+import { evidenceForRecords } from './evidence-set';
 import { fruitFromEvidence } from './resolve-fruit';
 import type { UsedValue } from './used-value';
 
@@ -30,7 +30,7 @@ export async function cultivarOptions(actor: Actor) {
     let prefill: CultivarPrefill = {};
     let complete = true;
     try {
-      const f = fruitFromEvidence(null, evidenceFor(c, records, null), {});
+      const f = fruitFromEvidence(null, evidenceForRecords(c, records, null), {});
       prefill = {
         modulusMpa: figure(f.modulusMpa),
         poisson: figure(f.poisson),

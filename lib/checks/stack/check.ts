@@ -2,73 +2,22 @@ import 'server-only';
 import type { Actor } from '@/lib/auth/actor';
 import { parseInput } from '@/lib/validation/parse';
 import { stackCheckSchema } from '@/lib/checks/inputs';
-import { checkTypical, climb } from '@/lib/evidence/ladder';
 import { pinnedSummary } from '../cultivar-inputs';
 import { verdictEvidence } from '../evidence-summary';
 import { fruitUsed, resolveFruit } from '../resolve-fruit';
-import type { UsedValue } from '../used-value';
 import type { StackResult } from './result';
 import { deepestSafeFill, stackAt, type StackSI } from './model';
 import { verdictOf } from '../verdict';
+import { stackFigures } from './figures';
 
 const round = (x: number, digits = 4) => Number(x.toPrecision(digits));
-
-/** Random loose packing of like spheres fills about 60 % of a bin's volume [from memory]. */
-const PACKING_FRACTION = 0.6;
 
 /** The stack check: Janssen's wall-friction law down the bin, Hertz at the bottom contact. */
 export async function runStackCheck(actor: Actor, raw: unknown): Promise<StackResult> {
   const input = parseInput(stackCheckSchema, raw);
   const f = await resolveFruit(actor, input);
   const p = f.pinned;
-  const set = f.evidence;
-  const fruitDensity = f.densityKgM3.value;
-  const bulk: UsedValue = climb(
-    set,
-    { quantity: 'bulk_density' },
-    {
-      entered: input.bulkDensityKgM3,
-      unit: 'kg/m³',
-      fallback: () =>
-        checkTypical(
-          round(PACKING_FRACTION * fruitDensity, 3),
-          'kg/m³',
-          `${PACKING_FRACTION * 100} % of the fruit's own density (random loose packing of like spheres fills 55–64 % of a volume; Scott G.D., Nature 188:908, 1960 [from memory]).`,
-          { low: round(0.55 * fruitDensity, 3), high: round(0.64 * fruitDensity, 3) },
-        ),
-    },
-  )!.used;
-  const wall: UsedValue = climb(
-    set,
-    { quantity: 'friction_coefficient', variants: ['plywood', 'wood', 'hard plastic', 'plastic'] },
-    {
-      entered: input.wallFriction,
-      unit: '–',
-      fallback: () =>
-        checkTypical(0.4, '–', 'wall friction of fruit on a wooden or plastic bin.', {
-          low: 0.25,
-          high: 0.6,
-        }),
-    },
-  )!.used;
-  const ratio: UsedValue = climb(
-    set,
-    { quantity: 'lateral_pressure_ratio' },
-    {
-      entered: input.lateralRatio,
-      unit: '–',
-      fallback: () =>
-        checkTypical(
-          0.4,
-          '–',
-          "Janssen's ratio K for a bulk of round fruit (bin design takes 0.3–0.6).",
-          {
-            low: 0.3,
-            high: 0.6,
-          },
-        ),
-    },
-  )!.used;
+  const { bulk, wall, ratio } = stackFigures(f.evidence, f.densityKgM3.value, input);
   const s: StackSI = {
     length: input.binLengthMm / 1000,
     width: input.binWidthMm / 1000,
