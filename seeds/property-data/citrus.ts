@@ -170,6 +170,14 @@ export const CITRUS: SeedCommodity[] = [
             note: "Lowest and highest mean punch stress over five cultivars ('Valencia', 'March', 'Washington Navel', 'Blood', local Jiroft) and seven punch diameters: 0.3 and 1.5 MPa, stored as 300 and 1500 kPa. The lowest is stored because a check should take the weakest fruit; the stored abstract breaks off before naming the punch of each extreme. A punch (penetration) stress through the peel, not a no-bruise contact pressure: a bruise threshold under a broad contact lies lower.",
             source: PUNCH,
           },
+          typical(
+            'static_bruise_threshold',
+            '',
+            150,
+            [75, 300],
+            'from memory',
+            "Half the lowest mean punch stress of five orange cultivars (0.3 MPa through the peel, 'ct-orange-punch-jiroft'), the band reaching that stress: a broad held contact bruises below the stress at which a punch breaks the peel. Read as forces only (no contact area): satsuma juice sacs broke above 4 kg of quasi-static load ('ct-satsuma-packing-injury'). Tarocco oranges: repeated impacts on steel altered the struck spot ('ct-cerruto-2003-orange'). Searched: 'orange bioyield stress kPa compression', 'orange fruit Young's modulus Poisson ratio compression', 'Valencia orange firmness compression bruise threshold'; Singh & Reddy 2006 (J. Food Eng. 73:112–120) measured a bioyield point, with no number in the abstract.",
+          ),
           graded(
             'friction_coefficient',
             'mild steel',
@@ -323,12 +331,12 @@ export const CITRUS: SeedCommodity[] = [
             source: HORTFLORA,
           },
           typical(
-            'failure_stress',
+            'static_bruise_threshold',
             '',
-            300,
-            [150, 1500],
+            120,
+            [50, 300],
             'from memory',
-            `No mandarin value was found; the orange punch-test stresses (0.3–1.5 MPa, 'ct-orange-punch-jiroft') bound it, and the lowest is kept. A punch stress, not a no-bruise contact pressure. ${CITRUS_SEARCHED}`,
+            "No mandarin pressure threshold found. Satsuma (M size) under quasi-static load: juice sacs broke above 4 kg (2 kg with rotation), locular membranes above 8 kg, the peel above 10 kg ('ct-satsuma-packing-injury'); pulp damage once compression exceeded 8 mm (Tian, Chen & Li 2024, Foods 13(6):892, read in the abstract) — forces and deformations, not pressures. Kept below orange's typical 150 kPa (looser peel); the lowest orange punch stress, 0.3 MPa, caps the band. Searched: 'mandarin fruit mechanical properties rupture force modulus', 'Kinnow mandarin compression bioyield', 'Satsuma mandarin compression peel puncture'.",
           ),
           {
             quantity: 'friction_coefficient',

@@ -79,4 +79,23 @@ export const CITRUS_TROPICAL_SOURCES: SeedSource[] = [
     url: 'https://doaj.org/article/ced2f28c0c6d404390cac3b901b18100',
     note: "Read in the abstract on the DOAJ page; authors not shown. Cultivars 'Seeni', 'Embul' and 'Kolikuttu' at harvest maturity; bulk density, static friction on wood, steel and Styrofoam were measured but the abstract gives no numbers for them (lowest friction on Styrofoam, highest on wood).",
   },
+  {
+    key: 'ct-satsuma-packing-injury',
+    kind: 'paper',
+    authors: null,
+    year: null,
+    title:
+      'Mechanical injury of satsuma mandarin fruit in sorting, washing and packing (title not shown on the page read; described from its abstract)',
+    url: 'https://discovery.researcher.life/article/-1/256a32636205383192fc445ea9ddbfb3',
+    note: 'Read in the abstract on an index page; title, authors, journal and year not shown there. M-sized satsuma fruit under quasi-static loads: peel rupture above 10 kg, locular membranes above 8 kg, juice sacs above 4 kg (2 kg with rotation). Forces only, no contact area.',
+  },
+  {
+    key: 'ct-cerruto-2003-orange',
+    kind: 'paper',
+    authors: 'Cerruto, E.; Manetto, G.',
+    year: 2003,
+    title: 'Mechanical damage to oranges caused by repeated impact against steel',
+    url: 'https://www.iris.unict.it/handle/20.500.11769/72680',
+    note: "Read in the abstract (university repository page); venue not shown. 'Tarocco' oranges dropped onto steel from heights comparable with packing lines; the abstract gives no heights.",
+  },
 ];
