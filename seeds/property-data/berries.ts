@@ -250,6 +250,16 @@ export const BERRIES: SeedCommodity[] = [
           ),
           {
             quantity: 'drop_threshold_height',
+            variant: 'rigid plate',
+            value: 150,
+            method:
+              'Drop tests of single berries onto a hard surface and onto cushioning materials',
+            observation: 'bruised-at',
+            note: "Published as: extensive bruising resulted when the drop height to a hard surface exceeded 150 mm (6 in.); cushioning materials prevented bruising for drops as great as 0.6 to 1.2 m. Stored as an upper bound (fruit bruised above it; the no-bruise height lies at or below it). The abstract names no material: 'a hard surface' (uncushioned, set against the cushioning materials) is filed under rigid plate. Cultivar not named for the drop test ('Bluecrop' in the harvest tests). Put first: the only blueberry figure onto an uncushioned surface of unnamed material.",
+            source: 'berry-brown-1996-blueberry',
+          },
+          {
+            quantity: 'drop_threshold_height',
             variant: 'wood',
             value: 406,
             method: 'Drops onto hard boards, in increments of 10.2 cm (4 in) or 40.6 cm (16 in)',

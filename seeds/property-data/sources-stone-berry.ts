@@ -122,6 +122,17 @@ export const STONE_BERRY_SOURCES: SeedSource[] = [
     note: 'Read in the abstract (scilit.com). Authors not shown there; first author read second-hand in the reference list of Ferreira et al. 2008 (globalauthorid.com record).',
   },
   {
+    key: 'berry-brown-1996-blueberry',
+    kind: 'paper',
+    authors: null,
+    year: 1996,
+    title: 'Estimates of mechanization effects on fresh blueberry quality',
+    venue: 'Applied Engineering in Agriculture 12(1)',
+    pages: '21–26',
+    url: 'https://eurekamag.com/research/002/831/002831282.php',
+    note: 'Read in the abstract (eurekamag.com record); authors not shown for the journal article. The same record lists an ASAE paper of the same title (paper 931602, 1993) by Brown, G.; Schulte, N.; Peterson, D.; Timm, E.; Beaudry, R.; Hancock, J.; Takeda, F., presumably the same team.',
+  },
+  {
     key: 'berry-strawberry-mass-web',
     kind: 'secondary',
     authors: null,

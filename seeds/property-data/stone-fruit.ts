@@ -100,6 +100,30 @@ const VERGANO_STEEL: SeedValue = {
   source: 'vergano-1991-peach-bruising',
 };
 
+/**
+ * The static friction of nectarine 'Independence' on aluminium and wood (the galvanised-sheet
+ * figure is not in the abstract): the only stone-fruit friction read, put first so the squeeze
+ * (aluminium, a rigid pad) and the bin wall (wood) take it before the typical values below.
+ */
+const independenceFriction = (note: string): SeedValue[] =>
+  (
+    [
+      [
+        'aluminium',
+        0.321,
+        'the lowest of the three surfaces tested (wood, aluminium, galvanised sheet)',
+      ],
+      ['wood', 0.389, 'the highest of the three surfaces tested'],
+    ] as const
+  ).map(([variant, value, which]) => ({
+    quantity: 'friction_coefficient',
+    variant,
+    value,
+    method: 'Static coefficient of friction, whole fruit on the surface',
+    note: `Static coefficient, ${which}. ${note}`,
+    source: NECTARINE,
+  }));
+
 export const STONE_FRUIT: SeedCommodity[] = [
   {
     slug: 'peach',
@@ -156,6 +180,9 @@ export const STONE_FRUIT: SeedCommodity[] = [
             250,
             'from memory',
             "No peach static bruise pressure, bioyield or failure stress found (searched: 'peach bruise threshold', 'Dixred peach rupture stress', 'peach failure stress bioyield kPa'). Published only as forces: a 44 N load held 1 min bruised peaches (Vergano et al. 1991; no contact area given), and 'Dixred' peaches could be packed 13–16 layers deep at harvest but only 4–6 after 28 days at 0 °C (stone-tubitak-2003-dixred-peach). Stored near the apple figure (100 kPa); ripe peaches bruise far lower.",
+          ),
+          ...independenceFriction(
+            "Measured on the nectarine 'Independence' (Prunus persica var. nucipersica, the same species as peach), not on peach: no peach friction coefficient was found (searched: 'peach coefficient of friction rubber steel', 'peach cultivars physical properties static coefficient of friction galvanized rubber plywood', 'peach bulk density porosity static friction angle'); kept as the nearest published figure, as the nectarine record keeps the peach steel-plate drop.",
           ),
           ...typicalFriction(
             'peach',
@@ -317,6 +344,9 @@ export const STONE_FRUIT: SeedCommodity[] = [
             250,
             'from memory',
             "No nectarine static bruise pressure, bioyield or failure stress found (searched: 'nectarine bruise threshold', 'nectarine physical mechanical properties'). Taken as for peach.",
+          ),
+          ...independenceFriction(
+            "Measured on 'Independence'; the commodity record takes it as typical of nectarine.",
           ),
           ...typicalFriction(
             'nectarine',
