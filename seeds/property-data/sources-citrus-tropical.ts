@@ -98,4 +98,24 @@ export const CITRUS_TROPICAL_SOURCES: SeedSource[] = [
     url: 'https://www.iris.unict.it/handle/20.500.11769/72680',
     note: "Read in the abstract (university repository page); venue not shown. 'Tarocco' oranges dropped onto steel from heights comparable with packing lines; the abstract gives no heights.",
   },
+  {
+    key: 'ct-grand-nain-banana-mass',
+    kind: 'secondary',
+    authors: null,
+    year: null,
+    title: 'Modelling the mass of banana fruit by geometrical attributes',
+    url: 'http://hemmingter.com/essay-on/modelling-the-mass-of-banana-fruit-by-geometrical-attributes',
+    note: "Read in the stored full page, a copy of the paper's results on an essay site: Table 1, physical properties of banana var. Grand Nain (mean, SD, min, max, SE, CV). Authors, journal and year not shown on the copy; kept as a secondary source until the original is found.",
+  },
+  {
+    key: 'ct-abidin-2019-nipah',
+    kind: 'paper',
+    authors: "A'bidin, F. N. Z.; Shamsudin, R.; Basri, M. S. M.; Dom, Z. M.",
+    year: 2019,
+    title:
+      'Physical and Mechanical Properties of Unripe Nipah Banana Fruit (Musa acuminata balbisiana)',
+    venue: 'Pertanika Journal of Science and Technology 27',
+    url: 'http://120.26.44.124:3004/details/1/913742764',
+    note: 'Read in the abstract on an index page. Unripe fruit over five days of ripening; penetration force 6.4–8.3 N (probe not given in the abstract) and whole-fruit compressive force about 1.4–1.7 kN, neither stored.',
+  },
 ];

@@ -6,6 +6,8 @@ const NEGRIN = 'ct-negrin-2013-mango';
 const KP = 'ct-daf-kensington-pride';
 const ORHEVBA = 'ct-orhevba-2011-avocado';
 const SRILANKA = 'ct-srilanka-banana-2015';
+const GRAND_NAIN = 'ct-grand-nain-banana-mass';
+const NIPAH = 'ct-abidin-2019-nipah';
 
 /** What the tropical searches covered, for the notes of the typical values. */
 const SEARCHED = (fruit: string, queries: string) =>
@@ -235,6 +237,15 @@ export const TROPICAL: SeedCommodity[] = [
             "Measured on 'Carabao'; the commodity record takes it as typical of mango.",
           ),
           typical(
+            'drop_threshold_height',
+            'rigid plate',
+            200,
+            [100, 260],
+            'common practice',
+            "Kept below the published maximum for 'Carabao' of 0.26 m onto carton, plastic or solid ground ('pas-carabao-rheology', stored above): a steel or other rigid plate is harder than any of those, so a lower height is taken. Carabao fruit dropped 0.5–1.5 m bruised more as height rose (Lacap et al. 2021, Philipp. J. Sci. 150(6B), read in the abstract; surface not named). Searched: 'mango fruit drop test steel plate bruise height', 'mango bruise drop height impact threshold'; no mango drop onto a rigid surface was found.",
+            { observation: 'recommended-max' },
+          ),
+          typical(
             'bulk_density',
             '',
             500,
@@ -446,6 +457,82 @@ export const TROPICAL: SeedCommodity[] = [
         ],
       },
       {
+        slug: 'banana-grand-nain',
+        name: 'Grand Nain',
+        values: [
+          {
+            quantity: 'mass',
+            value: 139.65,
+            sd: 7.66,
+            low: 126.05,
+            high: 154.29,
+            note: 'Table 1 (mean, SD, min, max).',
+            source: GRAND_NAIN,
+          },
+          {
+            quantity: 'density',
+            value: 1030,
+            sd: 30,
+            low: 980,
+            high: 1110,
+            note: 'Table 1: fruit (true) density 1.03 ± 0.03 g/cm³, min 0.98, max 1.11; × 1000 = kg/m³.',
+            source: GRAND_NAIN,
+          },
+          {
+            quantity: 'bulk_density',
+            value: 410,
+            sd: 30,
+            low: 350,
+            high: 460,
+            note: 'Table 1: bulk density 0.41 ± 0.03 g/cm³, min 0.35, max 0.46; × 1000 = kg/m³.',
+            source: GRAND_NAIN,
+          },
+          {
+            quantity: 'diameter',
+            variant: 'axial',
+            value: 169.9,
+            sd: 7.1,
+            low: 154.5,
+            high: 182,
+            note: 'Table 1: length 16.99 ± 0.71 cm (min 15.45, max 18.20); × 10 = mm.',
+            source: GRAND_NAIN,
+          },
+          {
+            quantity: 'diameter',
+            variant: 'equatorial',
+            value: 37.8,
+            sd: 0.8,
+            low: 36.1,
+            high: 39.1,
+            note: 'Table 1: width 3.78 ± 0.08 cm (min 3.61, max 3.91); × 10 = mm. The thickness was 3.50 cm.',
+            source: GRAND_NAIN,
+          },
+        ],
+      },
+      {
+        slug: 'banana-nipah',
+        name: 'Nipah',
+        values: [
+          {
+            quantity: 'mass',
+            value: 77.85,
+            sd: 28.61,
+            ripeness: 'Unripe',
+            note: 'Average weight of unripe fruit.',
+            source: NIPAH,
+          },
+          {
+            quantity: 'diameter',
+            variant: 'equatorial',
+            value: 38.78,
+            sd: 5.77,
+            ripeness: 'Unripe',
+            note: 'Published as average diameter 38.78 ± 5.77 mm × 29.25 ± 4.92 mm; the larger cross-section dimension is stored.',
+            source: NIPAH,
+          },
+        ],
+      },
+      {
         slug: 'banana-type',
         name: 'Banana (commodity record)',
         isType: true,
@@ -487,14 +574,15 @@ export const TROPICAL: SeedCommodity[] = [
             note: "Finger length measured on 'Embul' and 'Seeni' (10.5 ± 0.86 cm each, × 10 = 105 mm); the commodity record takes it as typical of banana. 'Kolikuttu' gave 143 mm.",
             source: SRILANKA,
           },
-          typical(
-            'mass',
-            '',
-            150,
-            [100, 250],
-            'from memory',
-            `A single Cavendish-type finger is commonly 100–250 g. ${SEARCHED('banana', BANANA_Q)}`,
-          ),
+          {
+            quantity: 'mass',
+            value: 139.65,
+            sd: 7.66,
+            low: 126.05,
+            high: 154.29,
+            note: "Measured on 'Grand Nain' (Table 1 of the source); the commodity record takes it as typical of banana. Unripe 'Nipah' fingers weighed 77.85 ± 28.61 g ('ct-abidin-2019-nipah').",
+            source: GRAND_NAIN,
+          },
           typical(
             'static_bruise_threshold',
             '',
@@ -545,14 +633,15 @@ export const TROPICAL: SeedCommodity[] = [
             `Bananas are packed in hands in padded cartons; handling guides commonly cap drops at about 30 cm. ${SEARCHED('banana', BANANA_Q)}`,
             { observation: 'recommended-max' },
           ),
-          typical(
-            'bulk_density',
-            '',
-            400,
-            [300, 550],
-            'common practice',
-            `Curved fingers and hands pack loosely. The Sri Lankan study found the bulk density of fruits and hands higher than that of whole bunches but gives no number in its abstract. ${SEARCHED('banana', BANANA_Q)}`,
-          ),
+          {
+            quantity: 'bulk_density',
+            value: 410,
+            sd: 30,
+            low: 350,
+            high: 460,
+            note: "Measured on 'Grand Nain' fingers (Table 1: 0.41 ± 0.03 g/cm³, × 1000 = kg/m³); the commodity record takes it as typical of banana. The Sri Lankan study ('ct-srilanka-banana-2015') found the bulk density of fruits and hands higher than that of whole bunches but gives no number in its abstract.",
+            source: GRAND_NAIN,
+          },
         ],
       },
     ],
