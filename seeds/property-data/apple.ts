@@ -10,6 +10,8 @@ const VURSAVUS = 'pome-vursavus-1999-apple';
 const KJFP = 'pome-kjfp-apple-size';
 const WA_GRADES = 'pome-wa-apple-grades';
 const STORED_TENSILE = 'pome-stored-apples-tensile';
+const ARSHAD = 'pome-arshad-2017-apple-geometry';
+const FUJI_PICKING = 'pome-apple-picking-damage-fuji';
 
 /** Ultimate tensile strength of flesh specimens, at harvest and after 18 weeks in cool store. */
 const storedTensile = (): SeedValue[] =>
@@ -210,6 +212,23 @@ export const APPLE: SeedCommodity = {
       name: 'Fuji',
       values: [
         {
+          quantity: 'youngs_modulus',
+          variant: 'flesh',
+          value: 2.091,
+          method: 'Compression of flesh cubes on a CMT6502 universal testing machine',
+          ripeness: 'Ripe (mature) fruit',
+          note: "Published for 'Red Fuji' as the compressive elastic modulus, 2.091 MPa, from a compression model of the cubes; the abstract adds that the modulus stayed within 5–7 MPa while the cubes were compressed (a tangent figure, not stored).",
+          source: FUJI_PICKING,
+        },
+        {
+          quantity: 'bioyield_stress',
+          value: 125,
+          method: 'Compression of flesh cubes on a CMT6502 universal testing machine',
+          ripeness: 'Ripe (mature) fruit',
+          note: "Published for 'Red Fuji' as the lower yield limit, 0.125 MPa (× 1000 = 125 kPa), beyond which the cubes deformed faster; the maximum elastic limit was 0.130 MPa. Flesh specimens, not whole fruit.",
+          source: FUJI_PICKING,
+        },
+        {
           quantity: 'mass',
           value: 267,
           low: 174,
@@ -320,24 +339,34 @@ export const APPLE: SeedCommodity = {
         {
           quantity: 'diameter',
           variant: 'equatorial',
-          value: 75,
-          low: 60,
-          high: 90,
-          note: "Typical value, not published: no source read this session gives an apple's equatorial diameter by axis (the 'Golab' study gives 35–65 mm without naming the axis, for small 75 g fruit). Searched: 'apple physical properties length width thickness mass density', 'Golden Delicious apple mean mass equatorial diameter'. Dessert apples are commonly sized about 60–90 mm across; 75 mm matches a fruit of about 200–270 g at 850–880 kg/m³.",
-          isTypicalDefault: true,
-          typicalBasis: 'from memory',
-          source: null,
+          value: 66,
+          low: 65,
+          high: 67,
+          samples: 270,
+          method:
+            'Fruit width measured on 270 fruits (3 cultivars × 3 tree ages × 2 canopy positions)',
+          note: "Published as a width of 6.5–6.7 cm (× 10 = 65–67 mm), the range of the means over 'Golden Delicious', 'Red Crispy' and 'Red Delicious', tree ages and sun/shade sides; the commodity record takes the middle as typical of apple. Thickness (the other cross axis) 6.3–6.6 cm.",
+          source: ARSHAD,
         },
         {
           quantity: 'diameter',
           variant: 'axial',
-          value: 68,
-          low: 55,
-          high: 85,
-          note: 'Typical value, not published (searched as for the equatorial diameter). Apples are usually a little shorter stem-to-calyx than across; 68 mm is about 0.9 × the typical equatorial 75 mm.',
-          isTypicalDefault: true,
-          typicalBasis: 'from memory',
-          source: null,
+          value: 61,
+          low: 60,
+          high: 62,
+          samples: 270,
+          method: 'Fruit length (stem–calyx) measured on 270 fruits',
+          note: "Published as a length of 6.0–6.2 cm (× 10 = 60–62 mm) over 'Golden Delicious', 'Red Crispy' and 'Red Delicious'; the value is the middle. Apples are a little shorter than wide here (aspect ratio 0.91–0.95).",
+          source: ARSHAD,
+        },
+        {
+          quantity: 'mass',
+          value: 135.5,
+          low: 134,
+          high: 137,
+          samples: 270,
+          note: "Published as a weight of 134–137 g over 'Golden Delicious', 'Red Crispy' and 'Red Delicious' (the same fruits as the diameters above, so size and mass agree); the value is the middle. Taken before the 'Fuji' class figure below, which is for larger fruit.",
+          source: ARSHAD,
         },
         {
           quantity: 'mass',
@@ -351,6 +380,18 @@ export const APPLE: SeedCommodity = {
         frictionFromAngle(
           'galvanised steel',
           20,
+          GOLAB,
+          "Measured on 'Golab'; the commodity record takes it as typical of apple.",
+        ),
+        frictionFromAngle(
+          'plywood',
+          26.8,
+          GOLAB,
+          "Measured on 'Golab'; the commodity record takes it as typical of apple (the bin wall figure).",
+        ),
+        frictionFromAngle(
+          'glass',
+          26.3,
           GOLAB,
           "Measured on 'Golab'; the commodity record takes it as typical of apple.",
         ),
@@ -393,7 +434,7 @@ export const APPLE: SeedCommodity = {
           low: 10,
           high: 30,
           observation: 'recommended-max',
-          note: "Typical value, not published: no no-bruise drop height onto a named hard surface was readable. Found instead: Komarnicki & Stopa 2013 (Inż. Roln. 3(146)) estimate 30 mm as not causing plastic deformation, on a pendulum whose impact surface is not named; Pang et al. 1994 (Trans. ASAE 37(3)) give per-cultivar heights for a 100 mm² bruise onto steel, rubber and plastic, not visible in the abstract (tested range 6–143 mm); 'Jazz' apples struck by a bare aluminium plate did not bruise at 22 N peak force (Fu et al. 2017), a force, not a height; 'Royal Gala' bruising began at about 0.08 J on a pendulum whose impactor is not named (Shen & Shan, UBC student report, weak); in apple-to-apple drops bruising was rare where the contact area stayed below 1 cm² (Pang et al. 1992). 20 mm is kept below the 30 mm estimate.",
+          note: "Typical value, not published: no no-bruise drop height onto a named hard surface was readable. Found instead: Komarnicki & Stopa 2013 (Inż. Roln. 3(146)) estimate 30 mm as not causing plastic deformation, on a pendulum whose impact surface is not named; Pang et al. 1994 (Trans. ASAE 37(3)) give per-cultivar heights for a 100 mm² bruise onto steel, rubber and plastic, not visible in the abstract (tested range 6–143 mm); 'Jazz' apples struck by a bare aluminium plate did not bruise at 22 N peak force (Fu et al. 2017), a force, not a height; 'Royal Gala' bruising began at about 0.08 J on a pendulum whose impactor is not named (Shen & Shan, UBC student report, weak); apple-to-apple drops rarely bruised below 1 cm² contact (Pang et al. 1992); apples dropped 1400 mm onto metal (kind not named) bruised, about 951 mm² (Unuigbe & Onuoha), an upper bound too high to guide a check. 20 mm is kept below the 30 mm estimate.",
           isTypicalDefault: true,
           typicalBasis: 'from memory',
           source: null,

@@ -3,6 +3,9 @@ import { storageModulus, typicalJanssenK } from './value-helpers';
 
 const STORAGE_STUDY = 'tjaf-pear-apple-storage';
 const UCD_BARTLETT = 'pome-ucd-bartlett';
+const SU_PEAR = 'pome-ouyang-2019-su-pear';
+const SU_METHOD =
+  'Cylindrical flesh specimens in compression, with and without lateral confinement (true stress–strain)';
 const LBF = 4.4482216;
 
 /** A typical pear value kept where nothing published could be read (see its note). */
@@ -19,7 +22,7 @@ const PEAR_FRICTION_NOTE =
   "Typical value, not published here: Öztürk et al. 2009 measured the static friction of 'Deveci' and 'Santa Maria' pears, but the coefficients are not in the abstract read. Searched: 'pear physical properties density bulk density friction coefficient cultivar', 'pear fruit length width mass true density static coefficient of friction rubber plywood galvanized'.";
 
 const PEAR_DROP_NOTE =
-  "Typical value, not published: no pear no-bruise drop height onto a named surface could be read. Found: 'Bartlett' share bruised 40 % at 10 cm rising to 100 % at 41 cm, surface not named (Mitchell, read second-hand); 3-inch (76 mm) drops cause substantial bruising of 'Bartlett' (California Agriculture 54(3), 2000; its 'about 8 mm' is a slip), surface not named; all 'Williams' and 'Ankara' fruit bruised in 10–20 cm pendulum drops, impactor not named (Turk. J. Agric. For.); Stropek & Gołacki 2020 (rigid plate) give no no-bruise velocity in the part read; Celik 2017 simulated 0.25–1 m drops onto steel, wood, rubber. Pathare et al. 2021 and Sinobas et al. 1991 dropped an impactor onto the fruit (0.0199 J and up), with no no-bruise level stated.";
+  "Typical value, not published: no pear no-bruise drop height onto a named surface could be read. Found: 'Bartlett' share bruised 40 % at 10 cm rising to 100 % at 41 cm, surface not named (Mitchell, read second-hand); 3-inch (76 mm) drops cause substantial bruising of 'Bartlett' (California Agriculture 54(3), 2000; its 'about 8 mm' is a slip), surface not named; all 'Williams' and 'Ankara' fruit bruised in 10–20 cm pendulum drops, impactor not named (Turk. J. Agric. For.); Stropek & Gołacki 2020 (rigid plate) give no no-bruise velocity in the part read; Celik 2017 simulated 0.25–1 m drops onto steel, wood, rubber. Pathare et al. 2021, Sinobas et al. 1991 and Acta Agroph. 25(4) 2018 (glass ball, 20–80 cm) dropped an impactor onto the fruit, with no no-bruise level stated.";
 
 export const PEAR: SeedCommodity = {
   slug: 'pear',
@@ -82,6 +85,31 @@ export const PEAR: SeedCommodity = {
       ],
     },
     {
+      slug: 'pear-suli',
+      name: 'Suli',
+      values: [
+        {
+          quantity: 'youngs_modulus',
+          variant: 'flesh',
+          value: 1.81,
+          low: 0.619,
+          high: 1.81,
+          method: SU_METHOD,
+          note: "Published for 'Su' pear (酥梨) as 6.19×10⁵, 9.63×10⁵, 1.28×10⁶, 1.56×10⁶ and 1.81×10⁶ Pa at compressive strains 0.02, 0.04, 0.06, 0.08 and 0.10 (÷ 10⁶ = MPa): the modulus rose with strain. The stiffest (strain 0.10) is taken, as it gives the highest contact pressure; the range covers the five.",
+          source: SU_PEAR,
+        },
+        {
+          quantity: 'poisson_ratio',
+          value: 0.421,
+          low: 0.314,
+          high: 0.421,
+          method: SU_METHOD,
+          note: "Published for 'Su' pear (酥梨) as 0.421, 0.409, 0.391, 0.364 and 0.314 at compressive strains 0.02, 0.04, 0.06, 0.08 and 0.10: the ratio fell with strain. The small-strain value (0.02) is taken, the highest, which gives the stiffer contact.",
+          source: SU_PEAR,
+        },
+      ],
+    },
+    {
       slug: 'pear-type',
       name: 'Pear (commodity record)',
       isType: true,
@@ -99,13 +127,15 @@ export const PEAR: SeedCommodity = {
           note: "Measured on 'Williams'; the commodity record takes it as typical of pear. The stiffest figure of the study ('Williams' at harvest) is taken, as it gives the highest contact pressure; the range covers 'Williams' 1.68 → 0.51 MPa and 'Ankara' 1.34 → 0.80 MPa over 4 months of storage.",
           source: STORAGE_STUDY,
         },
-        typical({
+        {
           quantity: 'poisson_ratio',
-          value: 0.35,
-          low: 0.3,
-          high: 0.45,
-          note: "Typical value, not published: no stored source gives a Poisson's ratio for pear flesh (searched: 'pear Poisson ratio modulus of elasticity compression', 'pear fruit Poisson's ratio flesh', 'Celik Ankara pear material properties Poisson'). Apple flesh measured 0.38–0.39 (Konya study) and is recalled as 0.2–0.35; 0.35 lies between.",
-        }),
+          value: 0.421,
+          low: 0.314,
+          high: 0.421,
+          method: SU_METHOD,
+          note: "Measured on 'Su' pear (酥梨, a Chinese white pear); the commodity record takes it as typical of pear, the only pear Poisson's ratio read. 0.421 at strain 0.02 falling to 0.314 at 0.10; the small-strain value is taken. Apple flesh measured 0.38–0.39 (Konya study).",
+          source: SU_PEAR,
+        },
         typical({
           quantity: 'density',
           value: 1030,
