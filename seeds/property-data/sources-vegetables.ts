@@ -132,6 +132,16 @@ export const VEGETABLE_SOURCES: SeedSource[] = [
     note: 'Read in the abstract. Its "modulus of elasticity" is a force–deformation slope in N/mm, not a Young’s modulus, and its bioyield and rupture figures are forces, so none of them is stored as a stress.',
   },
   {
+    key: 'veg-jamdagni-jia-2019-cutting-table',
+    kind: 'secondary',
+    authors: 'Jamdagni, P.; Jia, Y.-B.',
+    year: 2019,
+    title: 'Robotic cutting of solids based on fracture mechanics and FEM',
+    venue: 'IEEE/RSJ International Conference on Intelligent Robots and Systems (IROS 2019)',
+    url: 'https://robolab-iastate.github.io/papers/IROS19.pdf',
+    note: "Read second-hand in a material-property table of a public repository (Tadinu/DiSECt, README_Cooking.md), which cites the paper at the url above and lists E, Poisson's ratio, friction and fracture toughness for potato, tomato and cucumber. The paper's own table, its test methods and the origin of its figures were not read; title and authors read on a stored copy of the paper's first page.",
+  },
+  {
     key: 'veg-ejb-2015-potato-impact',
     kind: 'paper',
     authors: null,

@@ -7,6 +7,7 @@ const TEMPEST = 'thomson-lopresti-2008-tomato';
 const BUCCHERI = 'veg-buccheri-cantwell-tomato-slices';
 const IDAHO_STORAGE = 'veg-hendricks-2022-spudman-storage-bruise';
 const SALEH = 'veg-saleh-awolola-irish-potato';
+const CUTTING_TABLE = 'veg-jamdagni-jia-2019-cutting-table';
 
 /** A typical value kept only because no published one was found; the note says what was searched. */
 function typical(
@@ -54,6 +55,19 @@ export const VEGETABLES: SeedCommodity[] = [
         name: 'Tomato (commodity record)',
         isType: true,
         values: [
+          {
+            quantity: 'youngs_modulus',
+            variant: 'apparent',
+            value: 0.4,
+            note: "Published as E = 0.4 × 10⁶ (N/m²) for tomato in the material table of a robotic-cutting study, read second-hand in a repository that cites it; 0.4 × 10⁶ Pa = 0.4 MPa. Whole fruit or flesh, test and ripeness are not stated; filed as apparent like the weak secondary figure below, which it equals. Kept first because its origin is named. No whole-tomato modulus was found in a stored abstract (searched 'tomato fruit modulus of elasticity MPa bioyield stress kPa values', 'Li tomato exocarp mesocarp locular gel Young\'s modulus').",
+            source: CUTTING_TABLE,
+          },
+          {
+            quantity: 'poisson_ratio',
+            value: 0.3,
+            note: 'Published as ν = 0.3 for tomato in the same robotic-cutting material table (read second-hand); equals the weak secondary figure below. Kept first because its origin is named.',
+            source: CUTTING_TABLE,
+          },
           {
             quantity: 'youngs_modulus',
             variant: 'apparent',
@@ -495,6 +509,13 @@ export const VEGETABLES: SeedCommodity[] = [
             quantity: 'youngs_modulus',
             variant: 'flesh',
             value: 2,
+            note: 'Published as E = 2 × 10⁶ (N/m²) for potato in the material table of a robotic-cutting study, read second-hand in a repository that cites it; 2 × 10⁶ Pa = 2 MPa. The table does not say how it was measured; filed as flesh, like the Finney & Hall value below (cylinders cut from tubers), which it equals. Kept first: of the two equal values this one was read, the other is recalled.',
+            source: CUTTING_TABLE,
+          },
+          {
+            quantity: 'youngs_modulus',
+            variant: 'flesh',
+            value: 2,
             note: 'Recalled, not re-read: about 2 MPa, from Finney & Hall 1967 (a scan of the paper is stored but its tables are not legible in the copy). Filed as flesh since the paper tested cylinders cut from tubers (seen in its figure caption). Kept first: a compressive value of tuber flesh, which the squeeze check needs; the read tensile figure below depends strongly on specimen size and water status.',
             source: 'finney-hall-1967',
           },
@@ -508,6 +529,12 @@ export const VEGETABLES: SeedCommodity[] = [
               'Uniaxial tension of solid and hollow cylindrical plugs of tuber pith parenchyma',
             note: 'Tensile modulus: 19 MPa for the largest plugs (2.5 cm² section) near full turgor; it fell to 5 MPa for 0.2 cm² plugs and to 1.2 MPa as water potential dropped from −0.4 to −1.4 MPa. A tensile, size-dependent figure: not the one the checks should take.',
             source: 'veg-pith-tensile-modulus',
+          },
+          {
+            quantity: 'poisson_ratio',
+            value: 0.45,
+            note: 'Published as ν = 0.45 for potato in the robotic-cutting material table (read second-hand). Kept first: read, and inside the 0.45–0.49 recalled from Finney & Hall 1967 below.',
+            source: CUTTING_TABLE,
           },
           {
             quantity: 'poisson_ratio',
@@ -564,6 +591,16 @@ export const VEGETABLES: SeedCommodity[] = [
             note: "Measured on 'Ramos'; the commodity record takes it as typical of potato. Maximum impact stress, constant at 0.9 MPa once bruising had begun (critical-stress criterion). No static bruise threshold for potato was found; the Spunta study gives bioyield forces of 84.25–114.12 N and rupture forces of 100.90–139.78 N, forces without a contact area (veg-almady-2024-spunta), so not stored as stresses.",
             source: RAMOS,
           },
+          typical(
+            {
+              quantity: 'bioyield_stress',
+              value: 500,
+              low: 250,
+              high: 900,
+              note: 'No potato static threshold, bioyield or quasi-static failure stress in kPa found. Searched "potato tuber bioyield stress compression kPa", "potato tissue compressive strength yield stress MPa", "raw potato cylinders failure stress kPa", "potato bioyield rupture stress Marfona Agria Sante", "potato static bruise threshold pressure kPa", "Baritelle Hyde potato failure stress": the abstracts read (Bentini 2009; Lady Rosetta, Misr J. Agric. Eng.; Yurtlu 2012; Konstankiewicz, Int. Agrophys. 2001) print no value; Spunta bioyield forces 84–114 N have no contact area. Recalled: potato flesh yields at several hundred kPa under slow compression. The band tops at the 0.9 MPa at which Ramos tubers began to bruise under impact (read), since tissue is stronger under impact than under a held load. Tubers of four cultivars under a simulated 2.5 m pile for 7 months bruised (Czerko, Biul. IHAR, abstract): a pile height, not a contact pressure, so not stored.',
+            },
+            'from memory',
+          ),
           typical(
             {
               quantity: 'friction_coefficient',
