@@ -118,4 +118,15 @@ export const CITRUS_TROPICAL_SOURCES: SeedSource[] = [
     url: 'http://120.26.44.124:3004/details/1/913742764',
     note: 'Read in the abstract on an index page. Unripe fruit over five days of ripening; penetration force 6.4–8.3 N (probe not given in the abstract) and whole-fruit compressive force about 1.4–1.7 kN, neither stored.',
   },
+  {
+    key: 'ct-bermudez-cavendish-thesis',
+    kind: 'thesis',
+    authors: 'Bermudez Camacho, T. de la C.',
+    year: null,
+    title:
+      'Determinación de los parámetros físico-químicos y mecánicos del banano (Musa spp.) para un óptimo manejo poscosecha',
+    venue: 'Universidad Central "Marta Abreu" de Las Villas (thesis)',
+    url: 'https://dspace.uclv.edu.cu/items/a728c189-0bde-4505-b18b-1415adada56e',
+    note: "Read in the abstract (Spanish, with an English version) on the repository page; year not shown. Cultivar 'Cavendish gigante (Jonson)' from Taguasco, Sancti Spíritus, Cuba.",
+  },
 ];

@@ -8,6 +8,7 @@ const ORHEVBA = 'ct-orhevba-2011-avocado';
 const SRILANKA = 'ct-srilanka-banana-2015';
 const GRAND_NAIN = 'ct-grand-nain-banana-mass';
 const NIPAH = 'ct-abidin-2019-nipah';
+const BERMUDEZ = 'ct-bermudez-cavendish-thesis';
 
 /** What the tropical searches covered, for the notes of the typical values. */
 const SEARCHED = (fruit: string, queries: string) =>
@@ -529,6 +530,26 @@ export const TROPICAL: SeedCommodity[] = [
             ripeness: 'Unripe',
             note: 'Published as average diameter 38.78 ± 5.77 mm × 29.25 ± 4.92 mm; the larger cross-section dimension is stored.',
             source: NIPAH,
+          },
+        ],
+      },
+      {
+        slug: 'banana-giant-cavendish',
+        name: 'Giant Cavendish',
+        values: [
+          {
+            quantity: 'diameter',
+            variant: 'axial',
+            value: 208.5,
+            note: "Published as mean length 20.85 cm, × 10 = 208.5 mm. The thesis names the cultivar 'Cavendish gigante (Jonson)'.",
+            source: BERMUDEZ,
+          },
+          {
+            quantity: 'diameter',
+            variant: 'equatorial',
+            value: 35.8,
+            note: 'Derived: published as mean circumference 11.25 cm; diameter = 112.5 mm ÷ π = 35.81 mm, stored as 35.8 mm (a round cross-section assumed). Peel 2.5 mm and pulp 28.5 mm thick. The abstract also reports little resistance to impacts above "105.94 (J)", a figure whose unit cannot be right for a banana, so no impact value is stored.',
+            source: BERMUDEZ,
           },
         ],
       },
