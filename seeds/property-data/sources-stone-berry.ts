@@ -185,6 +185,18 @@ export const STONE_BERRY_SOURCES: SeedSource[] = [
     note: 'Read in the stored page (the same text is copied on pectinguard.com and water-foods.com); authors not shown on the page read.',
   },
   {
+    key: 'stone-gunes-2003-plum-tokat',
+    kind: 'paper',
+    authors: 'Gunes, M.',
+    year: 2003,
+    title: 'Some local plum varieties grown in Tokat province',
+    venue: 'Journal of Applied Sciences 3',
+    pages: '291–295',
+    doi: '10.3923/jas.2003.291.295',
+    url: 'https://scialert.net/fulltext/?doi=jas.2003.291.295&org=11',
+    note: 'Read in the abstract (the opening of the stored full-text page). Nine local plum varieties of Tokat province, Turkey: pomological and phenological traits; the varieties are not named in the part read.',
+  },
+  {
     key: 'stone-milosevic-2014-apricot-size',
     kind: 'paper',
     authors: 'Milošević, T.; Milošević, N.; Glišić, I.; Glišić, I. S.',

@@ -3,6 +3,7 @@ import type { TypicalBasis } from '@/lib/properties/quantities';
 import { typicalJanssenK } from './value-helpers';
 
 const PLUM = 'intagro-2003-plum-firmness';
+const GUNES = 'stone-gunes-2003-plum-tokat';
 const NECTARINE = 'fooder-100430-nectarine';
 const TABLE = 'stone-crisosto-min-firmness-table';
 const UCD = 'stone-ucdavis-peach-nectarine-facts';
@@ -472,33 +473,32 @@ export const STONE_FRUIT: SeedCommodity[] = [
             'from memory',
             "No plum density found (searched: 'plum fruit physical properties true density'). Whole watery fruit are close to water; stone fruit with a stone slightly above.",
           ),
-          typical(
-            'diameter',
-            'equatorial',
-            45,
-            30,
-            60,
-            'from memory',
-            "No plum dimensions found (searched: 'plum fruit length width thickness mass'). European plums run from about 30 to 60 mm.",
-          ),
-          typical(
-            'diameter',
-            'axial',
-            48,
-            30,
-            65,
-            'from memory',
-            'As for the equatorial diameter.',
-          ),
-          typical(
-            'mass',
-            '',
-            50,
-            20,
-            120,
-            'from memory',
-            'No plum mass found (searched as for the diameters). European plums about 20–60 g, Japanese plums up to about 120 g.',
-          ),
+          {
+            quantity: 'diameter',
+            variant: 'equatorial',
+            value: 35.48,
+            low: 20.05,
+            high: 35.48,
+            note: "Fruit diameters of nine local plum varieties of Tokat province, Turkey, ranged from 20.05 to 35.48 mm (variety means; the varieties at the ends are not named in the abstract). The largest is stored, as the mass is. Small local plums: the Californian Japanese plums of this record ('Fortune', 'Angeleno', …) are larger; a smaller diameter gives the squeeze a higher contact pressure for the same force.",
+            source: GUNES,
+          },
+          {
+            quantity: 'diameter',
+            variant: 'axial',
+            value: 34.29,
+            low: 22.83,
+            high: 34.29,
+            note: 'Fruit lengths of the same nine local varieties ranged from 22.83 to 34.29 mm; the largest is stored (see the equatorial note).',
+            source: GUNES,
+          },
+          {
+            quantity: 'mass',
+            value: 25.18,
+            low: 5.23,
+            high: 25.18,
+            note: "Fruit weights of the same nine local varieties ranged from 5.23 to 25.18 g; the largest is stored, the conservative end for drop and stack loads among them. Commercial Japanese plums run far heavier (not measured here): enter the fruit's own mass for them.",
+            source: GUNES,
+          },
           typical(
             'static_bruise_threshold',
             '',
@@ -607,6 +607,14 @@ export const STONE_FRUIT: SeedCommodity[] = [
             'from memory',
             'As for the equatorial diameter.',
           ),
+          {
+            quantity: 'diameter',
+            value: 65.08,
+            low: 41.76,
+            high: 65.08,
+            note: "Geometric mean diameter: cultivar means ranged from 41.76 to 65.08 mm across the 13 cultivars and selections (the ends are not named in the abstract; 'Roksana' had the highest values for most attributes). The largest is stored, matching the mass. Axes not given: the equatorial and axial diameters below stay typical values.",
+            source: 'stone-milosevic-2014-apricot-size',
+          },
           {
             quantity: 'mass',
             value: 81.6,
