@@ -16,6 +16,9 @@ export const FIELD_LABELS: Record<ValueField, string> = {
   loadingRate: 'Loading rate',
   probe: 'Probe or plate',
   note: 'Note',
+  stage: 'Ripeness stage',
+  observation: 'What was observed (drop and impact figures)',
   isTypicalDefault: 'Typical default',
+  typicalBasis: 'Why the typical value is kept',
   sourceKey: 'Source',
 };

@@ -4,6 +4,12 @@ import { Field } from '@/components/ui/field';
 import type { FieldErrors } from '@/lib/errors';
 import {
   isQuantity,
+  OBSERVATION_LABELS,
+  OBSERVATIONS,
+  OBSERVED_QUANTITIES,
+  STAGE_LABELS,
+  STAGES,
+  TYPICAL_BASES,
   QUANTITIES,
   QUANTITY_KEYS,
   variantsOf,
@@ -102,6 +108,26 @@ export function ValueRow({ index, fields, errors, sources, onChange, onRemove }:
           <Field key={f} label={FIELD_LABELS[f]} maxLength={max} {...text(f)} />
         ))}
       </div>
+      <div className="grid gap-x-3 sm:grid-cols-2">
+        <SelectField label={FIELD_LABELS.stage} {...text('stage')}>
+          <option value="">Not staged</option>
+          {STAGES.map((s) => (
+            <option key={s} value={s}>
+              {STAGE_LABELS[s]}
+            </option>
+          ))}
+        </SelectField>
+        {quantity && (OBSERVED_QUANTITIES as readonly string[]).includes(quantity) ? (
+          <SelectField label={FIELD_LABELS.observation} {...text('observation')}>
+            <option value="">Choose…</option>
+            {OBSERVATIONS.map((o) => (
+              <option key={o} value={o}>
+                {OBSERVATION_LABELS[o]}
+              </option>
+            ))}
+          </SelectField>
+        ) : null}
+      </div>
       <Field label={FIELD_LABELS.note} maxLength={1000} {...text('note')} />
       <SourceSelect
         name={name('sourceKey')}
@@ -121,6 +147,18 @@ export function ValueRow({ index, fields, errors, sources, onChange, onRemove }:
           />
           Typical default (no measurement behind it; shown as such)
         </label>
+        {fields.isTypicalDefault === 'true' ? (
+          <SelectField label={FIELD_LABELS.typicalBasis} {...text('typicalBasis')}>
+            <option value="">Choose…</option>
+            {TYPICAL_BASES.map((b) => (
+              <option key={b} value={b}>
+                {b === 'common practice'
+                  ? 'common practice, no single source'
+                  : 'from memory, not yet checked'}
+              </option>
+            ))}
+          </SelectField>
+        ) : null}
         <button
           type="button"
           onClick={onRemove}

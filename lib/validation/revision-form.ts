@@ -21,7 +21,10 @@ export const VALUE_FIELDS = [
   'loadingRate',
   'probe',
   'note',
+  'stage',
+  'observation',
   'isTypicalDefault',
+  'typicalBasis',
   'sourceKey',
 ] as const;
 export type ValueField = (typeof VALUE_FIELDS)[number];
@@ -66,7 +69,10 @@ export function valueFieldsOf(v: RevisionValue): ValueFields {
     loadingRate: s(v.loadingRate),
     probe: s(v.probe),
     note: s(v.note),
+    stage: v.stage ?? '',
+    observation: v.observation ?? '',
     isTypicalDefault: v.isTypicalDefault ? 'true' : '',
+    typicalBasis: v.typicalBasis ?? '',
     sourceKey: v.source?.key ?? '',
   };
 }

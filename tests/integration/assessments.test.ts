@@ -6,6 +6,8 @@ import { db } from '@/lib/db';
 import type { Actor } from '@/lib/auth/actor';
 import { getActiveActor } from '@/lib/data/users';
 import { createDraft, publishRevision, submitDraft, updateDraft } from '@/lib/data/revisions';
+import { getRevision } from '@/lib/data/cultivars';
+import { toValueInput } from '@/lib/lab-tests/draft-value';
 import * as list from '@/app/api/assessments/route';
 import * as one from '@/app/api/assessments/[id]/route';
 import * as rerun from '@/app/api/assessments/[id]/rerun/route';
@@ -34,6 +36,7 @@ async function publishThreshold(mm: number) {
         quantity: 'drop_threshold_height',
         variant: 'steel',
         value: mm,
+        observation: 'no-bruise',
         sourceKey: 'shahabasi-1979',
       },
     ],
@@ -101,14 +104,78 @@ describe('assessments pin their data', () => {
     ).toBe(2);
   });
 
+  it('an assessment that inherited from the commodity record pins it, flags its newer data, and a re-run uses it', async () => {
+    // A cultivar with only its own modulus: the stack check inherits the rest (the threshold
+    // among them) from the commodity record of its commodity.
+    const [commodity] = await db('commodities').select('id').limit(1);
+    const type = await db('cultivars').where({ commodity_id: commodity.id, is_type: true }).first();
+    await db('cultivars').insert({
+      commodity_id: commodity.id,
+      slug: 'test-inheriting',
+      name: 'Test inheriting',
+      is_type: false,
+    });
+    const own = await createDraft(editor, 'test-inheriting');
+    await updateDraft(editor, own.id, {
+      values: [
+        { quantity: 'youngs_modulus', variant: 'apparent', value: 3, sourceKey: 'shahabasi-1979' },
+      ],
+    });
+    await submitDraft(editor, own.id);
+    await publishRevision(admin, own.id);
+    signInAs(await userId(ACCOUNTS.engineer));
+    const save = {
+      check: 'stack',
+      title: 'Bin, inherited threshold',
+      inputs: {
+        cultivar: 'test-inheriting',
+        binLengthMm: 1200,
+        binWidthMm: 1000,
+        fillDepthMm: 600,
+      },
+    };
+    const saved = (await (await list.POST(req('POST', save), {})).json()).assessment;
+    expect(saved.results.inputs_used.static_bruise_threshold_kpa.rung).toBe('commodity');
+    expect(saved.results.inputs_used.modulus_mpa.rung).toBe('own');
+    expect(saved.results.pinned.commodity_record.revision_id).toBe(type.published_revision_id);
+    expect(saved.commodityRevisionId).toBe(type.published_revision_id);
+    expect(saved.newerCommodityRevision).toBeNull();
+    // Publish a new commodity record revision whose threshold is 1.5 × the old one.
+    const draft = await createDraft(editor, type.slug);
+    const values = (await getRevision(editor, draft.id)).values.map(toValueInput);
+    const threshold = values.find((v) => v.quantity === 'static_bruise_threshold')!;
+    const old = threshold.value;
+    threshold.value = old * 1.5;
+    if (threshold.low !== null && threshold.high !== null) {
+      threshold.low *= 1.5;
+      threshold.high *= 1.5;
+    }
+    await updateDraft(editor, draft.id, { values });
+    await submitDraft(editor, draft.id);
+    await publishRevision(admin, draft.id);
+    const kept = (await (await one.GET(req('GET'), ctx(saved.id))).json()).assessment;
+    expect(kept.results.margin.value).toBe(saved.results.margin.value);
+    expect(kept.newerCommodityRevision.id).toBe(draft.id);
+    expect(kept.newerRevision).toBeNull();
+    const again = (await (await rerun.POST(req('POST', {}), ctx(saved.id))).json()).assessment;
+    expect(again.results.inputs_used.static_bruise_threshold_kpa.value).toBeCloseTo(old * 1.5, 6);
+    expect(again.commodityRevisionId).toBe(draft.id);
+    expect(again.newerCommodityRevision).toBeNull();
+    // The stack margin is the threshold over the contact pressure, which the threshold does not
+    // change: 1.5 × the margin, to the 3 significant figures a margin is kept to (0.5 %).
+    expect(
+      Math.abs(again.results.margin.value / (1.5 * saved.results.margin.value) - 1),
+    ).toBeLessThan(0.005);
+  });
+
   it('stamps every result with the model version and the result schema it was made with', async () => {
     const row = await db('assessments').where({ id: first }).first();
     // Written out, not read from the code: the version string of fem/version.ts at this commit
-    // and the drop check's first result schema.
+    // and the drop check's second result schema (rungs).
     expect(row.model_version).toMatch(/^\d{4}\.\d{1,2}\.\d+$/);
-    expect(row.result_schema).toBe('drop/1');
+    expect(row.result_schema).toBe('drop/2');
     const { assessment } = await (await one.GET(req('GET'), ctx(first))).json();
-    expect(assessment).toMatchObject({ modelVersion: row.model_version, resultSchema: 'drop/1' });
+    expect(assessment).toMatchObject({ modelVersion: row.model_version, resultSchema: 'drop/2' });
   });
 
   it('numbers re-runs within their chain: a re-run of v2 is v3, and parallel re-runs never share a number', async () => {
@@ -159,7 +226,7 @@ describe('assessments pin their data', () => {
     const res = await list.POST(req('POST', { check: 'squeeze', title: 'Gripper', inputs }), {});
     expect(res.status).toBe(201);
     const { assessment } = await res.json();
-    expect(assessment.resultSchema).toBe('squeeze/1');
+    expect(assessment.resultSchema).toBe('squeeze/2');
     const lines = (await (await curves.GET(req('GET'), ctx(assessment.id))).text())
       .trim()
       .split('\r\n');

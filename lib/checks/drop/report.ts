@@ -5,7 +5,7 @@ import { dropResultSchema, type DropResult } from './result';
 /** How a saved drop check is shown, printed, exported and compared. */
 export const dropDescriptor: CheckDescriptor<DropResult> = {
   title: 'Drop check',
-  resultSchemaId: 'drop/1',
+  resultSchemaId: 'drop/2',
   resultSchema: dropResultSchema,
   assumptions: ASSUMPTIONS.drop,
   report(r) {

@@ -7,7 +7,7 @@ import { fruitUsedShape, pinnedSchema, verdictSchema } from '../used-value';
 const n = z.number();
 const nn = z.number().nullable();
 
-/** The drop check's result as it is answered and saved (schema `drop/1`). */
+/** The drop check's result as it is answered and saved (schema `drop/2`: every used figure with its rung; `drop/1` results are read through the same schema). */
 export const dropResultSchema = z.object({
   check: z.literal('drop'),
   pinned: pinnedSchema,

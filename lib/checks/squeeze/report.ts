@@ -98,7 +98,7 @@ function charts(r: SqueezeResult): ChartSpec[] {
 /** How a saved squeeze check is shown, printed, exported and compared. */
 export const squeezeDescriptor: CheckDescriptor<SqueezeResult> = {
   title: 'Squeeze check',
-  resultSchemaId: 'squeeze/1',
+  resultSchemaId: 'squeeze/2',
   resultSchema: squeezeResultSchema,
   assumptions: ASSUMPTIONS.squeeze,
   report(r) {

@@ -22,7 +22,7 @@ const stateSchema = z.looseObject({
 
 const gripSchema = stateSchema.extend({ bruise_margin: nn, shear_margin: nn });
 
-/** The squeeze check's result as it is answered and saved (schema `squeeze/1`). */
+/** The squeeze check's result as it is answered and saved (schema `squeeze/2`: every used figure with its rung; `squeeze/1` results are read through the same schema). */
 export const squeezeResultSchema = z.object({
   check: z.literal('squeeze'),
   pinned: pinnedSchema,

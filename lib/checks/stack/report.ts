@@ -5,7 +5,7 @@ import { stackResultSchema, type StackResult } from './result';
 /** How a saved stack check is shown, printed, exported and compared. */
 export const stackDescriptor: CheckDescriptor<StackResult> = {
   title: 'Stack check',
-  resultSchemaId: 'stack/1',
+  resultSchemaId: 'stack/2',
   resultSchema: stackResultSchema,
   assumptions: ASSUMPTIONS.stack,
   report(r) {

@@ -4,7 +4,7 @@ import { fruitUsedShape, pinnedSchema, usedValueSchema, verdictSchema } from '..
 
 const n = z.number();
 
-/** The stack check's result as it is answered and saved (schema `stack/1`). */
+/** The stack check's result as it is answered and saved (schema `stack/2`: every used figure with its rung; `stack/1` results are read through the same schema). */
 export const stackResultSchema = z.object({
   check: z.literal('stack'),
   pinned: pinnedSchema,
