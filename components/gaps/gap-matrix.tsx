@@ -14,7 +14,12 @@ function Cell({ row, figure, cell, draftId }: Props & { figure: string; cell: Ga
   return (
     <td className="border-b border-stone-200 p-0" data-rung={cell.rung}>
       {draftId ? (
-        <Link href={`/editor/revisions/${draftId}`} className={style} title={sentence} aria-label={label}>
+        <Link
+          href={`/editor/revisions/${draftId}`}
+          className={style}
+          title={sentence}
+          aria-label={label}
+        >
           {cellWord(cell)}
         </Link>
       ) : (

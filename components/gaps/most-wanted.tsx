@@ -22,7 +22,9 @@ export function MostWanted({ wanted }: { wanted: WantedMeasurement[] }) {
           </span>
           <span>
             <strong className="font-medium">{w.figure}</strong> of{' '}
-            {w.isCommodityRecord ? `the ${w.commodity.toLowerCase()} commodity record` : `${w.commodity}, ${w.name}`}{' '}
+            {w.isCommodityRecord
+              ? `the ${w.commodity.toLowerCase()} commodity record`
+              : `${w.commodity}, ${w.name}`}{' '}
             <span className="text-stone-600">
               (now {w.rung}; {why(w)})
             </span>

@@ -10,7 +10,8 @@ export function cellWord(cell: GapCell): string {
 export function cellSentence(cell: GapCell, isCommodityRecord: boolean): string {
   if (cell.note) return cell.note;
   if (cell.rung === 'missing') return 'No value on any rung.';
-  if (cell.rung === 'own' && isCommodityRecord) return "The commodity record's own published value.";
+  if (cell.rung === 'own' && isCommodityRecord)
+    return "The commodity record's own published value.";
   const from = cell.rung === 'derived' && cell.fromOwn ? ', from own values only' : '';
   return `${RUNG_LABELS[cell.rung]}${from}.`;
 }

@@ -47,6 +47,17 @@ export default async function EditorPage() {
           {' '}
           — lab-test uploads (plate compression) and fitted moduli.
         </span>
+        <br />
+        <Link
+          href="/editor/gaps"
+          className="font-medium text-leaf-700 underline-offset-2 hover:underline"
+        >
+          Data gaps
+        </Link>
+        <span className="text-stone-600">
+          {' '}
+          — where each figure the checks take comes from, and which measurement to make next.
+        </span>
       </nav>
       <Section title="Start a draft" id="start-draft">
         <p className="mb-3 text-sm text-stone-600">
