@@ -1,6 +1,7 @@
 import Link from 'next/link';
 import type { ReactNode } from 'react';
 import { DraftForm } from '@/components/revisions/draft-form';
+import { ImportPanel } from '@/components/revisions/import-panel';
 import { baseText } from '@/components/revisions/format';
 import { ReviewPanel } from '@/components/revisions/review-panel';
 import { RevisionDiff } from '@/components/revisions/revision-diff';
@@ -68,20 +69,26 @@ export default async function RevisionPage({ params }: { params: Promise<{ id: s
         </div>
       ) : null}
       {mode === 'edit' ? (
-        <Block title="Values">
-          <DraftForm
-            key={r.id}
-            revisionId={r.id}
-            summary={r.summary ?? ''}
-            values={r.values.map(valueFieldsOf)}
-            sources={sources.map(({ key, authors, year, title }) => ({
-              key,
-              authors,
-              year,
-              title,
-            }))}
-          />
-        </Block>
+        <>
+          <Block title="Values">
+            <DraftForm
+              // A new key after an import, so the form starts again from the stored values.
+              key={`${r.id}:${r.values.length}`}
+              revisionId={r.id}
+              summary={r.summary ?? ''}
+              values={r.values.map(valueFieldsOf)}
+              sources={sources.map(({ key, authors, year, title }) => ({
+                key,
+                authors,
+                year,
+                title,
+              }))}
+            />
+          </Block>
+          <Block title="Import values from CSV">
+            <ImportPanel revisionId={r.id} />
+          </Block>
+        </>
       ) : (
         <>
           {mode === 'waiting' ? (
