@@ -51,7 +51,7 @@ const DEMO_REVISIONS: DemoRevision[] = [
     },
   },
   {
-    cultivar: 'avocado-hass',
+    cultivar: 'avocado-fuerte',
     author: 'admin@kestrelvale.example',
     status: 'returned',
     reviewer: 'editor2@kestrelvale.example',
@@ -65,6 +65,7 @@ const DEMO_REVISIONS: DemoRevision[] = [
       samples: 20,
       method: 'Single drops onto the grading-line belt (demo trial)',
       ripeness: 'Softening',
+      observation: 'no-bruise',
       note: DEMO_NOTE,
     },
   },

@@ -265,8 +265,7 @@ export const TROPICAL: SeedCommodity[] = [
     botanicalName: 'Persea americana',
     cultivars: [
       // Hass: the drop figures of Mazhar et al. 2018 name no surface and are kept as text in the
-      // commodity record's drop notes (MAZHAR_NOTE); the cultivar stays for the demo revision.
-      { slug: 'avocado-hass', name: 'Hass', values: [] },
+      // commodity record's drop notes (MAZHAR_NOTE); with nothing storable, no cultivar page.
       {
         slug: 'avocado-fuerte',
         name: 'Fuerte',

@@ -16,6 +16,8 @@ interface PublishedValue {
   high: number | null;
   note: string | null;
   is_typical_default: number | boolean;
+  typical_basis: string | null;
+  observation: string | null;
   source_key: string | null;
   source_kind: string | null;
 }
@@ -37,6 +39,8 @@ async function publishedValues(): Promise<PublishedValue[]> {
       'v.high',
       'v.note',
       'v.is_typical_default',
+      'v.typical_basis',
+      'v.observation',
       's.key as source_key',
       's.kind as source_kind',
     )
@@ -73,15 +77,26 @@ describe('the seeded property database', () => {
     }
   });
 
-  it('keeps typical defaults few, unsourced and labelled as such', () => {
+  it('keeps typical values unsourced, labelled with their basis and what was searched', () => {
     const defaults = values.filter((v) => v.is_typical_default);
     expect(defaults.length).toBeGreaterThan(0);
-    expect(defaults.length).toBeLessThanOrEqual(6);
     for (const v of defaults) {
-      expect(v.source_key, v.slug).toBeNull();
-      expect(v.note, v.slug).toContain(
-        'Typical engineering default, no published source for this commodity',
-      );
+      const where = `${v.slug} ${v.quantity} ${v.variant}`;
+      expect(v.source_key, where).toBeNull();
+      expect(['common practice', 'from memory'], where).toContain(v.typical_basis);
+      expect(v.note?.length ?? 0, where).toBeGreaterThan(40);
+    }
+  });
+
+  it('every drop and impact figure says what was observed, and names a surface from the list', () => {
+    const drops = values.filter((v) =>
+      ['drop_threshold_height', 'impact_threshold_energy'].includes(v.quantity),
+    );
+    expect(drops.length).toBeGreaterThan(10);
+    for (const v of drops) {
+      const where = `${v.slug} ${v.quantity} ${v.variant}`;
+      expect(['no-bruise', 'bruised-at', 'recommended-max'], where).toContain(v.observation);
+      expect(v.variant, where).not.toBe('');
     }
   });
 
@@ -151,8 +166,14 @@ describe('seeded figures against the published numbers', () => {
   // Exact where a value is stored as published (or converted by a power of ten): no tolerance.
   it('kiwifruit flesh: E 0.288 MPa, bio-yield 24 kPa, 1022 kg/m³ (Du et al. 2019, ASABE 1900242)', () => {
     expect(of('kiwifruit-type', 'youngs_modulus', 'flesh')[0].value).toBe(0.288);
-    expect(of('kiwifruit-type', 'failure_stress')[0].value).toBe(24);
-    expect(of('kiwifruit-type', 'density')[0].value).toBe(1022);
+    // A bioyield stress, stored as one (it was filed as a failure stress before).
+    expect(of('kiwifruit-type', 'bioyield_stress')[0]).toMatchObject({
+      value: 24,
+      source_key: 'du-2019-asabe',
+    });
+    expect(of('kiwifruit-type', 'failure_stress')).toEqual([]);
+    const flesh = of('kiwifruit-type', 'density').find((v) => v.source_key === 'du-2019-asabe');
+    expect(flesh?.value).toBe(1022);
   });
 
   it('Jonathan flesh E 2.52 MPa (2.36–3.28) through storage (Shahabasi 1979, MSU thesis)', () => {
@@ -181,18 +202,21 @@ describe('seeded figures against the published numbers', () => {
     expect(thompson.note).toContain('20.2°');
   });
 
-  it('Royal Gala ≈ 0.08 J is kept, labelled weak (Shen & Shan, UBC undergraduate report)', () => {
-    const [gala] = of('apple-royal-gala', 'impact_threshold_energy', 'steel');
-    expect(gala).toMatchObject({ value: 0.08, unit: 'J', source_kind: 'report' });
-    expect(gala.note).toMatch(/^Weak source/);
-  });
-
-  it('drop thresholds keep the source meaning (Stropek & Gołacki 2022; Mazhar et al. 2018)', () => {
-    expect(of('potato-ramos', 'drop_threshold_height', 'steel')[0].value).toBe(50);
-    const hass = of('avocado-hass', 'drop_threshold_height', 'steel');
-    expect(hass.map((v) => v.value)).toEqual([500, 1000]);
-    expect(hass[0].note).toMatch(/^Bruises from this height/);
-    expect(hass[1].note).toMatch(/^No bruise at or below this height/);
+  it('drop figures keep what was observed (Stropek & Gołacki 2022; Moggia et al. 2017)', () => {
+    // 'Ramos' began to bruise at 1 m/s onto a rigid plate, about 50 mm: bruised at, an upper bound.
+    expect(of('potato-ramos', 'drop_threshold_height', 'rigid plate')[0]).toMatchObject({
+      value: 50,
+      observation: 'bruised-at',
+    });
+    // The blueberries were dropped 32 cm onto hard plastic to damage them: not a safe height.
+    expect(of('blueberry-brigitta', 'drop_threshold_height', 'hard plastic')[0]).toMatchObject({
+      value: 320,
+      observation: 'bruised-at',
+    });
+    // Guessed impactors are gone: no drop figure of Royal Gala (its report names none) or Hass.
+    expect(
+      values.filter((v) => v.slug === 'apple-royal-gala' || v.slug === 'avocado-hass'),
+    ).toEqual([]);
   });
 
   it('banana pulp specific gravity 0.993 → 993 kg/m³ (Kachru et al. 1995, J. Food Eng. 26:369)', () => {
@@ -212,9 +236,9 @@ describe('seeded figures against the published numbers', () => {
       [0.382, 0.39, 'paper'],
       [0.2, 0.35, 'memory'],
     ]);
-    // Strawberry: bruised from 0.040 J (Ferreira et al. 2008) and from 0.022 J (Aliasgarian et al.).
-    expect(of('strawberry-type', 'impact_threshold_energy', 'steel').map((v) => v.value)).toEqual([
-      0.04, 0.022,
-    ]);
+    // Kiwifruit density: whole 'Hayward' fruit 1093 (secondary) beside the flesh 1022 (Du 2019).
+    const kiwi = of('kiwifruit-type', 'density').map((v) => v.value);
+    expect(kiwi).toContain(1093);
+    expect(kiwi).toContain(1022);
   });
 });

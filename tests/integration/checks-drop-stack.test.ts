@@ -84,6 +84,7 @@ describe('drop check', () => {
           quantity: 'drop_threshold_height',
           variant: 'steel',
           value: 300,
+          observation: 'no-bruise',
           sourceKey: 'shahabasi-1979',
         },
       ],
@@ -92,7 +93,13 @@ describe('drop check', () => {
     await publishRevision(await actor(ACCOUNTS.admin), id);
     const r = await result(drop, { cultivar: 'test-dropper', heightMm: 150, surface: 'steel' });
     // 300 mm allowed ÷ 150 mm dropped = 2 exactly.
-    expect(r.margin).toEqual({ value: 2, basis: 'dynamic', verdict: 'comfortable' });
+    expect(r.margin).toEqual({
+      value: 2,
+      basis: 'dynamic',
+      verdict: 'comfortable',
+      upper_bound: false,
+    });
+    expect(r.dynamic).toMatchObject({ rung: 'own', observation: 'no-bruise', upper_bound: false });
     expect(r.pinned.revision_id).toBe(id);
     // The static comparison is far stricter: 100 kPa against a peak of several hundred.
     expect(r.static.margin).toBeLessThan(0.5);
@@ -193,8 +200,10 @@ describe('stack check', () => {
       fillDepthMm: 600,
       staticThresholdKpa: 100,
     });
-    expect(r.inputs_used.lateral_pressure_ratio.origin).toBe('typical default');
-    expect(r.warnings.join(' ')).toMatch(/Lateral pressure ratio is a typical default/);
+    expect(r.inputs_used.lateral_pressure_ratio.rung).toBe('typical');
+    expect(r.warnings.join(' ')).toMatch(/Lateral pressure ratio is a typical value/);
+    expect(r.evidence.weakest_rung).toBe('typical');
+    expect(r.evidence.rests_on).toMatch(/typical value of the trade for .*lateral pressure ratio/);
   });
 });
 

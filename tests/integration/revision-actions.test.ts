@@ -237,6 +237,8 @@ describe('revision server actions', () => {
         'values.1.variant': '',
         'values.1.value': '0.3',
         'values.1.isTypicalDefault': 'true',
+        'values.1.typicalBasis': 'common practice',
+        'values.1.stage': 'firm',
         'values.1.sourceKey': '',
       });
       expect(state, JSON.stringify(state)).toMatchObject({ status: 200, ok: true });
@@ -264,8 +266,32 @@ describe('revision server actions', () => {
         low: null,
         sd: null,
         isTypicalDefault: true,
+        typicalBasis: 'common practice',
+        stage: 'firm',
         source: null,
       });
+    });
+
+    it('a typical value without its basis, or a drop figure without what was observed: field errors, nothing stored', async () => {
+      const id = (await createDraft(actors.editor, SLUG)).id;
+      const rows = await countRows('revision_values');
+      const state = await save(id, {
+        summary: 'Missing evidence kinds',
+        'values.0.quantity': 'poisson_ratio',
+        'values.0.value': '0.3',
+        'values.0.isTypicalDefault': 'true',
+        'values.0.sourceKey': '',
+        'values.1.quantity': 'drop_threshold_height',
+        'values.1.variant': 'steel',
+        'values.1.value': '300',
+        'values.1.sourceKey': 'shahabasi-1979',
+      });
+      expect(state).toMatchObject({ status: 400, ok: false });
+      expect(state.fieldErrors?.['values.0.typicalBasis']?.[0]).toMatch(
+        /common practice or from memory/,
+      );
+      expect(state.fieldErrors?.['values.1.observation']?.[0]).toMatch(/no bruise at this level/);
+      expect(await countRows('revision_values')).toBe(rows);
     });
 
     it('a bad number in values.1.value: a message on that field, nothing stored, typing kept', async () => {
