@@ -3,6 +3,7 @@
 import { useId } from 'react';
 import { useUnits } from '@/components/units/units-provider';
 import { RUNG_SHORT, type Rung } from '@/lib/evidence/rungs';
+import { STAGE_LABELS, STAGES } from '@/lib/properties/quantities';
 
 /** A number input with its unit beside it and its error below, announced politely. */
 export function MeasureField({
@@ -77,22 +78,21 @@ export function publishedHint(
     : `${Number(toDisplay(v.value).toPrecision(4))} (${RUNG_SHORT[v.rung]})`;
 }
 
-export function CultivarSelect({
-  options,
+/** The ripeness stage whose values a check takes, where the knowledge base stages them. */
+export function StageSelect({
   value,
   onChange,
   errors,
 }: {
-  options: CultivarOption[];
   value: string;
-  onChange: (slug: string) => void;
+  onChange: (stage: string) => void;
   errors?: string[];
 }) {
   const id = useId();
   return (
     <div className="space-y-1">
       <label htmlFor={id} className="block text-sm font-medium">
-        Cultivar
+        Ripeness stage
       </label>
       <select
         id={id}
@@ -100,17 +100,66 @@ export function CultivarSelect({
         onChange={(e) => onChange(e.target.value)}
         aria-describedby={`${id}-note`}
         className="w-full max-w-xs rounded-md border border-stone-300 bg-white px-2 py-1.5 text-sm"
+        data-testid="stage-select"
       >
-        <option value="">Custom values (no cultivar)</option>
-        {options.map((o) => (
-          <option key={o.slug} value={o.slug}>
-            {o.label}
+        <option value="">Any (unstaged values first)</option>
+        {STAGES.map((s) => (
+          <option key={s} value={s}>
+            {STAGE_LABELS[s]}
           </option>
         ))}
       </select>
-      <p id={`${id}-note`} aria-live="polite" className="text-xs text-red-700">
-        {errors?.join(' ')}
+      <p id={`${id}-note`} aria-live="polite" className="text-xs text-stone-500">
+        {errors?.length ? (
+          <span className="text-red-700">{errors.join(' ')}</span>
+        ) : (
+          'A value measured at another stage is used only with a warning.'
+        )}
       </p>
+    </div>
+  );
+}
+
+export function CultivarSelect({
+  options,
+  value,
+  onChange,
+  errors,
+  stage,
+}: {
+  options: CultivarOption[];
+  value: string;
+  onChange: (slug: string) => void;
+  errors?: string[];
+  /** The stage choice, shown under the cultivar once one is chosen. */
+  stage?: { value: string; onChange: (stage: string) => void; errors?: string[] };
+}) {
+  const id = useId();
+  return (
+    <div className="space-y-3">
+      <div className="space-y-1">
+        <label htmlFor={id} className="block text-sm font-medium">
+          Cultivar
+        </label>
+        <select
+          id={id}
+          value={value}
+          onChange={(e) => onChange(e.target.value)}
+          aria-describedby={`${id}-note`}
+          className="w-full max-w-xs rounded-md border border-stone-300 bg-white px-2 py-1.5 text-sm"
+        >
+          <option value="">Custom values (no cultivar)</option>
+          {options.map((o) => (
+            <option key={o.slug} value={o.slug}>
+              {o.label}
+            </option>
+          ))}
+        </select>
+        <p id={`${id}-note`} aria-live="polite" className="text-xs text-red-700">
+          {errors?.join(' ')}
+        </p>
+      </div>
+      {stage && value ? <StageSelect {...stage} /> : null}
     </div>
   );
 }

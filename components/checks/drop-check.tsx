@@ -23,19 +23,22 @@ export function DropCheck({
   initialCultivar: string;
 }) {
   const [surface, setSurface] = useState<DropSurface>('steel');
-  const { cultivar, setCultivar, body, state, fields } = useCheckForm<DropCheckResult>({
-    endpoint: '/api/checks/drop',
-    initialCultivar,
-    defaults: { heightMm: '150', padModulusMpa: '0.5', padThicknessMm: '25' },
-    choices: { surface },
-    keep: (key) => !key.startsWith('pad') || surface === 'foam',
-  });
+  const { cultivar, setCultivar, stage, setStage, body, state, fields } =
+    useCheckForm<DropCheckResult>({
+      endpoint: '/api/checks/drop',
+      initialCultivar,
+      defaults: { heightMm: '150', padModulusMpa: '0.5', padThicknessMm: '25' },
+      choices: { surface },
+      keep: (key) => !key.startsWith('pad') || surface === 'foam',
+    });
   const form = (
     <CheckForm
       label="Drop inputs"
       cultivars={cultivars}
       cultivar={cultivar}
       setCultivar={setCultivar}
+      stage={stage}
+      setStage={setStage}
       fields={fields}
       message={state.message}
     >

@@ -59,7 +59,7 @@ export function FruitFieldset({
   return (
     <fieldset className="space-y-3 rounded-md border border-stone-200 p-3">
       <legend className="px-1 text-xs font-medium uppercase tracking-wide text-stone-600">
-        Fruit {option ? '(leave empty to use the published value)' : ''}
+        Fruit {option ? '(leave empty: the knowledge base supplies each figure)' : ''}
       </legend>
       <MeasureFields fields={fields} state={state} option={option} />
     </fieldset>
@@ -98,6 +98,8 @@ export function CheckForm({
   cultivars,
   cultivar,
   setCultivar,
+  stage,
+  setStage,
   fields,
   message,
   children,
@@ -106,6 +108,8 @@ export function CheckForm({
   cultivars: CultivarOption[];
   cultivar: string;
   setCultivar: (slug: string) => void;
+  stage: string;
+  setStage: (stage: string) => void;
   fields: FieldsState;
   message: string | null;
   children: ReactNode;
@@ -117,6 +121,7 @@ export function CheckForm({
         value={cultivar}
         onChange={setCultivar}
         errors={fields.fieldErrors.cultivar}
+        stage={{ value: stage, onChange: setStage, errors: fields.fieldErrors.stage }}
       />
       {children}
       <FruitFieldset

@@ -19,20 +19,21 @@ export function SqueezeCheck({
   initialCultivar: string;
 }) {
   const [facing, setFacing] = useState<FacingPreset>('rigid');
-  const { cultivar, setCultivar, text, set, body, state } = useCheckForm<SqueezeCheckResult>({
-    endpoint: '/api/checks/squeeze',
-    initialCultivar,
-    defaults: {
-      padDiameterMm: '20',
-      padEdgeMm: '2',
-      safetyFactor: '2',
-      accelerationMs2: '2',
-      maxTravelMm: '2',
-    },
-    choices: { facing },
-    keep: (key) => !key.startsWith('facing') || facing === 'custom',
-    delayMs: 500,
-  });
+  const { cultivar, setCultivar, stage, setStage, text, set, body, state } =
+    useCheckForm<SqueezeCheckResult>({
+      endpoint: '/api/checks/squeeze',
+      initialCultivar,
+      defaults: {
+        padDiameterMm: '20',
+        padEdgeMm: '2',
+        safetyFactor: '2',
+        accelerationMs2: '2',
+        maxTravelMm: '2',
+      },
+      choices: { facing },
+      keep: (key) => !key.startsWith('facing') || facing === 'custom',
+      delayMs: 500,
+    });
   return (
     <CheckWorkbench
       check="squeeze"
@@ -45,6 +46,8 @@ export function SqueezeCheck({
           cultivars={cultivars}
           cultivar={cultivar}
           setCultivar={setCultivar}
+          stage={stage}
+          setStage={setStage}
           facing={facing}
           setFacing={setFacing}
           text={text}

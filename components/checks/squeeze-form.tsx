@@ -32,6 +32,8 @@ export interface SqueezeFormProps {
   cultivars: CultivarOption[];
   cultivar: string;
   setCultivar: (slug: string) => void;
+  stage: string;
+  setStage: (stage: string) => void;
   facing: FacingPreset;
   setFacing: (f: FacingPreset) => void;
   text: FormText;
@@ -51,6 +53,7 @@ export function SqueezeForm(p: SqueezeFormProps) {
         value={p.cultivar}
         onChange={p.setCultivar}
         errors={p.fieldErrors.cultivar}
+        stage={{ value: p.stage, onChange: p.setStage, errors: p.fieldErrors.stage }}
       />
       <fieldset className="space-y-3 rounded-md border border-stone-200 p-3">
         <legend className="px-1 text-xs font-medium uppercase tracking-wide text-stone-600">

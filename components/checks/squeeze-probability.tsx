@@ -24,7 +24,7 @@ const NAMES: Record<string, string> = {
   bruiseThreshold: 'bruise threshold',
 };
 
-/** Samples the published spreads on the server, showing progress as it streams. */
+/** Samples the inputs' evidence spreads on the server, showing progress as it streams. */
 export function SqueezeProbability({
   body,
   disabled,
@@ -76,8 +76,11 @@ export function SqueezeProbability({
     >
       <h3 className="text-sm font-medium">Probability of bruising</h3>
       <p className="text-xs text-stone-600">
-        1 000 samples of the inputs within their published spreads (a range as ±2 standard
-        deviations, positive values log-normal), each run through the model to its grip point.
+        1 000 samples of the inputs, each within the spread its evidence gives (listed with each
+        input used: its source&apos;s own spread; for an inherited value the spread across the
+        commodity&apos;s records; for a derived one its inputs&apos; spreads carried through; for a
+        typical value a wide stated band; a typed figure is held exact). A range counts as ±2
+        standard deviations; positive values are log-normal. Weaker evidence widens the band.
       </p>
       <Button
         type="button"
@@ -134,7 +137,7 @@ export function SqueezeProbability({
           ) : null}
           {result.without_spread.length ? (
             <p className="text-xs text-stone-600">
-              No published spread, held at the nominal value: {result.without_spread.join(', ')}.
+              No spread on its rung, held at the nominal value: {result.without_spread.join(', ')}.
             </p>
           ) : null}
         </div>

@@ -29,18 +29,21 @@ export function StackCheck({
   initialCultivar: string;
 }) {
   const units = useUnits();
-  const { cultivar, setCultivar, body, state, fields } = useCheckForm<StackCheckResult>({
-    endpoint: '/api/checks/stack',
-    initialCultivar,
-    defaults: { binLengthMm: '1200', binWidthMm: '1000', fillDepthMm: '600' },
-    choices: {},
-  });
+  const { cultivar, setCultivar, stage, setStage, body, state, fields } =
+    useCheckForm<StackCheckResult>({
+      endpoint: '/api/checks/stack',
+      initialCultivar,
+      defaults: { binLengthMm: '1200', binWidthMm: '1000', fillDepthMm: '600' },
+      choices: {},
+    });
   const form = (
     <CheckForm
       label="Stack inputs"
       cultivars={cultivars}
       cultivar={cultivar}
       setCultivar={setCultivar}
+      stage={stage}
+      setStage={setStage}
       fields={fields}
       message={state.message}
     >

@@ -7,6 +7,31 @@ export interface UsedValueView {
   rung: Rung;
   source: string | null;
   note: string | null;
+  low?: number | null;
+  high?: number | null;
+  sd?: number | null;
+  /** How the band the probability samples was chosen. */
+  spread?: string | null;
+}
+
+/** The band a figure is sampled in, in the reader's units, with how it was chosen. */
+function Band({ v }: { v: UsedValueView }) {
+  if (!v.spread) return null;
+  return (
+    <span className="block text-stone-500" data-testid="spread">
+      Spread:{' '}
+      {v.sd != null ? (
+        <>
+          SD <Measure value={v.sd} unit={v.unit} />
+        </>
+      ) : v.low != null && v.high != null ? (
+        <>
+          <Measure value={v.low} unit={v.unit} />–<Measure value={v.high} unit={v.unit} />
+        </>
+      ) : null}{' '}
+      ({v.spread})
+    </span>
+  );
 }
 
 /**
@@ -45,6 +70,7 @@ export function UsedValues({ rows }: { rows: [string, UsedValueView | null | und
                   </span>
                   {v.source ? ` — ${v.source}` : ''}
                   {v.note ? <span className="block text-stone-500">{v.note}</span> : null}
+                  <Band v={v} />
                 </>
               )}
             </td>

@@ -13,7 +13,8 @@ export function cellSentence(cell: GapCell, isCommodityRecord: boolean): string 
   if (cell.rung === 'own' && isCommodityRecord)
     return "The commodity record's own published value.";
   const from = cell.rung === 'derived' && cell.fromOwn ? ', from own values only' : '';
-  return `${RUNG_LABELS[cell.rung]}${from}.`;
+  const words = `${RUNG_LABELS[cell.rung]}${from}.`;
+  return words[0].toUpperCase() + words.slice(1);
 }
 
 /** Colour adds to the word: strong evidence green, inherited blue, typical amber, none red. */
