@@ -36,6 +36,12 @@ export function ReportActions({ id, canRerun }: { id: number; canRerun: boolean 
       >
         Curves as CSV
       </a>
+      <a
+        href={`/api/assessments/${id}/inputs`}
+        className="rounded-md border border-stone-300 bg-white px-3 py-1.5 text-sm font-medium"
+      >
+        Inputs and evidence as CSV
+      </a>
       {canRerun ? (
         <Button type="button" onClick={() => void rerun()} disabled={state.pending}>
           {state.pending ? 'Re-running…' : 'Re-run on the newer data'}

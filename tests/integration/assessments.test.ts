@@ -13,6 +13,7 @@ import * as one from '@/app/api/assessments/[id]/route';
 import * as rerun from '@/app/api/assessments/[id]/rerun/route';
 import * as curves from '@/app/api/assessments/[id]/curves/route';
 import * as report from '@/app/api/assessments/[id]/report/route';
+import * as inputsCsv from '@/app/api/assessments/[id]/inputs/route';
 
 const req = (method: string, body?: unknown) =>
   new Request('http://tenderline.test/api/assessments', {
@@ -166,6 +167,29 @@ describe('assessments pin their data', () => {
     expect(
       Math.abs(again.results.margin.value / (1.5 * saved.results.margin.value) - 1),
     ).toBeLessThan(0.005);
+    // The inputs CSV carries each figure's rung and source, and both pinned revisions.
+    const csv = await (await inputsCsv.GET(req('GET'), ctx(saved.id))).text();
+    const lines = csv.trim().split('\r\n');
+    expect(lines[0]).toBe(
+      'figure,value,unit,rung,source,note,spread_low,spread_high,spread_sd,spread_basis',
+    );
+    expect(
+      lines.find((l) => l.startsWith("Young's modulus,3,MPa,this cultivar's published value,")),
+    ).toBeTruthy();
+    expect(
+      lines.find(
+        (l) =>
+          l.startsWith('Static bruise threshold,') && l.includes("the commodity's published value"),
+      ),
+    ).toBeTruthy();
+    expect(lines.find((l) => l.startsWith('commodity record revision,'))).toContain(
+      `revision id ${type.published_revision_id}`,
+    );
+    expect(lines.find((l) => l.startsWith('model version,'))).toBeTruthy();
+    // Another role's request for it is refused.
+    signInAs(await userId(ACCOUNTS.buyer));
+    expect((await inputsCsv.GET(req('GET'), ctx(saved.id))).status).toBe(403);
+    signInAs(await userId(ACCOUNTS.engineer));
   });
 
   it('stamps every result with the model version and the result schema it was made with', async () => {
