@@ -34,6 +34,51 @@ describe('the knowledge base feeds every check', () => {
     expect(records.some((r) => r.name.includes('cultivar not named'))).toBe(false);
   });
 
+  it('every commodity record is complete for the three checks (published, or typical labelled so)', () => {
+    // The list of the knowledge-base issue, written out: each item and the variants that meet it.
+    const RIGID = ['steel', 'stainless steel', 'mild steel', 'galvanised steel', 'aluminium'];
+    const need: [string, (v: CultivarRecord['values'][number]) => boolean][] = [
+      ["Young's modulus", (v) => v.quantity === 'youngs_modulus'],
+      ["Poisson's ratio", (v) => v.quantity === 'poisson_ratio'],
+      ['density', (v) => v.quantity === 'density'],
+      ['equatorial diameter', (v) => v.quantity === 'diameter' && v.variant === 'equatorial'],
+      ['axial diameter', (v) => v.quantity === 'diameter' && v.variant === 'axial'],
+      ['mass', (v) => v.quantity === 'mass'],
+      [
+        'static threshold or bioyield stress',
+        (v) => v.quantity === 'static_bruise_threshold' || v.quantity === 'bioyield_stress',
+      ],
+      [
+        'friction on rubber',
+        (v) => v.quantity === 'friction_coefficient' && /rubber/.test(v.variant),
+      ],
+      [
+        'friction on steel',
+        (v) => v.quantity === 'friction_coefficient' && RIGID.includes(v.variant),
+      ],
+      [
+        'friction on plastic',
+        (v) => v.quantity === 'friction_coefficient' && /plastic/.test(v.variant),
+      ],
+      ['bulk density', (v) => v.quantity === 'bulk_density'],
+    ];
+    const gaps: string[] = [];
+    for (const r of records.filter((x) => x.isType)) {
+      for (const [label, ok] of need) if (!r.values.some(ok)) gaps.push(`${r.slug}: ${label}`);
+      const surfaces = new Set(
+        r.values
+          .filter(
+            (v) =>
+              v.quantity === 'drop_threshold_height' || v.quantity === 'impact_threshold_energy',
+          )
+          .map((v) => v.variant),
+      );
+      if (surfaces.size < 2)
+        gaps.push(`${r.slug}: impact figures onto ${surfaces.size} surface(s)`);
+    }
+    expect(gaps).toEqual([]);
+  });
+
   it('every record gives a squeeze, drop and stack margin with only the machine typed', () => {
     const failing = coverage.flatMap((c) =>
       COVERED_CHECKS.filter((k) => !c.runs[k]).map((k) => `${c.slug}: ${k}`),
