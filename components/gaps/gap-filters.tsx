@@ -14,16 +14,21 @@ export function GapFilters({
 }) {
   return (
     <form method="get" className="flex flex-wrap items-end gap-3" data-testid="gap-filters">
-      <label className="min-w-36 flex-1 text-sm sm:flex-none">
-        Sort by
-        <select name="sort" defaultValue={query.sort} className={SELECT}>
+      <div className="min-w-36 flex-1 text-sm sm:flex-none">
+        <label htmlFor="gaps-sort">Sort by</label>
+        <select id="gaps-sort" name="sort" defaultValue={query.sort} className={SELECT}>
           <option value="name">Name</option>
           <option value="own">Most own values</option>
         </select>
-      </label>
-      <label className="min-w-36 flex-1 text-sm sm:flex-none">
-        Commodity
-        <select name="commodity" defaultValue={query.commodity ?? ''} className={SELECT}>
+      </div>
+      <div className="min-w-36 flex-1 text-sm sm:flex-none">
+        <label htmlFor="gaps-commodity">Commodity</label>
+        <select
+          id="gaps-commodity"
+          name="commodity"
+          defaultValue={query.commodity ?? ''}
+          className={SELECT}
+        >
           <option value="">All</option>
           {commodities.map((c) => (
             <option key={c.slug} value={c.slug}>
@@ -31,10 +36,10 @@ export function GapFilters({
             </option>
           ))}
         </select>
-      </label>
-      <label className="min-w-36 flex-1 text-sm sm:flex-none">
-        With a cell on
-        <select name="rung" defaultValue={query.rung ?? ''} className={SELECT}>
+      </div>
+      <div className="min-w-36 flex-1 text-sm sm:flex-none">
+        <label htmlFor="gaps-rung">With a cell on</label>
+        <select id="gaps-rung" name="rung" defaultValue={query.rung ?? ''} className={SELECT}>
           <option value="">Any rung</option>
           {GAP_RUNGS.map((r) => (
             <option key={r} value={r}>
@@ -42,7 +47,7 @@ export function GapFilters({
             </option>
           ))}
         </select>
-      </label>
+      </div>
       <button
         type="submit"
         className="rounded-md border border-stone-300 bg-white px-3 py-1.5 text-sm font-medium text-stone-800 hover:bg-stone-100 focus-visible:ring-2 focus-visible:ring-leaf-600"

@@ -33,8 +33,8 @@ test('an editor reads the data gaps, starts a draft from a cell and imports valu
   await expect(page.getByTestId('most-wanted').locator('li').first()).toContainText('input');
 
   // Filters live in the address; the matrix shows rungs in words.
-  await page.getByLabel('Commodity').selectOption('apple');
-  await page.getByLabel('Sort by').selectOption('own');
+  await page.getByLabel('Commodity', { exact: true }).selectOption('apple');
+  await page.getByLabel('Sort by', { exact: true }).selectOption('own');
   await page.getByRole('button', { name: 'Show' }).click();
   await expect(page).toHaveURL(/commodity=apple/);
   await expect(page).toHaveURL(/sort=own/);
