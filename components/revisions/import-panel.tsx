@@ -4,7 +4,7 @@ import { useRouter } from 'next/navigation';
 import { useId, useState, type FormEvent } from 'react';
 import { Button } from '@/components/ui/button';
 import { FormMessage } from '@/components/ui/form-message';
-import { IMPORT_COLUMNS, MAX_IMPORT_ROWS, REQUIRED_COLUMNS } from '@/lib/properties/import-csv';
+import { IMPORT_COLUMNS, MAX_IMPORT_ROWS, REQUIRED_COLUMNS } from '@/lib/validation/import-csv';
 
 type Answer = { message?: string; fieldErrors?: Record<string, string[]> };
 

@@ -4,7 +4,7 @@ import { typed } from '@/lib/db-kysely';
 import { assertCan, type Actor } from '@/lib/auth/actor';
 import { recordAudit } from '@/lib/audit-trail';
 import { ConflictError, ForbiddenError, NotFoundError, ValidationError } from '@/lib/errors';
-import { decodeImport, lineErrors, parseValueCsv } from '@/lib/properties/import-csv';
+import { decodeImport, lineErrors, parseValueCsv } from '@/lib/validation/import-csv';
 import { asStage, type Quantity } from '@/lib/properties/quantities';
 import { getUnitSystem } from './users';
 import { valueRow } from './value-row';

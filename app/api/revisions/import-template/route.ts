@@ -2,7 +2,7 @@ import { NextResponse } from 'next/server';
 import { requireActor } from '@/lib/auth/session';
 import { listSources } from '@/lib/data/editor-queue';
 import { handle } from '@/lib/http/handler';
-import { templateCsv } from '@/lib/properties/import-csv';
+import { templateCsv } from '@/lib/validation/import-csv';
 
 /** The import template: the header row and one example row naming an existing source. */
 export const GET = handle(async () => {

@@ -4,7 +4,7 @@ import { importDraftValues } from '@/lib/data/value-import';
 import { readBytes } from '@/lib/http/body';
 import { handle } from '@/lib/http/handler';
 import { readUploadForm, uploadedFile } from '@/lib/lab-tests/read-upload';
-import { MAX_IMPORT_BYTES } from '@/lib/properties/import-csv';
+import { MAX_IMPORT_BYTES } from '@/lib/validation/import-csv';
 import { parseId } from '@/lib/validation/id';
 
 type Context = { params: Promise<{ id: string }> };

@@ -1,7 +1,7 @@
 import { toCsv } from '@/lib/csv';
 import { displayUnit, fromDisplay, type UnitSystem } from '@/lib/units';
 import { revisionValueSchema, type RevisionValueInput } from '@/lib/validation/revisions';
-import { QUANTITIES, QUANTITY_KEYS, type Quantity } from './quantities';
+import { QUANTITIES, QUANTITY_KEYS, type Quantity } from '@/lib/properties/quantities';
 
 /**
  * Values for a draft from a CSV file, one value a row, with no I/O: the columns, the parse, and

@@ -6,7 +6,7 @@ import {
   parseValueCsv,
   templateCsv,
   type ImportContext,
-} from '@/lib/properties/import-csv';
+} from '@/lib/validation/import-csv';
 
 const HEADER =
   'quantity,variant,value,unit,low,high,sd,samples,method,ripeness,stage,observation,temperature,storage,loading_rate,probe,note,typical,typical_basis,source_key';
