@@ -44,7 +44,12 @@ export interface SqueezeFormProps {
 
 /** The squeeze check's inputs: fruit (or a cultivar's published values), pads and the move. */
 export function SqueezeForm(p: SqueezeFormProps) {
-  const option = p.cultivars.find((o) => o.slug === p.cultivar);
+  const chosen = p.cultivars.find((o) => o.slug === p.cultivar);
+  // The friction the check takes depends on the pad's facing: show the one for this facing.
+  const option = chosen && {
+    ...chosen,
+    prefill: { ...chosen.prefill, friction: chosen.prefill[`friction@${p.facing}`] },
+  };
   const state = { text: p.text, set: p.set, fieldErrors: p.fieldErrors };
   return (
     <form className="space-y-3" onSubmit={(e) => e.preventDefault()} aria-label="Squeeze inputs">

@@ -3,7 +3,9 @@ import type { Actor } from '@/lib/auth/actor';
 import { listPublishedCultivars } from '@/lib/data/cultivars';
 import type { Rung } from '@/lib/evidence/rungs';
 import { ValidationError } from '@/lib/errors';
+import { climb } from '@/lib/evidence/ladder';
 import { evidenceForRecords } from './evidence-set';
+import { FACING_KEYS, frictionSurfacesFor } from './facings';
 import { fruitFromEvidence } from './resolve-fruit';
 import type { UsedValue } from './used-value';
 
@@ -40,6 +42,14 @@ export async function cultivarOptions(actor: Actor) {
         densityKgM3: figure(f.densityKgM3),
         staticThresholdKpa: figure(f.staticThresholdKpa),
       };
+      for (const facing of FACING_KEYS) {
+        const friction = climb(
+          f.evidence,
+          { quantity: 'friction_coefficient', variants: frictionSurfacesFor(facing) },
+          { unit: '–' },
+        );
+        prefill[`friction@${facing}`] = figure(friction?.used ?? null);
+      }
       complete = f.staticThresholdKpa !== null;
     } catch (error) {
       if (!(error instanceof ValidationError)) throw error;

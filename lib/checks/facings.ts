@@ -56,7 +56,8 @@ export function frictionSurfacesFor(facing: FacingPreset): string[] {
       'mild steel',
       'galvanised steel',
       'hard plastic',
+      'plastic',
     ];
-  if (facing === 'pe-foam') return ['foam', 'padded surface', 'belt rubber'];
-  return ['belt rubber', 'padded surface', 'foam'];
+  if (facing === 'pe-foam') return ['foam', 'padded surface', 'belt rubber', 'rubber'];
+  return ['belt rubber', 'rubber', 'padded surface', 'foam'];
 }

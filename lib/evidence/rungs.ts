@@ -51,7 +51,8 @@ export function restsOn(rung: Rung | null, what: string[]): string {
       : rung === 'derived'
         ? 'a derived value'
         : 'a typical value of the trade';
-  return `rests on ${kind} for ${what.join(' and ')}`;
+  const list = new Intl.ListFormat('en', { style: 'long', type: 'conjunction' }).format(what);
+  return `rests on ${kind} for ${list}`;
 }
 
 /** Where a used figure came from, in words: its rung, source and note (reports, PDFs, CSVs). */
