@@ -12,13 +12,21 @@ const BIN_FIELDS: readonly FieldSpec[] = [
   ['binLengthMm', 'Bin inside length'],
   ['binWidthMm', 'Bin inside width'],
   ['fillDepthMm', 'Fill depth'],
-  ['bulkDensityKgM3', 'Bulk density', 'empty: published, else 60 % of the fruit density'],
+  [
+    'bulkDensityKgM3',
+    'Bulk density',
+    'empty: the knowledge base (the cultivar, its commodity, a typical value), else 60 % of the fruit density',
+  ],
   [
     'wallFriction',
     'Wall friction coefficient',
-    'empty: published (plywood or wood), else 0.4 typical',
+    'empty: the knowledge base (on plywood, wood or plastic), else 0.4 typical',
   ],
-  ['lateralRatio', 'Lateral pressure ratio K', 'empty: published, else 0.4 typical'],
+  [
+    'lateralRatio',
+    'Lateral pressure ratio K',
+    'empty: the knowledge base, else 0.4 typical (bin design takes 0.3–0.6)',
+  ],
 ];
 
 export function StackCheck({
