@@ -115,6 +115,24 @@ describe('the knowledge base feeds every check', () => {
         )
       );
     });
+    const typicalBy = new Map<string, number>();
+    for (const c of cultivars)
+      for (const f of c.figures)
+        if (f.rung === 'typical')
+          typicalBy.set(
+            `${f.check}: ${f.figure}`,
+            (typicalBy.get(`${f.check}: ${f.figure}`) ?? 0) + 1,
+          );
+    const ownData = Object.fromEntries(
+      COVERED_CHECKS.map((k) => [
+        k,
+        cultivars.filter((c) =>
+          c.figures
+            .filter((f) => f.check === k)
+            .every((f) => f.rung === 'own' || f.rung === 'derived'),
+        ).length,
+      ]),
+    );
     const sources = await db('sources').select('kind');
     const values = await db('revision_values as v')
       .join('cultivars as c', 'c.published_revision_id', 'v.revision_id')
@@ -127,6 +145,8 @@ describe('the knowledge base feeds every check', () => {
         `used figures per rung over cultivars: ${JSON.stringify(counts)} of ${total}`,
         `typical share ${((counts.typical / total) * 100).toFixed(1)} %`,
         `cultivars with own modulus and a threshold: ${withModulusAndThreshold.length}`,
+        `cultivars whose every figure is own or derived, per check: ${JSON.stringify(ownData)}`,
+        `typical figures by check and figure: ${JSON.stringify(Object.fromEntries([...typicalBy].sort((a, b) => b[1] - a[1])))}`,
         `sources ${sources.length}; values ${values.length}, from memory ${memory} (${((memory / values.length) * 100).toFixed(1)} %)`,
       ].join('\n'),
     );
