@@ -33,7 +33,6 @@ export interface UsersTable {
   disabled: Generated<Bool>;
   created_at: Generated<Timestamp>;
   updated_at: Generated<Timestamp>;
-  session_generation: Generated<number>;
   unit_system: Generated<string>;
 }
 

@@ -5,8 +5,8 @@ import type { Knex } from 'knex';
  * the table opens no session), with the user, and when the session started, was last renewed and
  * ends. Signing out deletes the row; "sign out everywhere", a password change, disabling an
  * account and a role change delete the user's rows. Times are epoch milliseconds, compared in SQL
- * the same way on SQLite and PostgreSQL. The old session_generation column stays unused for now,
- * so the rollback of this step touches nothing but its own table.
+ * the same way on SQLite and PostgreSQL. (The old session_generation column is dropped by a later
+ * step, 20261205000500, so the rollback of this step touches nothing but its own table.)
  */
 export async function up(knex: Knex): Promise<void> {
   await knex.schema.createTable('sessions', (t) => {

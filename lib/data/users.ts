@@ -1,6 +1,11 @@
 import 'server-only';
 import { isUnitSystem, type UnitSystem } from '@/lib/units';
+import type { Knex } from 'knex';
+import type { Selectable } from 'kysely';
 import { db } from '@/lib/db';
+import { typed } from '@/lib/db-kysely';
+import type { UsersTable } from '@/lib/db-schema';
+import { insertedId, toBool, toIso } from '@/lib/db-values';
 import { assertCan, type Actor } from '@/lib/auth/actor';
 import { hashPassword, verifyPassword } from '@/lib/auth/password';
 import { isRole, type Role } from '@/lib/auth/roles';
@@ -24,19 +29,29 @@ export interface UserRow {
   created_at: string;
 }
 
-interface UserRecord extends UserRow {
-  password_hash: string;
+const USER_COLUMNS = ['id', 'email', 'name', 'role', 'disabled', 'created_at'] as const;
+
+/** A typed users row as pages and routes show it (no password hash). */
+function toRow(r: Pick<Selectable<UsersTable>, (typeof USER_COLUMNS)[number]>): UserRow {
+  return {
+    id: r.id,
+    email: r.email,
+    name: r.name,
+    role: isRole(r.role) ? r.role : 'buyer',
+    disabled: toBool(r.disabled),
+    created_at: toIso(r.created_at),
+  };
 }
 
-function toRow(r: Record<string, unknown>): UserRow {
-  return {
-    id: Number(r.id),
-    email: String(r.email),
-    name: String(r.name),
-    role: isRole(r.role) ? r.role : 'buyer',
-    disabled: Boolean(r.disabled),
-    created_at: new Date(r.created_at as string | number).toISOString(),
-  };
+/** One user's row in a transaction (typed), or a 404. */
+async function userRow(trx: Knex.Transaction, id: number) {
+  const row = await typed(trx)
+    .selectFrom('users')
+    .select(USER_COLUMNS)
+    .where('id', '=', id)
+    .executeTakeFirst();
+  if (!row) throw new NotFoundError('No such user.');
+  return row;
 }
 
 /** Sign a user out on every device ("Sign out everywhere"): their session rows go. */
@@ -55,9 +70,7 @@ export async function endAllSessions(userId: number, reason: string): Promise<vo
 
 export async function listUsers(actor: Actor): Promise<UserRow[]> {
   assertCan(actor, 'users:manage');
-  const rows = await db('users')
-    .select('id', 'email', 'name', 'role', 'disabled', 'created_at')
-    .orderBy('email');
+  const rows = await typed().selectFrom('users').select(USER_COLUMNS).orderBy('email').execute();
   return rows.map(toRow);
 }
 
@@ -66,8 +79,7 @@ export async function updateUser(actor: Actor, userId: number, input: unknown): 
   assertCan(actor, 'users:manage');
   const change = parseInput(userUpdateSchema, input);
   return db.transaction(async (trx) => {
-    const before = await trx('users').where({ id: userId }).first();
-    if (!before) throw new NotFoundError('No such user.');
+    const before = await userRow(trx, userId);
     if (
       before.id === actor.id &&
       (change.disabled === true || (change.role && change.role !== 'admin'))
@@ -87,16 +99,20 @@ export async function updateUser(actor: Actor, userId: number, input: unknown): 
       action: 'user.update',
       entity: 'user',
       entityId: userId,
-      detail: { before: { role: before.role, disabled: Boolean(before.disabled) }, change },
+      detail: { before: { role: before.role, disabled: toBool(before.disabled) }, change },
     });
-    return toRow(await trx('users').where({ id: userId }).first());
+    return toRow(await userRow(trx, userId));
   });
 }
 
 /** Change one's own password after checking the current one. */
 export async function changeOwnPassword(actor: Actor, input: unknown): Promise<void> {
   const change = parseInput(changePasswordSchema, input);
-  const r = (await db('users').where({ id: actor.id }).first()) as UserRecord | undefined;
+  const r = await typed()
+    .selectFrom('users')
+    .select('password_hash')
+    .where('id', '=', actor.id)
+    .executeTakeFirst();
   if (!r) throw new NotFoundError('No such user.');
   if (!(await verifyPassword(change.currentPassword, r.password_hash))) {
     throw new ValidationError('The current password is not right.', {
@@ -124,10 +140,12 @@ export async function listSignInLocks(actor: Actor): Promise<(AccountLock & { us
   assertCan(actor, 'users:manage');
   const locks = await listAccountLocks();
   if (!locks.length) return [];
-  const rows = await db('users')
-    .whereIn('email', [...new Set(locks.map((l) => l.email))])
-    .select('id', 'email');
-  const ids = new Map(rows.map((r) => [String(r.email), Number(r.id)]));
+  const rows = await typed()
+    .selectFrom('users')
+    .select(['id', 'email'])
+    .where('email', 'in', [...new Set(locks.map((l) => l.email))])
+    .execute();
+  const ids = new Map(rows.map((r) => [r.email, r.id]));
   return locks.flatMap((l) => (ids.has(l.email) ? [{ ...l, userId: ids.get(l.email)! }] : []));
 }
 
@@ -135,8 +153,7 @@ export async function listSignInLocks(actor: Actor): Promise<(AccountLock & { us
 export async function clearSignInLock(actor: Actor, userId: number): Promise<number> {
   assertCan(actor, 'users:manage');
   return db.transaction(async (trx) => {
-    const user = await trx('users').where({ id: userId }).first();
-    if (!user) throw new NotFoundError('No such user.');
+    const user = await userRow(trx, userId);
     const cleared = await clearAccountLimits(trx, user.email);
     await recordAudit(trx, {
       actorId: actor.id,
@@ -151,10 +168,14 @@ export async function clearSignInLock(actor: Actor, userId: number): Promise<num
 
 /** Create a user inside an existing transaction (invitation acceptance); hash the password first. */
 export async function insertUser(
-  trx: import('knex').Knex.Transaction,
+  trx: Knex.Transaction,
   user: { email: string; name: string; role: Role; passwordHash: string },
 ): Promise<number> {
-  const existing = await trx('users').where({ email: user.email.toLowerCase() }).first();
+  const existing = await typed(trx)
+    .selectFrom('users')
+    .select('id')
+    .where('email', '=', user.email.toLowerCase())
+    .executeTakeFirst();
   if (existing) throw new ConflictError('An account with this e-mail already exists.');
   const [row] = await trx('users')
     .insert({
@@ -167,13 +188,17 @@ export async function insertUser(
       updated_at: new Date(),
     })
     .returning('id');
-  return typeof row === 'object' ? Number(row.id) : Number(row);
+  return insertedId(row);
 }
 
 /** The user's display units (SI unless they chose US customary). */
 export async function getUnitSystem(actor: Actor): Promise<UnitSystem> {
-  const row = await db('users').where({ id: actor.id }).select('unit_system').first();
-  return isUnitSystem(row?.unit_system) ? row.unit_system : 'si';
+  const row = await typed()
+    .selectFrom('users')
+    .select('unit_system')
+    .where('id', '=', actor.id)
+    .executeTakeFirst();
+  return row && isUnitSystem(row.unit_system) ? row.unit_system : 'si';
 }
 
 /** Choose one's own display units: `{ unitSystem: 'si' | 'us' }`. */
