@@ -43,3 +43,31 @@ test('an engineer squeezes a seeded cultivar, changes the pad, saves, reports an
   expect(bytes.subarray(0, 5).toString()).toBe('%PDF-');
   await page.screenshot({ path: 'tests/artifacts/assessment-squeeze.png', fullPage: true });
 });
+
+test('with only the machine typed, a cultivar runs on the knowledge base and every figure says where it came from', async ({
+  page,
+  signInAs,
+}) => {
+  test.setTimeout(90_000);
+  await signInAs('engineer');
+  await page.goto('/checks/squeeze?cultivar=apple-jonathan');
+  // Nothing of the fruit is typed: the placeholders name the rung each figure comes from.
+  await expect(page.getByLabel("Young's modulus", { exact: true })).toHaveAttribute(
+    'placeholder',
+    /\(own\)$/,
+  );
+  await expect(page.getByLabel("Poisson's ratio", { exact: true })).toHaveAttribute(
+    'placeholder',
+    /\((own|commodity|derived|typical)\)$/,
+  );
+  await expect(page.getByTestId('margin-value')).toBeVisible({ timeout: 30_000 });
+  const used = page.getByTestId('used-values');
+  await expect(used).toContainText("this cultivar's published value");
+  await expect(used).toContainText("the commodity's published value");
+  await expect(page.getByTestId('rests-on')).toContainText('The verdict rests on');
+  // A stage with no values of its own: the page says which stage the figures were measured at.
+  await page.getByTestId('stage-select').selectOption('ripe');
+  await expect(page.getByTestId('margin-value')).toBeVisible({ timeout: 30_000 });
+  await page.setViewportSize({ width: 390, height: 900 });
+  await page.screenshot({ path: 'tests/artifacts/check-squeeze-evidence-390.png', fullPage: true });
+});
