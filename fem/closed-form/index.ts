@@ -41,3 +41,4 @@ export {
   type ApparentModulusInput,
   type ApparentModulusFit,
 } from './apparent-modulus';
+export { hertzBruiseRadius, hertzForceForBruiseRadius, onsetContactRadius } from './hertz-bruise';
