@@ -232,6 +232,22 @@ export interface SessionsTable {
   expires_ms: number | string;
 }
 
+/** migrations/20261205000600_grade_rules.ts: the largest bruise a grade tolerates. */
+export interface GradeRulesTable {
+  id: Generated<number>;
+  slug: string;
+  name: string;
+  commodity_id: number | null;
+  kind: string;
+  measure: string;
+  limit_value: number;
+  max_depth_mm: number | null;
+  source_id: number | null;
+  note: string | null;
+  created_by: number | null;
+  created_at: Generated<Timestamp>;
+}
+
 export interface Database {
   users: UsersTable;
   sign_in_limits: SignInLimitsTable;
@@ -248,4 +264,5 @@ export interface Database {
   compression_tests: CompressionTestsTable;
   assessments: AssessmentsTable;
   sessions: SessionsTable;
+  grade_rules: GradeRulesTable;
 }

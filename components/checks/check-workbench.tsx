@@ -51,6 +51,7 @@ export function CheckWorkbench<R>({
           pending={pending}
           basis={basis(result)}
           restsOn={report?.restsOn}
+          bruise={report?.bruise}
         />
         {result && report ? (
           <>

@@ -1,4 +1,17 @@
+import type { BruiseView } from '@/lib/checks/bruise';
 import { VERDICT_RULE, type Verdict } from '@/lib/checks/verdict';
+
+const BRUISE_TONE: Record<BruiseView['verdict'], string> = {
+  'no bruise': 'border-leaf-600 bg-leaf-50 text-leaf-900',
+  'within tolerance': 'border-leaf-600 bg-leaf-50 text-leaf-900',
+  'beyond tolerance': 'border-red-600 bg-red-50 text-red-900',
+};
+
+const BRUISE_HEADLINE: Record<BruiseView['verdict'], string> = {
+  'no bruise': 'no bruise',
+  'within tolerance': "bruise within the grade's tolerance",
+  'beyond tolerance': 'bruise beyond tolerance',
+};
 
 const TONE: Record<Verdict, string> = {
   comfortable: 'border-leaf-600 bg-leaf-50 text-leaf-900',
@@ -13,21 +26,37 @@ export function MarginPanel({
   pending,
   hasResult,
   restsOn,
+  bruise,
 }: {
   margin: { value: number; verdict: Verdict } | null;
   basis: string;
   /** The weakest rung of evidence the verdict rests on, in words. */
   restsOn?: string | null;
+  /** The predicted bruise against the grade rule: the verdict, with the onset margin beside it. */
+  bruise?: BruiseView | null;
   pending: boolean;
   hasResult: boolean;
 }) {
   return (
     <div
-      className={`rounded-lg border-2 p-4 ${margin ? TONE[margin.verdict] : 'border-stone-300 bg-white'}`}
+      className={`rounded-lg border-2 p-4 ${bruise ? BRUISE_TONE[bruise.verdict] : margin ? TONE[margin.verdict] : 'border-stone-300 bg-white'}`}
       data-testid="margin-panel"
       aria-busy={pending}
     >
-      <p className="text-xs font-medium uppercase tracking-wide">Bruise margin</p>
+      {bruise ? (
+        <div className="mb-3 border-b border-current/20 pb-3">
+          <p className="text-xs font-medium uppercase tracking-wide">Verdict against the grade</p>
+          <p className="text-2xl font-semibold" data-testid="bruise-verdict">
+            {BRUISE_HEADLINE[bruise.verdict]}
+          </p>
+          <p className="mt-1 text-sm" data-testid="bruise-words">
+            {bruise.words}
+          </p>
+        </div>
+      ) : null}
+      <p className="text-xs font-medium uppercase tracking-wide">
+        {bruise ? 'Onset margin (threshold ÷ peak pressure)' : 'Bruise margin'}
+      </p>
       {margin ? (
         <>
           <p className="num text-4xl font-semibold" data-testid="margin-value">

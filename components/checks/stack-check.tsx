@@ -70,16 +70,36 @@ export function StackCheck({
         'Static bruise threshold ÷ Hertz contact pressure between two bottom-layer fruit.'
       }
       extras={(r) => (
-        <p className="text-sm" data-testid="deepest-safe">
-          Deepest safe fill:{' '}
-          <strong className="num">
-            {r.deepest_safe_fill_mm === undefined
-              ? 'needs a threshold'
-              : r.deepest_safe_fill_mm === null
-                ? 'any depth (the bin pressure levels off below the limit)'
-                : units.show(r.deepest_safe_fill_mm, 'mm')}
-          </strong>
-        </p>
+        <div className="space-y-1 text-sm">
+          <p data-testid="deepest-safe">
+            Deepest fill with no bruise at all:{' '}
+            <strong className="num">
+              {r.deepest_safe_fill_mm === undefined
+                ? 'needs a threshold'
+                : r.deepest_safe_fill_mm === null
+                  ? 'any depth (the bin pressure levels off below the limit)'
+                  : units.show(r.deepest_safe_fill_mm, 'mm')}
+            </strong>
+            {typeof r.layers?.no_bruise === 'number'
+              ? ` — ${r.layers.no_bruise} layers of fruit`
+              : ''}
+          </p>
+          {r.bruise?.rule ? (
+            <p data-testid="deepest-within">
+              Deepest fill whose bottom bruise stays within {r.bruise.rule.name}:{' '}
+              <strong className="num">
+                {r.deepest_fill_within_tolerance_mm === null
+                  ? 'any depth (the bin pressure levels off below it)'
+                  : r.deepest_fill_within_tolerance_mm === undefined
+                    ? '—'
+                    : units.show(r.deepest_fill_within_tolerance_mm, 'mm')}
+              </strong>
+              {typeof r.layers?.within_tolerance === 'number'
+                ? ` — ${r.layers.within_tolerance} layers of fruit`
+                : ''}
+            </p>
+          ) : null}
+        </div>
       )}
     />
   );

@@ -27,6 +27,7 @@ const TABLE = {
   'invitations:create-buyer': ['admin', 'editor'],
   'invitations:create-any': ['admin'],
   'users:manage': ['admin'],
+  'grade-rules:manage': ['admin'],
   'outbox:read': ['admin'],
   'audit:read': ['admin'],
 } as const satisfies Record<string, readonly Role[]>;

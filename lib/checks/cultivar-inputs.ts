@@ -21,6 +21,7 @@ export interface PinnedRecord {
 /** The cultivar a check runs for: its own revision, its commodity record's, and the evidence. */
 export interface PinnedCultivar extends PinnedRecord {
   commodity: string;
+  commodityId: number;
   /** True when the user chose the commodity's own record rather than a cultivar. */
   isCommodityRecord: boolean;
   /** The commodity record's published revision, when it has one (and is not the choice itself). */
@@ -81,6 +82,7 @@ export async function pinCultivar(
   return {
     ...own,
     commodity: record.commodity.name,
+    commodityId: record.commodity.id,
     isCommodityRecord: record.isType,
     commodityRecord: type ? pinOf(type) : null,
     stage,

@@ -78,6 +78,8 @@ export const stackCheckSchema = z
     bulkDensityKgM3: measure('Bulk density', 'kg/m³', 0, 3000).optional(),
     wallFriction: measure('Wall friction coefficient', '', 0, 2).optional(),
     lateralRatio: measure('Lateral pressure ratio', '', 0, 1).optional(),
+    /** The grade rule the bruise is judged by (its slug); the commodity's strictest by default. */
+    gradeRule: slugSchema.optional(),
   })
   .strict();
 

@@ -5,6 +5,7 @@
  * reader's system only where it is shown.
  */
 import type { z } from 'zod';
+import type { BruiseView } from './bruise';
 import type { UsedValue } from './used-value';
 import type { Verdict } from './verdict';
 
@@ -52,6 +53,8 @@ export interface CheckReport {
   margin: MarginView | null;
   /** The weakest rung of evidence the verdict rests on, in words (null for older results). */
   restsOn: string | null;
+  /** The predicted bruise judged against a grade rule, where the check sizes one. */
+  bruise?: BruiseView | null;
   charts: ChartSpec[];
   /** The curves as columns (each named with its unit) and rows. */
   curves: { columns: string[]; rows: (number | null)[][] };

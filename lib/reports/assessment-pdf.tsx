@@ -76,12 +76,14 @@ function Report({ a, check }: { a: Assessment; check: RegisteredCheck }) {
             ? ` — commodity record revision ${a.newerCommodityRevision.number} has been published since`
             : ''}
         </Text>
+        {report.bruise ? <Text style={s.margin}>{report.bruise.words}</Text> : null}
         <Text style={s.margin}>
-          Bruise margin{' '}
+          {report.bruise ? 'Onset margin' : 'Bruise margin'}{' '}
           {margin ? `${margin.value.toFixed(2)} — ${margin.verdict}` : '— (no threshold)'}
         </Text>
         <Text style={s.muted}>
           {margin ? `Basis: ${margin.basis} threshold. ` : ''}
+          {report.restsOn ? `${report.restsOn} ` : ''}
           {VERDICT_RULE}
         </Text>
         <Text style={s.h2}>Scenario</Text>

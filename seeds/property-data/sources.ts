@@ -1,5 +1,6 @@
 import { OTHER_SOURCES } from './sources-other';
 import { CITRUS_TROPICAL_SOURCES } from './sources-citrus-tropical';
+import { GRADE_SOURCES } from './sources-grades';
 import { POME_SOURCES } from './sources-pome';
 import { STONE_BERRY_SOURCES } from './sources-stone-berry';
 import { TEMPERATE_SOURCES } from './sources-temperate';
@@ -16,4 +17,5 @@ export const SOURCES: SeedSource[] = [
   ...STONE_BERRY_SOURCES,
   ...CITRUS_TROPICAL_SOURCES,
   ...VEGETABLE_SOURCES,
+  ...GRADE_SOURCES,
 ];

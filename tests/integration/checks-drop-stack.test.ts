@@ -8,6 +8,7 @@ import { createDraft, publishRevision, submitDraft, updateDraft } from '@/lib/da
 import { effectiveModulus, hertzImpact } from '@/fem';
 import * as drop from '@/app/api/checks/drop/route';
 import * as stack from '@/app/api/checks/stack/route';
+import * as gradeRules from '@/app/api/grade-rules/route';
 
 const post = (route: typeof drop | typeof stack, body: unknown) =>
   route.POST(
@@ -307,4 +308,150 @@ describe('who may run the checks (written out: engineers, editors, admins; not b
       });
     }
   }
+});
+
+describe('stack check: the bruise against the grade', () => {
+  beforeAll(async () => {
+    signInAs(await userId(ACCOUNTS.engineer));
+  });
+
+  it('an apple bulk bin at a 600 mm fill: the bruise is sized and judged by a published grade rule', async () => {
+    // A 1200 × 1000 mm bulk bin filled 600 mm deep (a common bin of the trade), apple's commodity
+    // record, nothing of the fruit typed.
+    const r = await result(stack, {
+      cultivar: 'apple-type',
+      binLengthMm: 1200,
+      binWidthMm: 1000,
+      fillDepthMm: 600,
+    });
+    // The Hertz field above the threshold, checked against the pressure profile
+    // p(r) = p₀√(1 − r²/a²) (Johnson 1985, eq. 4.25) written out here from the contact state:
+    // b = a√(1 − (p_t/p₀)²). Tolerance 0.5 %: the figures are kept to 3–4 significant digits.
+    const a = r.bottom.contact_radius_mm;
+    const p0 = r.bottom.contact_pressure_kpa;
+    const pt = r.inputs_used.static_bruise_threshold_kpa.value;
+    const b = p0 > pt ? a * Math.sqrt(1 - (pt / p0) ** 2) : 0;
+    expect(rel(r.bruise.diameter_mm, 2 * b)).toBeLessThan(0.005);
+    expect(rel(r.bruise.area_mm2, Math.PI * b * b)).toBeLessThan(0.005);
+    // Judged by the strictest apple standard: U.S. Extra Fancy, no injury over 5/8 in = 15.875 mm
+    // (WAC 16-403-174; 7 CFR 51.300).
+    expect(r.bruise.rule).toMatchObject({
+      slug: 'us-extra-fancy-apple',
+      measure: 'diameter',
+      limit: 15.875,
+    });
+    expect(r.bruise.verdict).toBe(
+      r.bruise.diameter_mm <= 15.875 ? 'within tolerance' : 'beyond tolerance',
+    );
+    expect(r.bruise.words).toMatch(/U\.S\. Extra Fancy/);
+    console.log(
+      `apple bin 600 mm: onset margin ${r.margin?.value}; bruise ${r.bruise.diameter_mm} mm (${r.bruise.area_mm2} mm²) → ${r.bruise.verdict}; deepest no-bruise fill ${r.deepest_safe_fill_mm} mm, within tolerance ${r.deepest_fill_within_tolerance_mm} mm (${JSON.stringify(r.layers)})`,
+    );
+    // The deeper fill is the one within tolerance, and it is the depth where the bruise reaches
+    // the limit: re-run there, the bruise is the limit (0.5 %, rounding of the depth).
+    if (r.deepest_fill_within_tolerance_mm !== null) {
+      expect(r.deepest_fill_within_tolerance_mm).toBeGreaterThan(r.deepest_safe_fill_mm);
+      const at = await result(stack, {
+        cultivar: 'apple-type',
+        binLengthMm: 1200,
+        binWidthMm: 1000,
+        fillDepthMm: r.deepest_fill_within_tolerance_mm,
+      });
+      expect(rel(at.bruise.diameter_mm, 15.875)).toBeLessThan(0.005);
+      // Whole layers of fruit: the fill over the fruit's diameter, rounded down.
+      expect(r.layers.within_tolerance).toBe(
+        Math.floor(r.deepest_fill_within_tolerance_mm / r.layers.fruit_diameter_mm),
+      );
+    }
+  });
+
+  it('another commodity is judged by the research definition, said to be borrowed', async () => {
+    const r = await result(stack, {
+      cultivar: 'peach-type',
+      binLengthMm: 1200,
+      binWidthMm: 1000,
+      fillDepthMm: 600,
+    });
+    expect(r.bruise.rule).toMatchObject({
+      slug: 'critical-bruise-100mm2',
+      measure: 'area',
+      limit: 100,
+      borrowed: true,
+    });
+    expect(r.bruise.words).toMatch(/defined on another commodity/);
+  });
+
+  it('a grade rule that does not exist is a field error', async () => {
+    const res = await post(stack, {
+      cultivar: 'apple-type',
+      binLengthMm: 1200,
+      binWidthMm: 1000,
+      fillDepthMm: 600,
+      gradeRule: 'no-such-rule',
+    });
+    expect(res.status).toBe(400);
+    expect((await res.json()).fieldErrors.gradeRule[0]).toMatch(/No grade rule/);
+  });
+});
+
+describe("an admin's own grade rule", () => {
+  const postRule = async (body: unknown) =>
+    gradeRules.POST(
+      new Request('http://tenderline.test/api/grade-rules', {
+        method: 'POST',
+        headers: { 'content-type': 'application/json' },
+        body: JSON.stringify(body),
+      }),
+      {},
+    );
+
+  it('is validated, stored for its commodity, and then judges the bruise', async () => {
+    signInAs(await userId(ACCOUNTS.admin));
+    const before = await db('grade_rules').count({ n: '*' });
+    const bad = await postRule({ name: 'x', measure: 'volume', limit: -1, commodity: 'no-such' });
+    expect(bad.status).toBe(400);
+    expect(Object.keys((await bad.json()).fieldErrors).sort()).toEqual([
+      'limit',
+      'measure',
+      'name',
+    ]);
+    const unknown = await postRule({
+      name: 'Line 3 apples',
+      measure: 'diameter',
+      limit: 5,
+      commodity: 'no-such',
+    });
+    expect(unknown.status).toBe(400);
+    expect(await db('grade_rules').count({ n: '*' })).toEqual(before);
+    const res = await postRule({
+      name: 'Line 3 apples, 5 mm',
+      commodity: 'apple',
+      measure: 'diameter',
+      limit: 5,
+    });
+    expect(res.status).toBe(201);
+    const { rule } = await res.json();
+    expect(rule).toMatchObject({
+      kind: 'site',
+      measure: 'diameter',
+      limit: 5,
+      source: 'site rule',
+      commodity: 'Apple',
+    });
+    signInAs(await userId(ACCOUNTS.engineer));
+    const r = await result(stack, {
+      cultivar: 'apple-type',
+      binLengthMm: 1200,
+      binWidthMm: 1000,
+      fillDepthMm: 600,
+      gradeRule: rule.slug,
+    });
+    expect(r.bruise.rule.slug).toBe(rule.slug);
+    // The bruise of the 600 mm fill (over 5 mm across, see above) is beyond this stricter rule.
+    expect(r.bruise.verdict).toBe(
+      r.bruise.diameter_mm > 5 ? 'beyond tolerance' : 'within tolerance',
+    );
+    // An engineer may not add one.
+    expect((await postRule({ name: 'Mine', measure: 'area', limit: 50 })).status).toBe(403);
+  });
 });

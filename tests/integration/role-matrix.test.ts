@@ -12,6 +12,7 @@ import * as lock from '@/app/api/admin/users/[id]/sign-in-lock/route';
 import * as invitations from '@/app/api/invitations/route';
 import * as outbox from '@/app/api/admin/outbox/route';
 import * as audit from '@/app/api/admin/audit/route';
+import * as gradeRules from '@/app/api/grade-rules/route';
 import {
   changePasswordAction,
   setUnitSystemAction,
@@ -120,6 +121,22 @@ const ROUTES: Row[] = [
     name: 'GET /api/admin/audit',
     expect: ADMIN_ONLY(200),
     call: async () => (await audit.GET(json('GET'), params({}))).status,
+  },
+  {
+    name: 'GET /api/grade-rules',
+    expect: { 'signed-out': 401, admin: 200, editor: 200, engineer: 200, buyer: 403 },
+    call: async () => (await gradeRules.GET(json('GET'), params({}))).status,
+  },
+  {
+    name: 'POST /api/grade-rules',
+    expect: ADMIN_ONLY(201),
+    call: async (who, h) =>
+      (
+        await gradeRules.POST(
+          json('POST', { name: `Site rule ${who} ${++n}`, measure: 'diameter', limit: 20 }, h),
+          params({}),
+        )
+      ).status,
   },
 ];
 

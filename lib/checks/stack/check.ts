@@ -6,7 +6,16 @@ import { pinnedSummary } from '../cultivar-inputs';
 import { verdictEvidence } from '../evidence-summary';
 import { fruitUsed, resolveFruit } from '../resolve-fruit';
 import type { StackResult } from './result';
-import { deepestSafeFill, stackAt, type StackSI } from './model';
+import { chooseGradeRule } from '@/lib/data/grade-rules';
+import { judgeBruise, ruleView } from '../bruise';
+import {
+  bruiseAt,
+  bruiseRadiusLimit,
+  deepestFillWithin,
+  deepestSafeFill,
+  stackAt,
+  type StackSI,
+} from './model';
 import { verdictOf } from '../verdict';
 import { stackFigures } from './figures';
 
@@ -33,7 +42,17 @@ export async function runStackCheck(actor: Actor, raw: unknown): Promise<StackRe
   const threshold = f.staticThresholdKpa ? f.staticThresholdKpa.value * 1000 : null;
   const margin = threshold === null ? null : threshold / bottom.peakPressure;
   const safe = threshold === null ? undefined : deepestSafeFill(s, threshold);
-  const top = Math.max(1.5 * depth, safe ? 1.2 * safe : 0, 0.5);
+  const grade = await chooseGradeRule(p?.commodityId ?? null, input.gradeRule);
+  const rule = grade && ruleView(grade, p?.commodity ?? null);
+  const bruise = threshold === null ? null : judgeBruise(bruiseAt(s, depth, threshold), rule);
+  const within =
+    threshold === null || !rule
+      ? undefined
+      : deepestFillWithin(s, threshold, bruiseRadiusLimit(rule));
+  const fruitMm = f.diameterMm.value;
+  const layers = (mm: number | null | undefined) =>
+    mm === undefined ? undefined : mm === null ? null : Math.floor(mm / fruitMm);
+  const top = Math.max(1.5 * depth, safe ? 1.2 * safe : 0, within ? 1.1 * within : 0, 0.5);
   const series = Array.from({ length: 40 }, (_, i) => {
     const z = (top * (i + 1)) / 40;
     const at = stackAt(s, z);
@@ -57,6 +76,10 @@ export async function runStackCheck(actor: Actor, raw: unknown): Promise<StackRe
         `${name} is a typical value (${v.value}), not a measured one: ${v.note ?? v.source}`,
       );
   }
+  if (bruise)
+    warnings.push(
+      'The bruise size is the surface region where the Hertz contact pressure exceeds the threshold; its depth is not predicted, so a grade rule’s depth limit is not checked.',
+    );
   const inputsUsed = {
     ...fruitUsed(f),
     bulk_density_kg_m3: bulk,
@@ -83,6 +106,14 @@ export async function runStackCheck(actor: Actor, raw: unknown): Promise<StackRe
         : { value: round(margin, 3), basis: 'static', verdict: verdictOf(margin) },
     deepest_safe_fill_mm:
       safe === undefined ? undefined : safe === null ? null : round(safe * 1000),
+    bruise,
+    deepest_fill_within_tolerance_mm:
+      within === undefined ? undefined : within === null ? null : round(within * 1000),
+    layers: {
+      no_bruise: layers(safe === undefined || safe === null ? safe : safe * 1000),
+      within_tolerance: layers(within === undefined || within === null ? within : within * 1000),
+      fruit_diameter_mm: round(fruitMm),
+    },
     series,
     warnings,
     units: {
@@ -91,6 +122,9 @@ export async function runStackCheck(actor: Actor, raw: unknown): Promise<StackRe
       contact_radius_mm: 'mm',
       contact_pressure_kpa: 'kPa',
       deepest_safe_fill_mm: 'mm (null: any depth)',
+      deepest_fill_within_tolerance_mm: 'mm (null: any depth)',
+      diameter_mm: 'mm',
+      area_mm2: 'mm²',
       depth_mm: 'mm',
       margin: 'threshold ÷ contact pressure (–)',
     },

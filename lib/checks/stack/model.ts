@@ -1,4 +1,6 @@
 import {
+  hertzBruiseRadius,
+  hertzForceForBruiseRadius,
   effectiveModulus,
   effectiveRadius,
   hertzSphereAtForce,
@@ -40,7 +42,7 @@ export function contactForce(s: StackSI, verticalPressure: number): number {
 }
 
 /** Two like fruit pressed together: R = R₁R₂/(R₁+R₂), 1/E* = 2(1−ν²)/E (Johnson 1985, ch. 4). */
-function pair(s: StackSI) {
+export function pair(s: StackSI) {
   return {
     radius: effectiveRadius(s.fruitRadius, s.fruitRadius),
     effectiveModulus: effectiveModulus(s.modulus, s.poisson, s.modulus, s.poisson),
@@ -70,4 +72,24 @@ export function deepestSafeFill(s: StackSI, threshold: number): number | null {
   const forceLimit = (threshold ** 3 * Math.PI ** 3 * radius ** 2) / (6 * e * e);
   const d = 2 * s.fruitRadius;
   return janssenMaxFillDepth({ ...binOf(s), pressureLimit: forceLimit / (d * d) });
+}
+
+/** A bruise radius limit, m, from a grade rule: half its diameter, or the radius of its area. */
+export function bruiseRadiusLimit(rule: { measure: 'diameter' | 'area'; limit: number }): number {
+  return rule.measure === 'diameter' ? rule.limit / 2000 : Math.sqrt(rule.limit / Math.PI) / 1000;
+}
+
+/** The bruise the bottom contact leaves at a depth: the radius where p > threshold, m. */
+export function bruiseAt(s: StackSI, depth: number, threshold: number): number {
+  return hertzBruiseRadius(pair(s), stackAt(s, depth).contactRadius, threshold);
+}
+
+/**
+ * Deepest fill, m, at which the bottom contact's bruise stays within a radius `limit` (m), or
+ * null for any depth: the force that makes that bruise (hertzForceForBruiseRadius), then Janssen.
+ */
+export function deepestFillWithin(s: StackSI, threshold: number, limit: number): number | null {
+  const force = hertzForceForBruiseRadius(pair(s), threshold, limit);
+  const d = 2 * s.fruitRadius;
+  return janssenMaxFillDepth({ ...binOf(s), pressureLimit: force / (d * d) });
 }

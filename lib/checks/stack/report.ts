@@ -12,8 +12,12 @@ export const stackDescriptor: CheckDescriptor<StackResult> = {
     const u = r.inputs_used;
     const b = r.bottom;
     const safe = r.deepest_safe_fill_mm;
+    const within = r.deepest_fill_within_tolerance_mm;
     const markers: Marker[] = [{ x: u.fill_depth_mm, label: 'this fill' }];
-    if (typeof safe === 'number') markers.push({ x: safe, label: 'deepest safe' });
+    if (typeof safe === 'number') markers.push({ x: safe, label: 'no bruise' });
+    if (typeof within === 'number') markers.push({ x: within, label: 'within tolerance' });
+    const layers = (n: number | null | undefined) =>
+      typeof n === 'number' ? ` (${n} layer${n === 1 ? '' : 's'} of fruit)` : undefined;
     return {
       scenario: [
         { label: 'Bin inside length', value: u.bin_length_mm, unit: 'mm' },
@@ -26,11 +30,32 @@ export const stackDescriptor: CheckDescriptor<StackResult> = {
         { label: 'Contact radius', value: b.contact_radius_mm, unit: 'mm' },
         { label: 'Contact pressure', value: b.contact_pressure_kpa, unit: 'kPa' },
         {
-          label: 'Deepest safe fill',
+          label: 'Deepest fill with no bruise',
           value: typeof safe === 'number' ? safe : null,
           unit: 'mm',
-          text: safe === null ? 'any depth' : safe === undefined ? 'needs a threshold' : undefined,
+          text:
+            safe === null
+              ? 'any depth'
+              : safe === undefined
+                ? 'needs a threshold'
+                : layers(r.layers?.no_bruise),
         },
+        ...(r.bruise
+          ? [
+              { label: 'Bruise at the bottom contact', value: r.bruise.diameter_mm, unit: 'mm' },
+              {
+                label: 'Deepest fill within the grade',
+                value: typeof within === 'number' ? within : null,
+                unit: 'mm',
+                text:
+                  within === null
+                    ? 'any depth'
+                    : within === undefined
+                      ? '—'
+                      : layers(r.layers?.within_tolerance),
+              },
+            ]
+          : []),
       ],
       used: [
         ...fruitUsedRows(u),
@@ -40,6 +65,7 @@ export const stackDescriptor: CheckDescriptor<StackResult> = {
       ],
       margin: r.margin,
       restsOn: r.evidence?.rests_on ?? null,
+      bruise: r.bruise ?? null,
       charts: [
         {
           id: 'stack-pressure',

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { bruiseSchema } from '../bruise';
 import { evidenceSummarySchema } from '../evidence-summary';
 import { fruitUsedShape, pinnedSchema, usedValueSchema, verdictSchema } from '../used-value';
 
@@ -26,6 +27,18 @@ export const stackResultSchema = z.object({
   margin: z.object({ value: n, basis: z.literal('static'), verdict: verdictSchema }).nullable(),
   /** mm; null: any depth is safe; absent: no threshold to judge by. */
   deepest_safe_fill_mm: n.nullable().optional(),
+  /** The bruise at the bottom contact against the chosen grade rule (absent: no threshold). */
+  bruise: bruiseSchema.nullable().optional(),
+  /** Deepest fill whose bottom bruise stays within the rule, mm; null: any depth. */
+  deepest_fill_within_tolerance_mm: n.nullable().optional(),
+  /** The two fills as whole layers of fruit (fill ÷ fruit diameter, a simple cubic stack). */
+  layers: z
+    .object({
+      no_bruise: n.nullable().optional(),
+      within_tolerance: n.nullable().optional(),
+      fruit_diameter_mm: n,
+    })
+    .optional(),
   series: z.array(
     z.object({
       depth_mm: n,

@@ -58,6 +58,7 @@ const EXPECTED: Record<Role, Capability[]> = {
     'invitations:create-buyer',
     'invitations:create-any',
     'users:manage',
+    'grade-rules:manage',
     'outbox:read',
     'audit:read',
   ],

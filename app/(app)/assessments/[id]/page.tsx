@@ -83,6 +83,7 @@ export default async function AssessmentReport({ params }: { params: Promise<{ i
         pending={false}
         basis={marginBasis(report)}
         restsOn={report.restsOn}
+        bruise={report.bruise}
       />
       <ReportResults report={report} />
       <section className="space-y-1 text-sm text-stone-700">

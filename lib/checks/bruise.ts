@@ -1,0 +1,93 @@
+import { z } from 'zod';
+
+/** What a bruise is judged by, and the answer in the trade's words. */
+export const BRUISE_VERDICTS = ['no bruise', 'within tolerance', 'beyond tolerance'] as const;
+export type BruiseVerdict = (typeof BRUISE_VERDICTS)[number];
+
+export const gradeRuleViewSchema = z.object({
+  slug: z.string(),
+  name: z.string(),
+  kind: z.enum(['standard', 'research', 'site']),
+  measure: z.enum(['diameter', 'area']),
+  limit: z.number(),
+  max_depth_mm: z.number().nullable(),
+  source: z.string().nullable(),
+  /** True when the rule was made for another commodity and is used for want of one. */
+  borrowed: z.boolean(),
+});
+
+/** The bruise a check predicts and how it stands against the chosen grade rule. */
+export const bruiseSchema = z.object({
+  diameter_mm: z.number(),
+  area_mm2: z.number(),
+  /** Not predicted from a surface pressure; a standard's depth limit is then not checked. */
+  depth_mm: z.number().nullable(),
+  verdict: z.enum(BRUISE_VERDICTS),
+  rule: gradeRuleViewSchema.nullable(),
+  /** One sentence: the bruise, the rule, and the verdict. */
+  words: z.string(),
+});
+
+export type BruiseView = z.infer<typeof bruiseSchema>;
+export type GradeRuleView = z.infer<typeof gradeRuleViewSchema>;
+
+const r3 = (x: number) => Number(x.toPrecision(3));
+
+/** The grade rule as a result names it. */
+export function ruleView(
+  rule: {
+    slug: string;
+    name: string;
+    kind: 'standard' | 'research' | 'site';
+    measure: 'diameter' | 'area';
+    limit: number;
+    maxDepthMm: number | null;
+    source: string | null;
+    commodity: string | null;
+  },
+  commodity: string | null,
+): GradeRuleView {
+  return {
+    slug: rule.slug,
+    name: rule.name,
+    kind: rule.kind,
+    measure: rule.measure,
+    limit: rule.limit,
+    max_depth_mm: rule.maxDepthMm,
+    source: rule.source,
+    borrowed: rule.commodity === null && commodity !== null,
+  };
+}
+
+/**
+ * Judge a predicted surface bruise (radius, m) against a grade rule: no bruise at all, a bruise
+ * within the rule's largest diameter or area, or one beyond it.
+ */
+export function judgeBruise(radiusM: number, rule: GradeRuleView | null): BruiseView {
+  const diameter = r3(2 * radiusM * 1000);
+  const area = r3(Math.PI * (radiusM * 1000) ** 2);
+  const verdict: BruiseVerdict =
+    radiusM <= 0
+      ? 'no bruise'
+      : !rule
+        ? 'beyond tolerance'
+        : (rule.measure === 'diameter' ? diameter : area) <= rule.limit
+          ? 'within tolerance'
+          : 'beyond tolerance';
+  const limit = rule
+    ? rule.measure === 'diameter'
+      ? `${r3(rule.limit)} mm across`
+      : `${r3(rule.limit)} mm²`
+    : null;
+  const size = `a bruise about ${diameter} mm across (${area} mm²)`;
+  const ruleWords = rule
+    ? `${rule.name} (${rule.source ?? 'site rule'}) tolerates up to ${limit}${rule.borrowed ? '; a rule defined on another commodity, used for want of one of its own' : ''}`
+    : 'no grade rule applies';
+  const words =
+    verdict === 'no bruise'
+      ? `No bruise: the contact pressure stays below the threshold.`
+      : verdict === 'within tolerance'
+        ? `Bruise within the grade's tolerance: ${size}; ${ruleWords}.`
+        : `Bruise beyond tolerance: ${size}; ${ruleWords}.`;
+  return { diameter_mm: diameter, area_mm2: area, depth_mm: null, verdict, rule, words };
+}
