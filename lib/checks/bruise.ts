@@ -91,3 +91,29 @@ export function judgeBruise(radiusM: number, rule: GradeRuleView | null): Bruise
         : `Bruise beyond tolerance: ${size}; ${ruleWords}.`;
   return { diameter_mm: diameter, area_mm2: area, depth_mm: null, verdict, rule, words };
 }
+
+/**
+ * The radius, m, out to which a contact-pressure profile exceeds a threshold: the last point
+ * above it, interpolated linearly to the crossing with the next (the profile runs outward from
+ * the axis). Zero when no point exceeds it.
+ */
+export function radiusAbove(
+  profile: readonly { r_mm: number | null; pressure_kpa: number | null }[],
+  thresholdKpa: number,
+): number {
+  const pts = profile.filter(
+    (p): p is { r_mm: number; pressure_kpa: number } => p.r_mm !== null && p.pressure_kpa !== null,
+  );
+  let radius = 0;
+  for (let i = 0; i < pts.length; i++) {
+    if (pts[i].pressure_kpa <= thresholdKpa) continue;
+    const next = pts[i + 1];
+    radius =
+      next && next.pressure_kpa <= thresholdKpa
+        ? pts[i].r_mm +
+          ((pts[i].pressure_kpa - thresholdKpa) / (pts[i].pressure_kpa - next.pressure_kpa)) *
+            (next.r_mm - pts[i].r_mm)
+        : pts[i].r_mm;
+  }
+  return radius / 1000;
+}

@@ -102,6 +102,8 @@ export const squeezeCheckSchema = z
     accelerationMs2: measure('Peak acceleration of the move', 'm/s²', -0.001, 100).default(0),
     maxTravelMm: measure('Maximum travel per pad', 'mm', 0, 100),
     mesh: z.enum(['coarse', 'normal', 'fine']).default('normal'),
+    /** The grade rule the bruise is judged by (its slug); the commodity's strictest by default. */
+    gradeRule: slugSchema.optional(),
     sweep: z.boolean().default(true),
   })
   .strict()

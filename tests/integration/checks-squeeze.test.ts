@@ -107,6 +107,38 @@ describe('squeeze check route', () => {
   });
 });
 
+describe('squeeze check: the bruise at the grip against the grade', () => {
+  it('flat plates: the region above the threshold agrees with Hertz at the grip force', async () => {
+    signInAs(await userId(ACCOUNTS.engineer));
+    const res = await post(squeeze, {
+      ...FRUIT,
+      maxTravelMm: 3,
+      sweep: false,
+      accelerationMs2: 30,
+    });
+    const json = await res.json();
+    expect(res.status, JSON.stringify(json)).toBe(200);
+    const r = json.result;
+    const grip = r.model.liftability.grip;
+    // Hertz for the grip force on a rigid flat (Johnson 1985, ch. 4): E* = E/(1 − ν²),
+    // a = (3FR/4E*)^(1/3), p₀ = 3F/(2πa²), edge of p > p_t at a√(1 − (p_t/p₀)²), worked here.
+    const eStar = 3e6 / (1 - 0.35 ** 2);
+    const a = Math.cbrt((3 * grip.force_n * 0.04) / (4 * eStar));
+    const p0 = (3 * grip.force_n) / (2 * Math.PI * a * a);
+    const b = p0 > 100e3 ? a * Math.sqrt(1 - (100e3 / p0) ** 2) : 0;
+    // Tolerance 3 %: the FE profile is interpolated between contact nodes and the normal mesh's
+    // contact radius differs from Hertz by about 1 % (0.4 % at this grip when written).
+    expect(b).toBeGreaterThan(0);
+    console.log(
+      `squeeze bruise at the grip: FE ${r.bruise.diameter_mm} mm across, Hertz ${(2 * b * 1000).toFixed(3)} mm (grip force ${grip.force_n} N)`,
+    );
+    expect(Math.abs(r.bruise.diameter_mm / (2 * b * 1000) - 1)).toBeLessThan(0.03);
+    // Custom values (no cultivar): judged by the research definition for any commodity.
+    expect(r.bruise.rule.slug).toBe('critical-bruise-100mm2');
+    expect(['within tolerance', 'beyond tolerance']).toContain(r.bruise.verdict);
+  });
+});
+
 describe('squeeze bad input: 400 with a field message', () => {
   beforeAll(async () => signInAs(await userId(ACCOUNTS.engineer)));
   const cases: [string, unknown, string][] = [

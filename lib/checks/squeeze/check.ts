@@ -5,11 +5,15 @@ import { squeezeCheckSchema } from '@/lib/checks/inputs';
 import { checkPool } from '../compute';
 import type { TaskAnswer } from '@/lib/compute/task-table';
 import type { CheckTasks } from '../tasks';
+import { chooseGradeRule } from '@/lib/data/grade-rules';
+import { judgeBruise, radiusAbove, ruleView, type BruiseView } from '../bruise';
 import { toFormError } from './fields';
 import { squeezeHead } from './head';
 import { resolveSqueeze, sweepDiameters } from './resolve';
 
-export type SqueezeCheckResult = TaskAnswer<CheckTasks, 'squeezeCheck'>;
+export type SqueezeCheckResult = TaskAnswer<CheckTasks, 'squeezeCheck'> & {
+  bruise?: BruiseView | null;
+};
 
 /** The cache key of the model's unit body (shape, ν, mesh): runs of one body share a thread. */
 export function bodyKey(m: { equatorialRadius: number; axialRadius?: number; poisson: number }) {
@@ -29,8 +33,10 @@ export async function runSqueezeCheck(
 ): Promise<SqueezeCheckResult> {
   const input = parseInput(squeezeCheckSchema, raw);
   const r = await resolveSqueeze(actor, input);
+  const pinned = r.fruit.pinned;
+  const grade = await chooseGradeRule(pinned?.commodityId ?? null, input.gradeRule);
   try {
-    return await checkPool().run(
+    const result = await checkPool().run(
       'squeezeCheck',
       {
         input: r.model,
@@ -45,6 +51,17 @@ export async function runSqueezeCheck(
       },
       { signal, affinity: `${bodyKey(r.model)}|${input.mesh}` },
     );
+    const threshold = r.fruit.staticThresholdKpa?.value;
+    // The bruise at the grip point: the surface region where the FE contact pressure exceeds
+    // the threshold, judged against the grade rule (the onset margin stays beside it).
+    const bruise =
+      threshold && result.grip_profile
+        ? judgeBruise(
+            radiusAbove(result.grip_profile, threshold),
+            grade && ruleView(grade, pinned?.commodity ?? null),
+          )
+        : null;
+    return { ...result, bruise };
   } catch (error) {
     throw toFormError(error, { axialMm: r.axialMm });
   }

@@ -166,6 +166,7 @@ export const squeezeDescriptor: CheckDescriptor<SqueezeResult> = {
       ],
       margin: r.margin,
       restsOn: r.evidence?.rests_on ?? null,
+      bruise: r.bruise ?? null,
       charts: charts(r),
       // Curves as CSV: the force–travel steps of the squeeze (it used to export an empty file).
       curves: curvesOf(r.model.steps, [

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { bruiseSchema } from '../bruise';
 import { evidenceSummarySchema } from '../evidence-summary';
 import { fruitUsedShape, pinnedSchema, usedValueSchema, verdictSchema } from '../used-value';
 
@@ -52,6 +53,8 @@ export const squeezeResultSchema = z.object({
     warnings: z.array(z.object({ code: z.string(), message: z.string() })),
   }),
   grip_profile: z.array(z.object({ r_mm: nn, pressure_kpa: nn })).nullable(),
+  /** The bruise at the grip point against the chosen grade rule (absent: older results). */
+  bruise: bruiseSchema.nullable().optional(),
   sweep: z
     .object({
       points: z.array(
