@@ -38,7 +38,7 @@ test('an editor reads the data gaps, starts a draft from a cell and imports valu
   await page.getByRole('button', { name: 'Show' }).click();
   await expect(page).toHaveURL(/commodity=apple/);
   await expect(page).toHaveURL(/sort=own/);
-  const row = page.getByTestId('gap-row-apple-jonathan');
+  const row = page.getByTestId('gap-row-apple-braeburn');
   await expect(row).toBeVisible();
   await expect(page.getByTestId('gap-row-pear-type')).toHaveCount(0);
   await expect(row.locator('td[data-rung]').first()).toHaveText(
@@ -56,8 +56,8 @@ test('an editor reads the data gaps, starts a draft from a cell and imports valu
 
   // A cell starts a draft of its record and opens it.
   await page
-    .getByTestId('gap-row-apple-jonathan')
-    .getByRole('button', { name: /Jonathan, Young's modulus/ })
+    .getByTestId('gap-row-apple-braeburn')
+    .getByRole('button', { name: /Braeburn, Young's modulus/ })
     .click();
   await expect(page).toHaveURL(/\/editor\/revisions\/\d+$/);
   const draftUrl = new URL(page.url()).pathname;
@@ -65,7 +65,7 @@ test('an editor reads the data gaps, starts a draft from a cell and imports valu
   // Back on the gaps page, the record's cells open that draft instead.
   await page.goto('/editor/gaps?commodity=apple');
   await expect(
-    page.getByTestId('gap-row-apple-jonathan').getByRole('link', { name: /Jonathan, Mass/ }),
+    page.getByTestId('gap-row-apple-braeburn').getByRole('link', { name: /Braeburn, Mass/ }),
   ).toHaveAttribute('href', draftUrl);
 
   // Import: a file with a wrong unit is refused with its line; a good one is stored.
