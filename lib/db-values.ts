@@ -33,3 +33,13 @@ export function toCount(value: BigIntColumn | bigint | null | undefined): number
 export function insertedId(row: { id: number } | number): number {
   return typeof row === 'object' ? Number(row.id) : Number(row);
 }
+
+/** A unique-constraint refusal from SQLite or PostgreSQL (a racing writer took the key first). */
+export function isUniqueViolation(error: unknown): boolean {
+  const e = error as { code?: string; message?: string } | null;
+  return (
+    e?.code === '23505' ||
+    e?.code === 'SQLITE_CONSTRAINT_UNIQUE' ||
+    /UNIQUE constraint failed/.test(e?.message ?? '')
+  );
+}

@@ -4,7 +4,7 @@ import type { InferResult } from 'kysely';
 import { db } from '@/lib/db';
 import { typed } from '@/lib/db-kysely';
 import { assessmentInputs, assessmentResults } from '@/lib/db-json';
-import { insertedId, toCount, toIso } from '@/lib/db-values';
+import { insertedId, isUniqueViolation, toCount, toIso } from '@/lib/db-values';
 import { assertCan, type Actor } from '@/lib/auth/actor';
 import { can } from '@/lib/auth/roles';
 import { NotFoundError } from '@/lib/errors';
@@ -125,15 +125,6 @@ export interface AssessmentMeta {
   notes: string | null;
   /** The assessment this run re-runs: the new row becomes the next version of its chain. */
   rerunOf?: Assessment;
-}
-
-function isUniqueViolation(error: unknown): boolean {
-  const e = error as { code?: string; message?: string } | null;
-  return (
-    e?.code === '23505' ||
-    e?.code === 'SQLITE_CONSTRAINT_UNIQUE' ||
-    /UNIQUE constraint failed/.test(e?.message ?? '')
-  );
 }
 
 /**

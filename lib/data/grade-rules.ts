@@ -1,7 +1,7 @@
 import 'server-only';
 import { db } from '@/lib/db';
 import { typed } from '@/lib/db-kysely';
-import { insertedId } from '@/lib/db-values';
+import { insertedId, isUniqueViolation } from '@/lib/db-values';
 import { assertCan, type Actor } from '@/lib/auth/actor';
 import { NotFoundError, ValidationError } from '@/lib/errors';
 import { citationOf } from '@/lib/evidence/ladder';
@@ -11,6 +11,7 @@ import {
   GRADE_MEASURES,
   gradeRuleInputSchema,
   type GradeKind,
+  type GradeRuleInput,
   type GradeMeasure,
 } from '@/lib/validation/grade-rules';
 import { recordAudit } from '@/lib/audit-trail';
@@ -138,7 +139,19 @@ const slugOf = (name: string) =>
 export async function createGradeRule(actor: Actor, input: unknown): Promise<GradeRule> {
   assertCan(actor, 'grade-rules:manage');
   const v = parseInput(gradeRuleInputSchema, input);
-  const made = await db.transaction(async (trx) => {
+  // Two admins naming rules alike at once: the loser of the unique slug tries the next one.
+  for (let attempt = 1; ; attempt++) {
+    try {
+      const made = await insertRule(actor, v);
+      return (await gradeRulesFor(made.commodityId)).find((r) => r.slug === made.slug)!;
+    } catch (error) {
+      if (!isUniqueViolation(error) || attempt >= 5) throw error;
+    }
+  }
+}
+
+async function insertRule(actor: Actor, v: GradeRuleInput) {
+  return db.transaction(async (trx) => {
     let commodityId: number | null = null;
     if (v.commodity) {
       const c = await typed(trx)
@@ -185,5 +198,4 @@ export async function createGradeRule(actor: Actor, input: unknown): Promise<Gra
     });
     return { slug, commodityId };
   });
-  return (await gradeRulesFor(made.commodityId)).find((r) => r.slug === made.slug)!;
 }

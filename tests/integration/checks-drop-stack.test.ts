@@ -453,5 +453,13 @@ describe("an admin's own grade rule", () => {
     );
     // An engineer may not add one.
     expect((await postRule({ name: 'Mine', measure: 'area', limit: 50 })).status).toBe(403);
+    // Four admins' rules of one name at once: each is stored under its own slug, none is lost.
+    signInAs(await userId(ACCOUNTS.admin));
+    const same = await Promise.all(
+      [1, 2, 3, 4].map(() => postRule({ name: 'Packing line B', measure: 'area', limit: 60 })),
+    );
+    expect(same.map((r) => r.status)).toEqual([201, 201, 201, 201]);
+    const slugs = await Promise.all(same.map(async (r) => (await r.json()).rule.slug));
+    expect(new Set(slugs).size).toBe(4);
   });
 });
