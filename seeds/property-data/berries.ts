@@ -1,10 +1,12 @@
 import type { SeedCommodity, SeedValue } from './types';
+import { typical as typicalOf } from './value-helpers';
 import type { TypicalBasis } from '@/lib/properties/quantities';
 
 const HAYWARD = 'berry-hayward-physical-web';
 const MOGGIA = 'moggia-2017-blueberry';
 
 /** A clearly labelled typical value: no source, a wide band, and what was searched. */
+/** A typical value (see value-helpers' `typical`), its band given as low and high. */
 const typical = (
   quantity: SeedValue['quantity'],
   variant: string,
@@ -14,18 +16,7 @@ const typical = (
   basis: TypicalBasis,
   note: string,
   extra: Partial<SeedValue> = {},
-): SeedValue => ({
-  quantity,
-  ...(variant ? { variant } : {}),
-  value,
-  low,
-  high,
-  ...extra,
-  isTypicalDefault: true,
-  typicalBasis: basis,
-  note: `Typical value, not published for this commodity — replace with a measured value. ${note}`,
-  source: null,
-});
+): SeedValue => typicalOf(quantity, variant, value, [low, high], basis, note, extra);
 
 const poisson = (fruit: string): SeedValue =>
   typical(

@@ -1,39 +1,12 @@
 import { QUANTITIES } from '../../lib/properties/quantities';
 import type { SeedCommodity, SeedValue } from './types';
-import { frictionFromAngle, typicalJanssenK } from './value-helpers';
+import { frictionFromAngle, typical, typicalJanssenK } from './value-helpers';
 
 const SHARIFI = 'sharifi-2007-orange';
 const GRADES = 'sweet-orange-bulk-handling';
 const HORTFLORA = 'hortflora-mosambi-kinnow';
 const PUNCH = 'ct-orange-punch-jiroft';
 const MURCOTT = 'ct-rehal-2017-murcott';
-
-/**
- * A typical value of the trade, kept only where no published value was found: no source, a wide
- * band, and a note naming what was searched. `basis` says why it is trusted at all.
- */
-export function typical(
-  quantity: SeedValue['quantity'],
-  variant: string,
-  value: number,
-  [low, high]: [number, number],
-  basis: 'common practice' | 'from memory',
-  note: string,
-  extra: Partial<SeedValue> = {},
-): SeedValue {
-  return {
-    quantity,
-    ...(variant ? { variant } : {}),
-    value,
-    low,
-    high,
-    note: `Typical value, not published for this commodity — replace with a measured value. ${note}`,
-    isTypicalDefault: true,
-    typicalBasis: basis,
-    source: null,
-    ...extra,
-  };
-}
 
 /** What the citrus searches covered, for the notes of the typical values. */
 const CITRUS_SEARCHED =

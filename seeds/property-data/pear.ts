@@ -1,5 +1,5 @@
 import type { SeedCommodity, SeedValue } from './types';
-import { storageModulus, typicalJanssenK } from './value-helpers';
+import { storageModulus, typicalJanssenK, typicalValue } from './value-helpers';
 
 const STORAGE_STUDY = 'tjaf-pear-apple-storage';
 const UCD_BARTLETT = 'pome-ucd-bartlett';
@@ -9,14 +9,8 @@ const SU_METHOD =
 const LBF = 4.4482216;
 
 /** A typical pear value kept where nothing published could be read (see its note). */
-const typical = (
-  v: Omit<SeedValue, 'isTypicalDefault' | 'typicalBasis' | 'source'>,
-): SeedValue => ({
-  ...v,
-  isTypicalDefault: true,
-  typicalBasis: 'from memory',
-  source: null,
-});
+const typical = (v: Omit<SeedValue, 'isTypicalDefault' | 'typicalBasis' | 'source'>): SeedValue =>
+  typicalValue(v, 'from memory');
 
 const PEAR_FRICTION_NOTE =
   "Typical value, not published here: Öztürk et al. 2009 measured the static friction of 'Deveci' and 'Santa Maria' pears, but the coefficients are not in the abstract read. Searched: 'pear physical properties density bulk density friction coefficient cultivar', 'pear fruit length width mass true density static coefficient of friction rubber plywood galvanized'.";

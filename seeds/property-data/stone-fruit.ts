@@ -1,6 +1,6 @@
 import type { SeedCommodity, SeedValue } from './types';
 import type { TypicalBasis } from '@/lib/properties/quantities';
-import { typicalJanssenK } from './value-helpers';
+import { typical as typicalOf, typicalJanssenK } from './value-helpers';
 
 const PLUM = 'intagro-2003-plum-firmness';
 const GUNES = 'stone-gunes-2003-plum-tokat';
@@ -8,7 +8,7 @@ const NECTARINE = 'fooder-100430-nectarine';
 const TABLE = 'stone-crisosto-min-firmness-table';
 const UCD = 'stone-ucdavis-peach-nectarine-facts';
 
-/** A clearly labelled typical value: no source, a wide band, and what was searched. */
+/** A typical value (see value-helpers' `typical`); a typical drop height is a no-bruise level. */
 const typical = (
   quantity: SeedValue['quantity'],
   variant: string,
@@ -17,18 +17,16 @@ const typical = (
   high: number,
   basis: TypicalBasis,
   note: string,
-): SeedValue => ({
-  quantity,
-  ...(variant ? { variant } : {}),
-  value,
-  low,
-  high,
-  ...(quantity === 'drop_threshold_height' ? { observation: 'no-bruise' as const } : {}),
-  isTypicalDefault: true,
-  typicalBasis: basis,
-  note: `Typical value, not published for this commodity — replace with a measured value. ${note}`,
-  source: null,
-});
+): SeedValue =>
+  typicalOf(
+    quantity,
+    variant,
+    value,
+    [low, high],
+    basis,
+    note,
+    quantity === 'drop_threshold_height' ? { observation: 'no-bruise' } : {},
+  );
 
 const POISSON_NOTE =
   "No Poisson's ratio found for this fruit (searched: '<fruit> Poisson ratio modulus elasticity compression'). Finite-element studies of soft fruit flesh commonly take 0.3–0.49 (nearly incompressible watery tissue); 0.45 is stored.";

@@ -1,4 +1,4 @@
-import { typical } from './citrus';
+import { typical } from './value-helpers';
 import type { SeedCommodity, SeedValue } from './types';
 
 const CARABAO = 'pas-carabao-rheology';

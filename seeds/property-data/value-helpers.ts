@@ -1,3 +1,4 @@
+import type { TypicalBasis } from '@/lib/properties/quantities';
 import type { SeedValue } from './types';
 
 /**
@@ -56,4 +57,41 @@ export function storageModulus(harvest: number, stored: number, source: string):
     storage,
     source,
   }));
+}
+
+/** A typical value kept only because no published one was found; its note says what was searched. */
+export function typicalValue(
+  v: Omit<SeedValue, 'isTypicalDefault' | 'typicalBasis' | 'source'>,
+  basis: TypicalBasis,
+): SeedValue {
+  return { ...v, isTypicalDefault: true, typicalBasis: basis, source: null };
+}
+
+/**
+ * The same with the commodity-record wording: a wide band, and a note that says the value is not
+ * published for this commodity and names what was searched.
+ */
+export function typical(
+  quantity: SeedValue['quantity'],
+  variant: string,
+  value: number,
+  [low, high]: [number, number],
+  basis: TypicalBasis,
+  note: string,
+  extra: Partial<SeedValue> = {},
+): SeedValue {
+  return {
+    ...typicalValue(
+      {
+        quantity,
+        ...(variant ? { variant } : {}),
+        value,
+        low,
+        high,
+        note: `Typical value, not published for this commodity — replace with a measured value. ${note}`,
+      },
+      basis,
+    ),
+    ...extra,
+  };
 }

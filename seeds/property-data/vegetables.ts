@@ -1,5 +1,5 @@
-import type { SeedCommodity, SeedValue } from './types';
-import { typicalJanssenK } from './value-helpers';
+import type { SeedCommodity } from './types';
+import { typicalJanssenK, typicalValue } from './value-helpers';
 
 const CHERRY = 'polat-2007-cherry-tomato';
 const RAMOS = 'stropek-golacki-2022-potato';
@@ -9,13 +9,7 @@ const IDAHO_STORAGE = 'veg-hendricks-2022-spudman-storage-bruise';
 const SALEH = 'veg-saleh-awolola-irish-potato';
 const CUTTING_TABLE = 'veg-jamdagni-jia-2019-cutting-table';
 
-/** A typical value kept only because no published one was found; the note says what was searched. */
-function typical(
-  v: Omit<SeedValue, 'isTypicalDefault' | 'typicalBasis' | 'source'>,
-  basis: 'common practice' | 'from memory',
-): SeedValue {
-  return { ...v, isTypicalDefault: true, typicalBasis: basis, source: null };
-}
+const typical = typicalValue;
 
 const TOMATO_NOT_FOUND =
   'No published whole-tomato figure found; searched "tomato physical properties density bulk density friction coefficient rubber galvanized", "tomato coefficient of friction rubber steel plywood", "tomato fruit density mass equatorial diameter cultivar" (abstracts read: five Saudi varieties, storage and packaging study, deficit-irrigation study — none prints the value in its abstract).';
