@@ -60,6 +60,52 @@ export interface CultivarOption {
   label: string;
   prefill: Record<string, { value: number; rung: Rung } | undefined>;
   complete: boolean;
+  /** The grade rules its bruise may be judged by (its commodity's first). */
+  grades?: { slug: string; name: string }[];
+}
+
+/** The grade rule a bruise is judged by; empty takes the commodity's strictest standard. */
+export function GradeRuleSelect({
+  value,
+  onChange,
+  rules,
+  errors,
+}: {
+  value: string;
+  onChange: (slug: string) => void;
+  rules: { slug: string; name: string }[];
+  errors?: string[];
+}) {
+  const id = useId();
+  return (
+    <div className="space-y-1">
+      <label htmlFor={id} className="block text-sm font-medium">
+        Grade rule for the bruise
+      </label>
+      <select
+        id={id}
+        value={value}
+        onChange={(e) => onChange(e.target.value)}
+        aria-describedby={`${id}-note`}
+        className="w-full max-w-xs rounded-md border border-stone-300 bg-white px-2 py-1.5 text-sm"
+        data-testid="grade-select"
+      >
+        <option value="">The commodity&apos;s strictest published rule</option>
+        {rules.map((r) => (
+          <option key={r.slug} value={r.slug}>
+            {r.name}
+          </option>
+        ))}
+      </select>
+      <p id={`${id}-note`} aria-live="polite" className="text-xs text-stone-500">
+        {errors?.length ? (
+          <span className="text-red-700">{errors.join(' ')}</span>
+        ) : (
+          'The verdict compares the predicted bruise with this rule; the onset margin stays beside it.'
+        )}
+      </p>
+    </div>
+  );
 }
 
 /**
@@ -126,6 +172,7 @@ export function CultivarSelect({
   onChange,
   errors,
   stage,
+  grade,
 }: {
   options: CultivarOption[];
   value: string;
@@ -133,6 +180,8 @@ export function CultivarSelect({
   errors?: string[];
   /** The stage choice, shown under the cultivar once one is chosen. */
   stage?: { value: string; onChange: (stage: string) => void; errors?: string[] };
+  /** The grade rule choice, for the checks that size a bruise. */
+  grade?: { value: string; onChange: (slug: string) => void; errors?: string[] };
 }) {
   const id = useId();
   return (
@@ -160,6 +209,9 @@ export function CultivarSelect({
         </p>
       </div>
       {stage && value ? <StageSelect {...stage} /> : null}
+      {grade && value ? (
+        <GradeRuleSelect {...grade} rules={options.find((o) => o.slug === value)?.grades ?? []} />
+      ) : null}
     </div>
   );
 }

@@ -100,6 +100,7 @@ export function CheckForm({
   setCultivar,
   stage,
   setStage,
+  grade,
   fields,
   message,
   children,
@@ -110,6 +111,8 @@ export function CheckForm({
   setCultivar: (slug: string) => void;
   stage: string;
   setStage: (stage: string) => void;
+  /** For the checks that size a bruise: the grade rule it is judged by. */
+  grade?: { value: string; onChange: (slug: string) => void };
   fields: FieldsState;
   message: string | null;
   children: ReactNode;
@@ -122,6 +125,7 @@ export function CheckForm({
         onChange={setCultivar}
         errors={fields.fieldErrors.cultivar}
         stage={{ value: stage, onChange: setStage, errors: fields.fieldErrors.stage }}
+        grade={grade && { ...grade, errors: fields.fieldErrors.gradeRule }}
       />
       {children}
       <FruitFieldset

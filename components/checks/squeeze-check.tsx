@@ -19,6 +19,7 @@ export function SqueezeCheck({
   initialCultivar: string;
 }) {
   const [facing, setFacing] = useState<FacingPreset>('rigid');
+  const [gradeRule, setGradeRule] = useState('');
   const { cultivar, setCultivar, stage, setStage, text, set, body, state } =
     useCheckForm<SqueezeCheckResult>({
       endpoint: '/api/checks/squeeze',
@@ -30,7 +31,7 @@ export function SqueezeCheck({
         accelerationMs2: '2',
         maxTravelMm: '2',
       },
-      choices: { facing },
+      choices: { facing, ...(gradeRule && { gradeRule }) },
       keep: (key) => !key.startsWith('facing') || facing === 'custom',
       delayMs: 500,
     });
@@ -48,6 +49,8 @@ export function SqueezeCheck({
           setCultivar={setCultivar}
           stage={stage}
           setStage={setStage}
+          gradeRule={gradeRule}
+          setGradeRule={setGradeRule}
           facing={facing}
           setFacing={setFacing}
           text={text}

@@ -1,5 +1,6 @@
 'use client';
 
+import { useState } from 'react';
 import type { StackCheckResult } from '@/lib/checks/stack/check';
 import type { CultivarOption } from './check-fields';
 import { CheckForm, MeasureFields, type FieldSpec } from './measure-fields';
@@ -37,12 +38,13 @@ export function StackCheck({
   initialCultivar: string;
 }) {
   const units = useUnits();
+  const [gradeRule, setGradeRule] = useState('');
   const { cultivar, setCultivar, stage, setStage, body, state, fields } =
     useCheckForm<StackCheckResult>({
       endpoint: '/api/checks/stack',
       initialCultivar,
       defaults: { binLengthMm: '1200', binWidthMm: '1000', fillDepthMm: '600' },
-      choices: {},
+      choices: gradeRule ? { gradeRule } : {},
     });
   const form = (
     <CheckForm
@@ -52,6 +54,7 @@ export function StackCheck({
       setCultivar={setCultivar}
       stage={stage}
       setStage={setStage}
+      grade={{ value: gradeRule, onChange: setGradeRule }}
       fields={fields}
       message={state.message}
     >

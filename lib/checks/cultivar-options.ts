@@ -1,6 +1,7 @@
 import 'server-only';
 import type { Actor } from '@/lib/auth/actor';
 import { listPublishedCultivars } from '@/lib/data/cultivars';
+import { allGradeRules } from '@/lib/data/grade-rules';
 import type { Rung } from '@/lib/evidence/rungs';
 import { ValidationError } from '@/lib/errors';
 import { climb } from '@/lib/evidence/ladder';
@@ -28,6 +29,7 @@ const figure = (u: UsedValue | null): PrefillFigure | undefined =>
  */
 export async function cultivarOptions(actor: Actor) {
   const records = await listPublishedCultivars(actor);
+  const rules = await allGradeRules();
   const options = records.map((c) => {
     let prefill: CultivarPrefill = {};
     let complete = true;
@@ -57,6 +59,11 @@ export async function cultivarOptions(actor: Actor) {
     }
     const name = c.isType ? 'commodity record (no cultivar named)' : c.name;
     const label = `${c.commodity.name} — ${name}${complete ? '' : ' (some figures to enter)'}`;
+    // The grade rules a bruise of this fruit may be judged by: its commodity's, then any's.
+    const grades = rules
+      .filter((r) => r.commodity === c.commodity.name || r.commodity === null)
+      .sort((a, b) => Number(a.commodity === null) - Number(b.commodity === null))
+      .map((r) => ({ slug: r.slug, name: r.name }));
     return {
       slug: c.slug,
       label,
@@ -64,6 +71,7 @@ export async function cultivarOptions(actor: Actor) {
       complete,
       commodity: c.commodity.name,
       isType: c.isType,
+      grades,
     };
   });
   return options.sort(

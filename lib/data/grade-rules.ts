@@ -38,8 +38,16 @@ const asKind = (v: string): GradeKind =>
 const asMeasure = (v: string): GradeMeasure =>
   (GRADE_MEASURES as readonly string[]).includes(v) ? (v as GradeMeasure) : 'diameter';
 
-/** The rules that apply to a commodity (its own first, then those for any commodity). */
-export async function gradeRulesFor(commodityId: number | null): Promise<GradeRule[]> {
+/** Every grade rule, each naming its commodity (null: any), for the check forms' choice. */
+export async function allGradeRules(): Promise<GradeRule[]> {
+  return gradeRulesFor(undefined);
+}
+
+/**
+ * The rules that apply to a commodity (its own first, then those for any commodity); with
+ * `undefined`, every rule.
+ */
+export async function gradeRulesFor(commodityId: number | null | undefined): Promise<GradeRule[]> {
   let q = typed()
     .selectFrom('grade_rules as g')
     .leftJoin('commodities as m', 'm.id', 'g.commodity_id')
@@ -54,11 +62,12 @@ export async function gradeRulesFor(commodityId: number | null): Promise<GradeRu
       eb.ref('s.year').as('s_year'),
       eb.ref('s.title').as('s_title'),
     ]);
-  q = q.where((eb) =>
-    commodityId === null
-      ? eb('g.commodity_id', 'is', null)
-      : eb.or([eb('g.commodity_id', '=', commodityId), eb('g.commodity_id', 'is', null)]),
-  );
+  if (commodityId !== undefined)
+    q = q.where((eb) =>
+      commodityId === null
+        ? eb('g.commodity_id', 'is', null)
+        : eb.or([eb('g.commodity_id', '=', commodityId), eb('g.commodity_id', 'is', null)]),
+    );
   const rows = await q.orderBy('g.commodity_id', 'desc').orderBy('g.limit_value').execute();
   return rows.map((r) => ({
     slug: r.slug,

@@ -116,3 +116,25 @@ test('US customary units apply to what is typed and shown; SI stays stored', asy
     await expect(form.getByTestId('form-success')).toContainText('SI units');
   }
 });
+
+test('an apple bulk bin at 600 mm: the verdict judges the bruise against a published grade, the onset margin beside it', async ({
+  page,
+  signInAs,
+}) => {
+  await signInAs('engineer');
+  await page.goto('/checks/stack?cultivar=apple-type');
+  // The page's defaults are a 1200 × 1000 mm bin filled 600 mm deep; nothing of the fruit typed.
+  await expect(page.getByTestId('bruise-verdict')).toHaveText(
+    "bruise within the grade's tolerance",
+    {
+      timeout: 30_000,
+    },
+  );
+  await expect(page.getByTestId('bruise-words')).toContainText('U.S. Extra Fancy');
+  await expect(page.getByTestId('margin-value')).toBeVisible();
+  // A stricter site or research rule is chosen from the list; the verdict names it.
+  await page.getByTestId('grade-select').selectOption('critical-bruise-100mm2');
+  await expect(page.getByTestId('bruise-words')).toContainText('100 mm²', { timeout: 30_000 });
+  await page.setViewportSize({ width: 390, height: 900 });
+  await page.screenshot({ path: 'tests/artifacts/check-stack-grade-390.png', fullPage: true });
+});
