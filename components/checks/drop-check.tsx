@@ -23,12 +23,13 @@ export function DropCheck({
   initialCultivar: string;
 }) {
   const [surface, setSurface] = useState<DropSurface>('steel');
+  const [gradeRule, setGradeRule] = useState('');
   const { cultivar, setCultivar, stage, setStage, body, state, fields } =
     useCheckForm<DropCheckResult>({
       endpoint: '/api/checks/drop',
       initialCultivar,
       defaults: { heightMm: '150', padModulusMpa: '0.5', padThicknessMm: '25' },
-      choices: { surface },
+      choices: { surface, ...(gradeRule && { gradeRule }) },
       keep: (key) => !key.startsWith('pad') || surface === 'foam',
     });
   const form = (
@@ -39,6 +40,7 @@ export function DropCheck({
       setCultivar={setCultivar}
       stage={stage}
       setStage={setStage}
+      grade={{ value: gradeRule, onChange: setGradeRule }}
       fields={fields}
       message={state.message}
     >
@@ -73,9 +75,11 @@ export function DropCheck({
       form={form}
       figuresTestId="drop-figures"
       basis={(r) =>
-        r?.margin?.basis === 'dynamic'
-          ? `Published dynamic threshold: ${r.dynamic?.basis} (${r.dynamic?.source ?? 'no source'}) ÷ this drop.`
-          : 'Static threshold ÷ elastic Hertz peak pressure — far stricter than drop tests (see below).'
+        `${
+          r?.margin?.basis === 'dynamic'
+            ? `Published dynamic threshold: ${r.dynamic?.basis} (${r.dynamic?.source ?? 'no source'}) ÷ this drop.`
+            : 'Static threshold ÷ elastic Hertz peak pressure — far stricter than drop tests (see below).'
+        }${r?.relation ? ` ${r.relation}` : ''}`
       }
       extras={(r) => <DropExtras result={r} />}
     />
@@ -97,6 +101,11 @@ function DropExtras({ result }: { result: DropCheckResult }) {
           bound, not the verdict.
         </p>
       ) : null}
+      {result.relation ? (
+        <p className="text-sm text-stone-700" data-testid="drop-relation">
+          {result.relation}
+        </p>
+      ) : null}
       <SafeHeights rows={result.safe_heights} />
     </>
   );
@@ -114,7 +123,8 @@ function SafeHeights({ rows }: { rows: DropCheckResult['safe_heights'] }) {
           <tr>
             <th className="py-1 pr-2">Surface</th>
             <th className="py-1 pr-2">From the published drop threshold</th>
-            <th className="py-1">From the static threshold (elastic, stricter)</th>
+            <th className="py-1 pr-2">No bruise, from the static threshold (elastic, stricter)</th>
+            <th className="py-1">Bruise within the grade (Hertz field)</th>
           </tr>
         </thead>
         <tbody>
@@ -134,8 +144,13 @@ function SafeHeights({ rows }: { rows: DropCheckResult['safe_heights'] }) {
                   </>
                 )}
               </td>
-              <td className="num py-1">
+              <td className="num py-1 pr-2">
                 {r.static_safe_height_mm === null ? '—' : show(r.static_safe_height_mm, 'mm')}
+              </td>
+              <td className="num py-1">
+                {r.within_tolerance_height_mm == null
+                  ? '—'
+                  : show(r.within_tolerance_height_mm, 'mm')}
               </td>
             </tr>
           ))}

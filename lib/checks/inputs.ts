@@ -48,6 +48,8 @@ export const dropCheckSchema = z
     }),
     padModulusMpa: measure('Padding modulus', 'MPa', 0, 10_000).optional(),
     padThicknessMm: measure('Padding thickness', 'mm', 0, 1000).optional(),
+    /** The grade rule the bruise is judged by (its slug); the commodity's strictest by default. */
+    gradeRule: slugSchema.optional(),
   })
   .strict()
   .superRefine((v, ctx) => {

@@ -55,6 +55,8 @@ export interface CheckReport {
   restsOn: string | null;
   /** The predicted bruise judged against a grade rule, where the check sizes one. */
   bruise?: BruiseView | null;
+  /** Which figure the verdict rests on when two could, and how they relate (drops). */
+  relation?: string | null;
   charts: ChartSpec[];
   /** The curves as columns (each named with its unit) and rows. */
   curves: { columns: string[]; rows: (number | null)[][] };
@@ -97,9 +99,11 @@ export function pointsOf<T>(rows: readonly T[], x: (r: T) => number, y: (r: T) =
 
 /** What the margin divides, in words, from its basis. */
 export function marginBasis(report: CheckReport): string {
-  return report.margin?.basis === 'dynamic'
-    ? 'Published dynamic threshold ÷ this drop.'
-    : 'Static bruise threshold ÷ contact pressure.';
+  const basis =
+    report.margin?.basis === 'dynamic'
+      ? 'Published dynamic threshold ÷ this drop.'
+      : 'Static bruise threshold ÷ contact pressure.';
+  return report.relation ? `${basis} ${report.relation}` : basis;
 }
 
 /**

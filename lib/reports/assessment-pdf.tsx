@@ -84,6 +84,7 @@ function Report({ a, check }: { a: Assessment; check: RegisteredCheck }) {
         <Text style={s.muted}>
           {margin ? `Basis: ${margin.basis} threshold. ` : ''}
           {report.restsOn ? `${report.restsOn} ` : ''}
+          {report.relation ? `${report.relation} ` : ''}
           {VERDICT_RULE}
         </Text>
         <Text style={s.h2}>Scenario</Text>

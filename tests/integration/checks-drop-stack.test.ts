@@ -463,3 +463,53 @@ describe("an admin's own grade rule", () => {
     expect(new Set(slugs).size).toBe(4);
   });
 });
+
+describe('drop check: the bruise and the two heights', () => {
+  beforeAll(async () => {
+    signInAs(await userId(ACCOUNTS.engineer));
+  });
+
+  it('without a published drop figure the verdict rests on the Hertz bruise against the grade', async () => {
+    const r = await result(drop, {
+      ...FRUIT,
+      staticThresholdKpa: 100,
+      heightMm: 100,
+      surface: 'steel',
+    });
+    // b = a√(1 − (p_t/p₀)²) from the impact's own contact radius and peak (Johnson 1985,
+    // eq. 4.25), written out here. Tolerance 0.5 %: the figures are kept to 4 significant digits.
+    const a = r.impact.contact_radius_mm;
+    const p0 = r.impact.peak_pressure_kpa;
+    const b = a * Math.sqrt(1 - (100 / p0) ** 2);
+    expect(rel(r.bruise.diameter_mm, 2 * b)).toBeLessThan(0.005);
+    expect(r.margin.basis).toBe('static');
+    expect(r.relation).toMatch(
+      /^No published drop figure for steel: the verdict rests on the bruise/,
+    );
+    // At the tallest drop within the rule, the bruise is the rule's limit (100 mm², the research
+    // definition for custom fruit): re-run there, within 0.5 % (the height is rounded).
+    const at = await result(drop, {
+      ...FRUIT,
+      staticThresholdKpa: 100,
+      heightMm: r.within_tolerance_height_mm,
+      surface: 'steel',
+    });
+    expect(at.bruise.rule.slug).toBe('critical-bruise-100mm2');
+    expect(rel(at.bruise.area_mm2, 100)).toBeLessThan(0.005);
+    // Two heights per surface: no bruise at all, and a bruise within the grade (higher).
+    const steel = r.safe_heights.find((s: { surface: string }) => s.surface === 'steel');
+    expect(steel.within_tolerance_height_mm).toBeGreaterThan(steel.static_safe_height_mm);
+    expect(steel.within_tolerance_height_mm).toBe(r.within_tolerance_height_mm);
+  });
+
+  it('with a drop figure for the surface the verdict rests on it, and says how the estimate differs', async () => {
+    const r = await result(drop, { cultivar: 'apple-type', heightMm: 100, surface: 'steel' });
+    expect(r.margin.basis).toBe('dynamic');
+    expect(r.relation).toMatch(/^The verdict rests on the drop figure for steel/);
+    expect(r.relation).toMatch(/brief impact better than the held load/);
+    expect(r.bruise.rule.slug).toBe('us-extra-fancy-apple');
+    console.log(
+      `apple drop onto steel: published ${r.dynamic.basis} (${r.dynamic.observation}); Hertz: no bruise up to ${r.safe_heights[0].static_safe_height_mm} mm, within U.S. Extra Fancy up to ${r.within_tolerance_height_mm} mm; at 100 mm a bruise ${r.bruise.diameter_mm} mm across`,
+    );
+  });
+});

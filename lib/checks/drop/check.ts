@@ -2,12 +2,49 @@ import 'server-only';
 import type { Actor } from '@/lib/auth/actor';
 import { parseInput } from '@/lib/validation/parse';
 import { dropCheckSchema } from '@/lib/checks/inputs';
-import { heightForPressure, impactAt, surfaceSI, type FruitSI } from './model';
+import {
+  heightForBruise,
+  heightForPressure,
+  impactAt,
+  impactBruiseRadius,
+  surfaceSI,
+  type FruitSI,
+} from './model';
 import { pinnedSummary } from '../cultivar-inputs';
 import { verdictEvidence } from '../evidence-summary';
 import { fruitUsed, resolveFruit, type ResolvedFruit } from '../resolve-fruit';
 import { DROP_SURFACE_KEYS, DROP_SURFACES, type DropSurface } from '../surfaces';
 import { verdictOf } from '../verdict';
+import { chooseGradeRule } from '@/lib/data/grade-rules';
+import { judgeBruise, ruleView, type BruiseView } from '../bruise';
+import { bruiseRadiusLimit } from '../stack/model';
+import type { Limit } from './limits';
+
+/**
+ * How the published drop figure (when there is one) and the bruise the Hertz field predicts from
+ * the static threshold relate, and which one the verdict rests on.
+ */
+function relationOf(
+  limit: Limit | null,
+  bruise: BruiseView | null,
+  withinM: number | null,
+  heightM: number,
+  surface: string,
+): string {
+  const within =
+    withinM === null || !bruise?.rule
+      ? ''
+      : ` The Hertz estimate from the static threshold keeps the bruise within ${bruise.rule.name} up to ${round(withinM * 1000, 3)} mm.`;
+  if (limit) {
+    const kind = limit.upperBound
+      ? 'a height at which fruit bruised (an upper bound)'
+      : 'a published no-bruise or recommended height';
+    return `The verdict rests on the drop figure for ${surface.toLowerCase()}, ${limit.basis} (${limit.source ?? 'no source'}), ${kind}: a drop test of the fruit itself, which outranks an estimate.${within} The two differ because flesh withstands a brief impact better than the held load its static threshold was measured under, and the elastic Hertz peak is an upper bound.`;
+  }
+  if (bruise)
+    return `No published drop figure for ${surface.toLowerCase()}: the verdict rests on the bruise the elastic Hertz field predicts from the static threshold at ${round(heightM * 1000, 3)} mm, judged against the grade rule.${within}`;
+  return 'No drop figure and no static threshold: no verdict can be given.';
+}
 import type { DropResult } from './result';
 import { dynamicLimits } from './limits';
 
@@ -40,6 +77,7 @@ function safeHeights(
   fruit: FruitSI,
   pad: { modulusMpa: number; thicknessMm: number } | undefined,
   limitsFor: ReturnType<typeof limitsOf>,
+  bruiseLimit: number | null,
 ) {
   return DROP_SURFACE_KEYS.filter((s) => s !== 'foam' || pad).map((surface) => {
     const limits = limitsFor(surface);
@@ -57,6 +95,17 @@ function safeHeights(
       dynamic_rung: limits[0]?.rung ?? null,
       dynamic_upper_bound: limits[0]?.upperBound ?? null,
       static_safe_height_mm: staticM === null ? null : round(staticM * 1000),
+      within_tolerance_height_mm:
+        staticKpa && bruiseLimit !== null
+          ? round(
+              heightForBruise(
+                fruit,
+                surfaceSI(surface, fruit, pad),
+                staticKpa * 1000,
+                bruiseLimit,
+              ) * 1000,
+            )
+          : null,
     };
   });
 }
@@ -93,6 +142,18 @@ export async function runDropCheck(actor: Actor, raw: unknown): Promise<DropResu
   const staticMargin = f.staticThresholdKpa
     ? (f.staticThresholdKpa.value * 1000) / impact.peakPressure
     : null;
+  const grade = await chooseGradeRule(f.pinned?.commodityId ?? null, input.gradeRule);
+  const rule = grade && ruleView(grade, f.pinned?.commodity ?? null);
+  const thresholdPa = f.staticThresholdKpa ? f.staticThresholdKpa.value * 1000 : null;
+  const bruise =
+    thresholdPa === null
+      ? null
+      : judgeBruise(impactBruiseRadius(fruit, surface, impact.contactRadius, thresholdPa), rule);
+  const bruiseLimit = rule ? bruiseRadiusLimit(rule) : null;
+  const withinM =
+    thresholdPa !== null && bruiseLimit !== null
+      ? heightForBruise(fruit, surface, thresholdPa, bruiseLimit)
+      : null;
   const warnings: string[] = [...f.warnings];
   const bound = limits[0]?.upperBound ? limits[0] : null;
   if (bound)
@@ -160,7 +221,17 @@ export async function runDropCheck(actor: Actor, raw: unknown): Promise<DropResu
             source: f.staticThresholdKpa!.source,
             rung: f.staticThresholdKpa!.rung,
           },
-    safe_heights: safeHeights(f, fruit, pad, limitsFor),
+    safe_heights: safeHeights(f, fruit, pad, limitsFor, bruiseLimit),
+    bruise,
+    within_tolerance_height_mm: withinM === null ? null : round(withinM * 1000),
+    // Which figure the verdict rests on, and how the two relate, in one sentence.
+    relation: relationOf(
+      limits[0] ?? null,
+      bruise,
+      withinM,
+      heightM,
+      DROP_SURFACES[input.surface].label,
+    ),
     series: series(fruit, surface, heightM),
     warnings,
     units: {

@@ -1,4 +1,5 @@
 import {
+  hertzBruiseRadius,
   effectiveModulus,
   effectiveRadius,
   hertzImpact,
@@ -75,4 +76,33 @@ export function heightForPressure(
 /** Drop height, m, that gives the fruit this kinetic energy, J: h = E/(m g). */
 export function heightForEnergy(fruit: FruitSI, energy: number): number {
   return energy / (fruit.mass * STANDARD_GRAVITY);
+}
+
+/**
+ * The bruise radius, m, an impact leaves: the region of the Hertz field above the threshold at
+ * the moment of peak compression (hertzBruiseRadius), with the impact's contact radius.
+ */
+export function impactBruiseRadius(
+  fruit: FruitSI,
+  surface: SurfaceSI,
+  contactRadius: number,
+  threshold: number,
+): number {
+  return hertzBruiseRadius(bodies(fruit, surface), contactRadius, threshold);
+}
+
+/**
+ * Largest height, m, whose impact bruise stays within radius `limit` m: the peak pressure at which
+ * the region above the threshold reaches it, p₀ = √(p_t² + (2E*b/(πR))²) (from p₀ = 2aE* / (πR)
+ * and a² = b² + a_t², Johnson 1985, eqs. 4.24–4.25), then the height for that peak.
+ */
+export function heightForBruise(
+  fruit: FruitSI,
+  surface: SurfaceSI,
+  threshold: number,
+  limit: number,
+): number {
+  const b = bodies(fruit, surface);
+  const p0 = Math.hypot(threshold, (2 * b.effectiveModulus * limit) / (Math.PI * b.radius));
+  return heightForPressure(fruit, surface, p0);
 }

@@ -35,10 +35,23 @@ export const dropDescriptor: CheckDescriptor<DropResult> = {
           unit: '–',
           text: r.static ? undefined : 'no static threshold',
         },
+        ...(r.bruise
+          ? [
+              { label: 'Bruise from the Hertz field', value: r.bruise.diameter_mm, unit: 'mm' },
+              {
+                label: 'Tallest drop within the grade (Hertz)',
+                value: r.within_tolerance_height_mm ?? null,
+                unit: 'mm',
+              },
+            ]
+          : []),
       ],
       used: [...fruitUsedRows(u)],
       margin: r.margin,
       restsOn: r.evidence?.rests_on ?? null,
+      // A published drop figure outranks the estimate: the bruise verdict leads only without one.
+      bruise: r.margin?.basis === 'dynamic' ? null : (r.bruise ?? null),
+      relation: r.relation ?? null,
       charts: [
         {
           id: 'drop-pressure',

@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { evidenceSummarySchema } from '../evidence-summary';
 import { RUNGS } from '@/lib/evidence/rungs';
 import { OBSERVATIONS } from '@/lib/properties/quantities';
+import { bruiseSchema } from '../bruise';
 import { fruitUsedShape, pinnedSchema, verdictSchema } from '../used-value';
 
 const n = z.number();
@@ -66,8 +67,15 @@ export const dropResultSchema = z.object({
       dynamic_rung: z.enum(RUNGS).nullable().optional(),
       dynamic_upper_bound: z.boolean().nullable().optional(),
       static_safe_height_mm: nn,
+      within_tolerance_height_mm: nn.optional(),
     }),
   ),
+  /** The bruise the Hertz field predicts from the static threshold, against the grade rule. */
+  bruise: bruiseSchema.nullable().optional(),
+  /** Tallest drop onto this surface whose predicted bruise stays within the rule, mm. */
+  within_tolerance_height_mm: nn.optional(),
+  /** Which figure the verdict rests on, and how the published and predicted heights relate. */
+  relation: z.string().optional(),
   series: z.array(z.object({ height_mm: n, peak_pressure_kpa: n, impact_energy_j: n })),
   warnings: z.array(z.string()),
   /** The weakest rung of evidence the verdict rests on (absent in results saved before it). */
