@@ -4,6 +4,7 @@ const TABS = [
   { href: '/admin/users', label: 'Users and invitations' },
   { href: '/admin/outbox', label: 'Mail outbox' },
   { href: '/admin/audit', label: 'Audit log' },
+  { href: '/admin/grade-rules', label: 'Grade rules' },
 ];
 
 export function AdminTabs({ current }: { current: string }) {

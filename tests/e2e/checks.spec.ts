@@ -138,3 +138,27 @@ test('an apple bulk bin at 600 mm: the verdict judges the bruise against a publi
   await page.setViewportSize({ width: 390, height: 900 });
   await page.screenshot({ path: 'tests/artifacts/check-stack-grade-390.png', fullPage: true });
 });
+
+test("an admin adds the site's own grade rule, and engineers may judge by it", async ({
+  page,
+  signInAs,
+}) => {
+  await signInAs('admin');
+  await page.goto('/admin/grade-rules');
+  await expect(page.getByTestId('grade-rules')).toContainText('U.S. Extra Fancy');
+  const form = page.getByTestId('grade-rule-form');
+  await form.getByLabel('Name').fill('Line 4 apples: 12 mm');
+  await form.getByLabel('Commodity').selectOption('apple');
+  await form.getByLabel(/Largest bruise tolerated/).fill('12');
+  await form.getByRole('button', { name: 'Add rule' }).click();
+  await expect(form.getByTestId('grade-rule-message')).toContainText('Saved');
+  await expect(page.getByTestId('grade-rules')).toContainText('Line 4 apples: 12 mm');
+  // A bad limit is a message beside its field, and nothing is added.
+  await form.getByLabel('Name').fill('Bad rule');
+  await form.getByLabel(/Largest bruise tolerated/).fill('-3');
+  await form.getByRole('button', { name: 'Add rule' }).click();
+  await expect(form).toContainText('must be above 0');
+  await page.setViewportSize({ width: 390, height: 900 });
+  expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
+  await page.screenshot({ path: 'tests/artifacts/admin-grade-rules-390.png', fullPage: true });
+});
