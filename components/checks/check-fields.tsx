@@ -64,50 +64,6 @@ export interface CultivarOption {
   grades?: { slug: string; name: string }[];
 }
 
-/** The grade rule a bruise is judged by; empty takes the commodity's strictest standard. */
-export function GradeRuleSelect({
-  value,
-  onChange,
-  rules,
-  errors,
-}: {
-  value: string;
-  onChange: (slug: string) => void;
-  rules: { slug: string; name: string }[];
-  errors?: string[];
-}) {
-  const id = useId();
-  return (
-    <div className="space-y-1">
-      <label htmlFor={id} className="block text-sm font-medium">
-        Grade rule for the bruise
-      </label>
-      <select
-        id={id}
-        value={value}
-        onChange={(e) => onChange(e.target.value)}
-        aria-describedby={`${id}-note`}
-        className="w-full max-w-xs rounded-md border border-stone-300 bg-white px-2 py-1.5 text-sm"
-        data-testid="grade-select"
-      >
-        <option value="">The commodity&apos;s strictest published rule</option>
-        {rules.map((r) => (
-          <option key={r.slug} value={r.slug}>
-            {r.name}
-          </option>
-        ))}
-      </select>
-      <p id={`${id}-note`} aria-live="polite" className="text-xs text-stone-500">
-        {errors?.length ? (
-          <span className="text-red-700">{errors.join(' ')}</span>
-        ) : (
-          'The verdict compares the predicted bruise with this rule; the onset margin stays beside it.'
-        )}
-      </p>
-    </div>
-  );
-}
-
 /**
  * The placeholder of a fruit field: the figure the check takes when nothing is typed, with the
  * rung of evidence it comes from in words, or a prompt when no rung has one.
@@ -124,21 +80,31 @@ export function publishedHint(
     : `${Number(toDisplay(v.value).toPrecision(4))} (${RUNG_SHORT[v.rung]})`;
 }
 
-/** The ripeness stage whose values a check takes, where the knowledge base stages them. */
-export function StageSelect({
+/** A select beside the cultivar: an empty first choice, the options, and a note or an error. */
+function ChoiceSelect({
+  label,
+  testId,
+  empty,
+  options,
+  note,
   value,
   onChange,
   errors,
 }: {
+  label: string;
+  testId: string;
+  empty: string;
+  options: { value: string; label: string }[];
+  note: string;
   value: string;
-  onChange: (stage: string) => void;
+  onChange: (value: string) => void;
   errors?: string[];
 }) {
   const id = useId();
   return (
     <div className="space-y-1">
       <label htmlFor={id} className="block text-sm font-medium">
-        Ripeness stage
+        {label}
       </label>
       <select
         id={id}
@@ -146,23 +112,52 @@ export function StageSelect({
         onChange={(e) => onChange(e.target.value)}
         aria-describedby={`${id}-note`}
         className="w-full max-w-xs rounded-md border border-stone-300 bg-white px-2 py-1.5 text-sm"
-        data-testid="stage-select"
+        data-testid={testId}
       >
-        <option value="">Any (unstaged values first)</option>
-        {STAGES.map((s) => (
-          <option key={s} value={s}>
-            {STAGE_LABELS[s]}
+        <option value="">{empty}</option>
+        {options.map((o) => (
+          <option key={o.value} value={o.value}>
+            {o.label}
           </option>
         ))}
       </select>
       <p id={`${id}-note`} aria-live="polite" className="text-xs text-stone-500">
-        {errors?.length ? (
-          <span className="text-red-700">{errors.join(' ')}</span>
-        ) : (
-          'A value measured at another stage is used only with a warning.'
-        )}
+        {errors?.length ? <span className="text-red-700">{errors.join(' ')}</span> : note}
       </p>
     </div>
+  );
+}
+
+type Choice = { value: string; onChange: (value: string) => void; errors?: string[] };
+
+/** The ripeness stage whose values a check takes, where the knowledge base stages them. */
+export function StageSelect(p: Choice) {
+  return (
+    <ChoiceSelect
+      {...p}
+      label="Ripeness stage"
+      testId="stage-select"
+      empty="Any (unstaged values first)"
+      options={STAGES.map((s) => ({ value: s, label: STAGE_LABELS[s] }))}
+      note="A value measured at another stage is used only with a warning."
+    />
+  );
+}
+
+/** The grade rule a bruise is judged by; empty takes the commodity's strictest standard. */
+export function GradeRuleSelect({
+  rules,
+  ...p
+}: Choice & { rules: { slug: string; name: string }[] }) {
+  return (
+    <ChoiceSelect
+      {...p}
+      label="Grade rule for the bruise"
+      testId="grade-select"
+      empty="The commodity's strictest published rule"
+      options={rules.map((r) => ({ value: r.slug, label: r.name }))}
+      note="The verdict compares the predicted bruise with this rule; the onset margin stays beside it."
+    />
   );
 }
 

@@ -23,13 +23,12 @@ export function DropCheck({
   initialCultivar: string;
 }) {
   const [surface, setSurface] = useState<DropSurface>('steel');
-  const [gradeRule, setGradeRule] = useState('');
-  const { cultivar, setCultivar, stage, setStage, body, state, fields } =
+  const { cultivar, setCultivar, stage, setStage, grade, body, state, fields } =
     useCheckForm<DropCheckResult>({
       endpoint: '/api/checks/drop',
       initialCultivar,
       defaults: { heightMm: '150', padModulusMpa: '0.5', padThicknessMm: '25' },
-      choices: { surface, ...(gradeRule && { gradeRule }) },
+      choices: { surface },
       keep: (key) => !key.startsWith('pad') || surface === 'foam',
     });
   const form = (
@@ -40,7 +39,7 @@ export function DropCheck({
       setCultivar={setCultivar}
       stage={stage}
       setStage={setStage}
-      grade={{ value: gradeRule, onChange: setGradeRule }}
+      grade={grade}
       fields={fields}
       message={state.message}
     >

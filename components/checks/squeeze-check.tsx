@@ -19,8 +19,7 @@ export function SqueezeCheck({
   initialCultivar: string;
 }) {
   const [facing, setFacing] = useState<FacingPreset>('rigid');
-  const [gradeRule, setGradeRule] = useState('');
-  const { cultivar, setCultivar, stage, setStage, text, set, body, state } =
+  const { cultivar, setCultivar, stage, setStage, grade, text, set, body, state } =
     useCheckForm<SqueezeCheckResult>({
       endpoint: '/api/checks/squeeze',
       initialCultivar,
@@ -31,7 +30,7 @@ export function SqueezeCheck({
         accelerationMs2: '2',
         maxTravelMm: '2',
       },
-      choices: { facing, ...(gradeRule && { gradeRule }) },
+      choices: { facing },
       keep: (key) => !key.startsWith('facing') || facing === 'custom',
       delayMs: 500,
     });
@@ -49,8 +48,7 @@ export function SqueezeCheck({
           setCultivar={setCultivar}
           stage={stage}
           setStage={setStage}
-          gradeRule={gradeRule}
-          setGradeRule={setGradeRule}
+          grade={grade}
           facing={facing}
           setFacing={setFacing}
           text={text}

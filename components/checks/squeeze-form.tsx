@@ -34,8 +34,7 @@ export interface SqueezeFormProps {
   setCultivar: (slug: string) => void;
   stage: string;
   setStage: (stage: string) => void;
-  gradeRule: string;
-  setGradeRule: (slug: string) => void;
+  grade: { value: string; onChange: (slug: string) => void };
   facing: FacingPreset;
   setFacing: (f: FacingPreset) => void;
   text: FormText;
@@ -61,7 +60,7 @@ export function SqueezeForm(p: SqueezeFormProps) {
         onChange={p.setCultivar}
         errors={p.fieldErrors.cultivar}
         stage={{ value: p.stage, onChange: p.setStage, errors: p.fieldErrors.stage }}
-        grade={{ value: p.gradeRule, onChange: p.setGradeRule, errors: p.fieldErrors.gradeRule }}
+        grade={{ ...p.grade, errors: p.fieldErrors.gradeRule }}
       />
       <fieldset className="space-y-3 rounded-md border border-stone-200 p-3">
         <legend className="px-1 text-xs font-medium uppercase tracking-wide text-stone-600">

@@ -1,6 +1,5 @@
 'use client';
 
-import { useState } from 'react';
 import type { StackCheckResult } from '@/lib/checks/stack/check';
 import type { CultivarOption } from './check-fields';
 import { CheckForm, MeasureFields, type FieldSpec } from './measure-fields';
@@ -38,13 +37,12 @@ export function StackCheck({
   initialCultivar: string;
 }) {
   const units = useUnits();
-  const [gradeRule, setGradeRule] = useState('');
-  const { cultivar, setCultivar, stage, setStage, body, state, fields } =
+  const { cultivar, setCultivar, stage, setStage, grade, body, state, fields } =
     useCheckForm<StackCheckResult>({
       endpoint: '/api/checks/stack',
       initialCultivar,
       defaults: { binLengthMm: '1200', binWidthMm: '1000', fillDepthMm: '600' },
-      choices: gradeRule ? { gradeRule } : {},
+      choices: {},
     });
   const form = (
     <CheckForm
@@ -54,7 +52,7 @@ export function StackCheck({
       setCultivar={setCultivar}
       stage={stage}
       setStage={setStage}
-      grade={{ value: gradeRule, onChange: setGradeRule }}
+      grade={grade}
       fields={fields}
       message={state.message}
     >

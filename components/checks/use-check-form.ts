@@ -31,15 +31,28 @@ export function useCheckForm<R>({
   const units = useUnits();
   const [cultivar, setCultivar] = useState(initialCultivar);
   const [stage, setStage] = useState('');
+  const [gradeRule, setGradeRule] = useState('');
   const [text, setText] = useState<FormText>(() => initialText(defaults, units.toDisplay));
   const set = (key: string) => (value: string) => setText((t) => ({ ...t, [key]: value }));
   const body: Record<string, unknown> = {
     ...choices,
     ...(cultivar && { cultivar }),
     ...(cultivar && stage && { stage }),
+    ...(cultivar && gradeRule && { gradeRule }),
     ...siFields(text, units.fromDisplay, keep),
   };
   const state = useCheck<R>(endpoint, body, delayMs);
   const fields: FieldsState = { text, set, fieldErrors: state.fieldErrors };
-  return { cultivar, setCultivar, stage, setStage, text, set, body, state, fields };
+  return {
+    cultivar,
+    setCultivar,
+    stage,
+    setStage,
+    grade: { value: gradeRule, onChange: setGradeRule },
+    text,
+    set,
+    body,
+    state,
+    fields,
+  };
 }

@@ -117,3 +117,8 @@ export function radiusAbove(
   }
   return radius / 1000;
 }
+
+/** A bruise radius limit, m, from a grade rule: half its diameter, or the radius of its area. */
+export function bruiseRadiusLimit(rule: { measure: 'diameter' | 'area'; limit: number }): number {
+  return rule.measure === 'diameter' ? rule.limit / 2000 : Math.sqrt(rule.limit / Math.PI) / 1000;
+}

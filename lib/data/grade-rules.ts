@@ -51,17 +51,8 @@ export async function gradeRulesFor(commodityId: number | null | undefined): Pro
   let q = typed()
     .selectFrom('grade_rules as g')
     .leftJoin('commodities as m', 'm.id', 'g.commodity_id')
-    .leftJoin('sources as s', 's.id', 'g.source_id')
     .selectAll('g')
-    .select(['m.name as commodity_name'])
-    .select((eb) => [
-      eb.ref('s.id').as('s_id'),
-      eb.ref('s.key').as('s_key'),
-      eb.ref('s.kind').as('s_kind'),
-      eb.ref('s.authors').as('s_authors'),
-      eb.ref('s.year').as('s_year'),
-      eb.ref('s.title').as('s_title'),
-    ]);
+    .select(['m.name as commodity_name']);
   if (commodityId !== undefined)
     q = q.where((eb) =>
       commodityId === null
@@ -69,6 +60,13 @@ export async function gradeRulesFor(commodityId: number | null | undefined): Pro
         : eb.or([eb('g.commodity_id', '=', commodityId), eb('g.commodity_id', 'is', null)]),
     );
   const rows = await q.orderBy('g.commodity_id', 'desc').orderBy('g.limit_value').execute();
+  const ids = [...new Set(rows.map((r) => r.source_id).filter((id) => id !== null))];
+  const sources = new Map(
+    (ids.length
+      ? await typed().selectFrom('sources').selectAll().where('id', 'in', ids).execute()
+      : []
+    ).map((row) => [row.id, toSource(row)]),
+  );
   return rows.map((r) => ({
     slug: r.slug,
     name: r.name,
@@ -78,26 +76,11 @@ export async function gradeRulesFor(commodityId: number | null | undefined): Pro
     limit: r.limit_value,
     maxDepthMm: r.max_depth_mm,
     source:
-      r.s_id === null
-        ? r.kind === 'site'
+      r.source_id !== null
+        ? citationOf(sources.get(r.source_id) ?? null)
+        : r.kind === 'site'
           ? 'site rule'
-          : null
-        : citationOf(
-            toSource({
-              id: r.s_id,
-              key: r.s_key!,
-              kind: r.s_kind!,
-              authors: r.s_authors ?? null,
-              year: r.s_year ?? null,
-              title: r.s_title!,
-              venue: null,
-              pages: null,
-              doi: null,
-              url: null,
-              note: null,
-              created_at: new Date(),
-            }),
-          ),
+          : null,
     note: r.note,
   }));
 }

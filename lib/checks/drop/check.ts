@@ -16,8 +16,7 @@ import { fruitUsed, resolveFruit, type ResolvedFruit } from '../resolve-fruit';
 import { DROP_SURFACE_KEYS, DROP_SURFACES, type DropSurface } from '../surfaces';
 import { verdictOf } from '../verdict';
 import { chooseGradeRule } from '@/lib/data/grade-rules';
-import { judgeBruise, ruleView, type BruiseView } from '../bruise';
-import { bruiseRadiusLimit } from '../stack/model';
+import { bruiseRadiusLimit, judgeBruise, ruleView, type BruiseView } from '../bruise';
 import type { Limit } from './limits';
 
 /**

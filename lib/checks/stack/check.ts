@@ -7,15 +7,8 @@ import { verdictEvidence } from '../evidence-summary';
 import { fruitUsed, resolveFruit } from '../resolve-fruit';
 import type { StackResult } from './result';
 import { chooseGradeRule } from '@/lib/data/grade-rules';
-import { judgeBruise, ruleView } from '../bruise';
-import {
-  bruiseAt,
-  bruiseRadiusLimit,
-  deepestFillWithin,
-  deepestSafeFill,
-  stackAt,
-  type StackSI,
-} from './model';
+import { bruiseRadiusLimit, judgeBruise, ruleView } from '../bruise';
+import { bruiseAt, deepestFillWithin, deepestSafeFill, stackAt, type StackSI } from './model';
 import { verdictOf } from '../verdict';
 import { stackFigures } from './figures';
 

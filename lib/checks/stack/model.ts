@@ -74,11 +74,6 @@ export function deepestSafeFill(s: StackSI, threshold: number): number | null {
   return janssenMaxFillDepth({ ...binOf(s), pressureLimit: forceLimit / (d * d) });
 }
 
-/** A bruise radius limit, m, from a grade rule: half its diameter, or the radius of its area. */
-export function bruiseRadiusLimit(rule: { measure: 'diameter' | 'area'; limit: number }): number {
-  return rule.measure === 'diameter' ? rule.limit / 2000 : Math.sqrt(rule.limit / Math.PI) / 1000;
-}
-
 /** The bruise the bottom contact leaves at a depth: the radius where p > threshold, m. */
 export function bruiseAt(s: StackSI, depth: number, threshold: number): number {
   return hertzBruiseRadius(pair(s), stackAt(s, depth).contactRadius, threshold);
