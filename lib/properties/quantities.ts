@@ -63,6 +63,12 @@ export const QUANTITIES = {
     variants: [''],
     hint: "Janssen's K",
   },
+  angle_of_repose: {
+    label: 'Angle of repose',
+    unit: '°',
+    variants: [''],
+    hint: 'of a free-standing heap of the fruit (emptying or filling method)',
+  },
 } as const satisfies Record<
   string,
   { label: string; unit: string; variants: readonly string[] | 'surface' | 'probe'; hint: string }
