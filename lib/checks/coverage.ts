@@ -102,7 +102,7 @@ export function coverageOf(record: CultivarRecord, all: CultivarRecord[]): Recor
     source: limit?.source ?? null,
   });
   out.runs.drop = Boolean(limit) || hasThreshold;
-  const bin = stackFigures(set, fruit.densityKgM3.value, {});
+  const bin = stackFigures(set, fruit.densityKgM3, {});
   out.figures.push(figureOf('stack', 'Bulk density', bin.bulk));
   out.figures.push(figureOf('stack', 'Wall friction', bin.wall));
   out.figures.push(figureOf('stack', 'Lateral pressure ratio', bin.ratio));

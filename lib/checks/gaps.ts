@@ -69,6 +69,13 @@ const PROBED_FIGURES: Record<string, string[]> = {
 const DERIVED_FROM: Record<string, string[]> = {
   Mass: ['Density', 'Diameter', 'Axial diameter'],
   Density: ['Mass', 'Diameter', 'Axial diameter'],
+  'Bulk density': ['Density'],
+};
+
+/** Figures derived from one quantity the matrix does not show (lib/checks/fruit.ts, stack/figures.ts). */
+const DERIVED_FROM_QUANTITY: Record<string, Quantity> = {
+  'Static bruise threshold': 'bioyield_stress',
+  'Lateral pressure ratio': 'angle_of_repose',
 };
 
 function probeValue(field: string): RevisionValue {
@@ -103,9 +110,9 @@ function fullCoverage(record: CultivarRecord, all: CultivarRecord[]) {
   return { runs: first.runs, coverage, missing };
 }
 
-/** Whether the threshold, derived from a bioyield stress, came from the record's own one. */
-function bioyieldIsOwn(record: CultivarRecord, set: EvidenceSet): boolean {
-  const rung = climb(set, { quantity: 'bioyield_stress' }, { unit: 'kPa' })?.used.rung;
+/** Whether a figure derived from one quantity (a bioyield stress, an angle of repose) used the record's own. */
+function quantityIsOwn(record: CultivarRecord, set: EvidenceSet, quantity: Quantity): boolean {
+  const rung = climb(set, { quantity }, { unit: '' })?.used.rung;
   return rung === (record.isType ? 'commodity' : 'own');
 }
 
@@ -138,7 +145,8 @@ function cellsOf(
   for (const [figure, cell] of Object.entries(cells)) {
     if (cell.rung !== 'derived') continue;
     if (DERIVED_FROM[figure]) cell.fromOwn = inputsOf(figure).every((i) => i?.rung === 'own');
-    else if (figure === 'Static bruise threshold') cell.fromOwn = bioyieldIsOwn(record, set);
+    else if (DERIVED_FROM_QUANTITY[figure])
+      cell.fromOwn = quantityIsOwn(record, set, DERIVED_FROM_QUANTITY[figure]);
   }
   return cells;
 }

@@ -136,3 +136,56 @@ export const AXIAL_BY_SHAPE: Relation<'axial' | 'equatorial' | 'size'> = {
 export function axialByShape(axialMm: number, equatorialMm: number, sizeMm: number): number {
   return (axialMm * sizeMm) / equatorialMm;
 }
+
+/**
+ * A bulk of like spheres poured loosely into a container fills about 60 % of its volume (random
+ * loose packing 0.60; random close packing 0.637): Scott G.D., "Packing of spheres", Nature 188,
+ * 908–909, 1960 [from memory]. Fruit of one grade are near-spheres of one size, so the bulk
+ * density of fruit in a bin is the fruit's density times that fraction; the band 0.55–0.64 spans
+ * loose to close random packing.
+ */
+export const PACKING_FRACTION = { value: 0.6, low: 0.55, high: 0.64 } as const;
+
+export const BULK_DENSITY_FROM_DENSITY: Relation<'density' | 'packing'> = {
+  id: 'bulk-density-from-density',
+  statement: `bulk density = fruit density × packing fraction ${PACKING_FRACTION.value} (random loose packing of like spheres, ${PACKING_FRACTION.low}–${PACKING_FRACTION.high})`,
+  source: 'Scott G.D., Packing of spheres, Nature 188:908–909, 1960 (from memory)',
+  exponents: { density: 1, packing: 1 },
+};
+
+/** Bulk density, kg/m³, of a loosely poured bin of fruit of the given density, kg/m³. */
+export function bulkDensityFromDensity(densityKgM3: number): number {
+  return densityKgM3 * PACKING_FRACTION.value;
+}
+
+/**
+ * The ratio of horizontal to vertical pressure in a bulk at rest, K₀ = 1 − sin φ, for a
+ * cohesionless bulk of internal friction angle φ: Jáky J., "The coefficient of earth pressure at
+ * rest", Journal of the Society of Hungarian Architects and Engineers, 1944 [from memory]. For a
+ * free-flowing bulk the angle of repose is taken as φ (an approximation; the silo code
+ * EN 1991-4:2006, Annex D, sets K = 1.1 (1 − sin φ) for wall loads [from memory]). The exponent
+ * for the spread is the relation's local elasticity, d ln K / d ln φ = −φ cos φ / (1 − sin φ),
+ * so it is set per angle by `lateralRatioRelation`.
+ */
+export const LATERAL_RATIO_FROM_REPOSE: Relation<'repose'> = {
+  id: 'lateral-ratio-from-repose',
+  statement:
+    'lateral pressure ratio K = 1 − sin φ, φ the angle of repose of the fruit (a bulk at rest)',
+  source:
+    'Jáky J., The coefficient of earth pressure at rest, J. Soc. Hungarian Architects and Engineers, 1944 (from memory)',
+  exponents: { repose: 1 },
+};
+
+/** Janssen's lateral pressure ratio of a bulk whose angle of repose is `degrees`. */
+export function lateralRatioFromRepose(degrees: number): number {
+  return 1 - Math.sin((degrees * Math.PI) / 180);
+}
+
+/** The relation at one angle, its exponent the local elasticity (for the spread). */
+export function lateralRatioRelation(degrees: number): Relation<'repose'> {
+  const phi = (degrees * Math.PI) / 180;
+  return {
+    ...LATERAL_RATIO_FROM_REPOSE,
+    exponents: { repose: (-phi * Math.cos(phi)) / (1 - Math.sin(phi)) },
+  };
+}

@@ -19,7 +19,7 @@ export async function runStackCheck(actor: Actor, raw: unknown): Promise<StackRe
   const input = parseInput(stackCheckSchema, raw);
   const f = await resolveFruit(actor, input);
   const p = f.pinned;
-  const { bulk, wall, ratio } = stackFigures(f.evidence, f.densityKgM3.value, input);
+  const { bulk, wall, ratio } = stackFigures(f.evidence, f.densityKgM3, input);
   const s: StackSI = {
     length: input.binLengthMm / 1000,
     width: input.binWidthMm / 1000,

@@ -1,19 +1,41 @@
-import { checkTypical, climb, type EvidenceSet } from '@/lib/evidence/ladder';
+import { checkTypical, climb, derivedValue, type EvidenceSet } from '@/lib/evidence/ladder';
+import {
+  BULK_DENSITY_FROM_DENSITY,
+  bulkDensityFromDensity,
+  lateralRatioFromRepose,
+  lateralRatioRelation,
+  PACKING_FRACTION,
+} from '@/lib/evidence/relations';
 import type { UsedValue } from '../used-value';
 
 const round = (x: number, digits = 4) => Number(x.toPrecision(digits));
 
-/** Random loose packing of like spheres fills about 60 % of a bin's volume [from memory]. */
-const PACKING_FRACTION = 0.6;
+/** Evidence a relation may stand on: published, or derived from published figures (rungs 1–3). */
+const isPublished = (u: UsedValue) =>
+  u.rung === 'own' || u.rung === 'commodity' || u.rung === 'derived';
+
+/** The packing fraction as a figure with its published band, for the spread it carries. */
+const PACKING: UsedValue = {
+  value: PACKING_FRACTION.value,
+  unit: '–',
+  rung: 'derived',
+  source: BULK_DENSITY_FROM_DENSITY.source,
+  note: null,
+  low: PACKING_FRACTION.low,
+  high: PACKING_FRACTION.high,
+  sd: null,
+  spread: 'random loose to random close packing',
+};
 
 /**
  * The bin's figures from the evidence ladder: bulk density, wall friction and Janssen's ratio,
- * each typed, else the cultivar's, the commodity's, a stored typical value, or the check's own
- * typical value (stated as such).
+ * each typed, else the cultivar's, the commodity's, a value derived from published figures of
+ * the same fruit (bulk density from its density, the ratio from its angle of repose), a stored
+ * typical value, or the check's own typical value (stated as such).
  */
 export function stackFigures(
   set: EvidenceSet,
-  fruitDensity: number,
+  fruitDensity: UsedValue,
   entered: { bulkDensityKgM3?: number; wallFriction?: number; lateralRatio?: number },
 ): { bulk: UsedValue; wall: UsedValue; ratio: UsedValue } {
   const bulk: UsedValue = climb(
@@ -22,12 +44,25 @@ export function stackFigures(
     {
       entered: entered.bulkDensityKgM3,
       unit: 'kg/m³',
+      derive: () =>
+        isPublished(fruitDensity)
+          ? derivedValue(
+              BULK_DENSITY_FROM_DENSITY,
+              bulkDensityFromDensity(fruitDensity.value),
+              'kg/m³',
+              { density: fruitDensity, packing: PACKING },
+              `fruit density ${fruitDensity.value} kg/m³ (${fruitDensity.source ?? 'published'})`,
+            )
+          : null,
       fallback: () =>
         checkTypical(
-          round(PACKING_FRACTION * fruitDensity, 3),
+          round(PACKING_FRACTION.value * fruitDensity.value, 3),
           'kg/m³',
-          `${PACKING_FRACTION * 100} % of the fruit's own density (random loose packing of like spheres fills 55–64 % of a volume; Scott G.D., Nature 188:908, 1960 [from memory]).`,
-          { low: round(0.55 * fruitDensity, 3), high: round(0.64 * fruitDensity, 3) },
+          `${PACKING_FRACTION.value * 100} % of a typical fruit density (random loose packing of like spheres fills 55–64 % of a volume; Scott G.D., Nature 188:908, 1960 [from memory]).`,
+          {
+            low: round(PACKING_FRACTION.low * fruitDensity.value, 3),
+            high: round(PACKING_FRACTION.high * fruitDensity.value, 3),
+          },
         ),
     },
   )!.used;
@@ -50,6 +85,17 @@ export function stackFigures(
     {
       entered: entered.lateralRatio,
       unit: '–',
+      derive: () => {
+        const repose = climb(set, { quantity: 'angle_of_repose' }, { unit: '°' })?.used;
+        if (!repose || !isPublished(repose)) return null;
+        return derivedValue(
+          lateralRatioRelation(repose.value),
+          lateralRatioFromRepose(repose.value),
+          '–',
+          { repose },
+          `angle of repose ${repose.value}° (${repose.source ?? 'published'})`,
+        );
+      },
       fallback: () =>
         checkTypical(
           0.4,

@@ -82,8 +82,12 @@ const beta = record('plum-beta', 'Beta', PLUM, [
   v('friction_coefficient', 'plywood', 0.4),
   v('lateral_pressure_ratio', '', 0.35),
 ]);
-// Delta: only a bioyield stress of its own, from which its threshold is derived.
-const delta = record('plum-delta', 'Delta', PLUM, [v('bioyield_stress', '', 200)]);
+// Delta: only a bioyield stress and an angle of repose of its own, from which its threshold and
+// its bin's lateral pressure ratio are derived.
+const delta = record('plum-delta', 'Delta', PLUM, [
+  v('bioyield_stress', '', 200),
+  v('angle_of_repose', '', 32),
+]);
 // Gamma: a fig with only a Poisson's ratio and no commodity record: no check can run.
 const gamma = record('fig-gamma', 'Gamma', FIG, [v('poisson_ratio', '', 0.3)]);
 
@@ -124,14 +128,16 @@ describe('the data gaps matrix', () => {
       'Static bruise threshold': 'typical',
       'Friction against the pad': 'own',
       'Drop threshold onto steel': 'missing',
-      'Bulk density': 'typical',
+      // The commodity record's own density, packed loosely (a derived value of its own data).
+      'Bulk density': 'derived',
       'Wall friction': 'typical',
       'Lateral pressure ratio': 'typical',
     });
     // Mass from density and an assumed-round shape is not derived from own data only.
     expect(row('plum-type').cells.Mass.fromOwn).toBe(false);
     expect(row('plum-type').cells['Axial diameter'].note).toMatch(/take the fruit as round/);
-    expect(row('plum-type').ownCount).toBe(4);
+    expect(row('plum-type').cells['Bulk density'].fromOwn).toBe(true);
+    expect(row('plum-type').ownCount).toBe(5);
     expect(row('plum-type').cells["Young's modulus"].checks).toEqual(['squeeze', 'drop', 'stack']);
     expect(row('plum-type').cells['Friction against the pad'].checks).toEqual(['squeeze']);
   });
@@ -148,11 +154,13 @@ describe('the data gaps matrix', () => {
       'Static bruise threshold': 'own',
       'Friction against the pad': 'commodity',
       'Drop threshold onto steel': 'missing',
-      'Bulk density': 'typical',
+      // From a density that is itself derived from its mass and the commodity's size.
+      'Bulk density': 'derived',
       'Wall friction': 'typical',
       'Lateral pressure ratio': 'typical',
     });
     expect(row('plum-alpha').cells.Density.fromOwn).toBe(false);
+    expect(row('plum-alpha').cells['Bulk density'].fromOwn).toBe(false);
     expect(row('plum-alpha').ownCount).toBe(4);
     expect(row('plum-alpha').runs).toEqual({ squeeze: true, drop: true, stack: true });
     expect(row('plum-alpha').ownOnly).toEqual({ squeeze: false, drop: false, stack: false });
@@ -174,7 +182,12 @@ describe('the data gaps matrix', () => {
       rung: 'derived',
       fromOwn: true,
     });
-    expect(row('plum-delta').ownCount).toBe(1);
+    // K = 1 − sin 32° = 0.470 from its own angle of repose (Jáky 1944).
+    expect(row('plum-delta').cells['Lateral pressure ratio']).toMatchObject({
+      rung: 'derived',
+      fromOwn: true,
+    });
+    expect(row('plum-delta').ownCount).toBe(2);
   });
 
   it('a record the checks cannot resolve still shows every figure', () => {
@@ -188,7 +201,8 @@ describe('the data gaps matrix', () => {
       'Static bruise threshold': 'missing',
       'Friction against the pad': 'missing',
       'Drop threshold onto steel': 'missing',
-      'Bulk density': 'typical',
+      // No density on any rung: nothing to pack.
+      'Bulk density': 'missing',
       'Wall friction': 'typical',
       'Lateral pressure ratio': 'typical',
     });
@@ -254,11 +268,12 @@ describe('sorting and filtering', () => {
       'plum-delta',
     ]);
     expect(slugs(selectRows(gaps.rows, { sort: 'own' }))).toEqual([
+      // Own figures: beta 12, the record 5, alpha 4, delta 2, gamma 1.
       'plum-beta',
       'plum-type',
       'plum-alpha',
-      'fig-gamma',
       'plum-delta',
+      'fig-gamma',
     ]);
   });
 
