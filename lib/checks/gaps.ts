@@ -69,7 +69,6 @@ const PROBED_FIGURES: Record<string, string[]> = {
 const DERIVED_FROM: Record<string, string[]> = {
   Mass: ['Density', 'Diameter', 'Axial diameter'],
   Density: ['Mass', 'Diameter', 'Axial diameter'],
-  'Bulk density': ['Density'],
 };
 
 /** Figures derived from one quantity the matrix does not show (lib/checks/fruit.ts, stack/figures.ts). */

@@ -140,23 +140,10 @@ export function axialByShape(axialMm: number, equatorialMm: number, sizeMm: numb
 /**
  * A bulk of like spheres poured loosely into a container fills about 60 % of its volume (random
  * loose packing 0.60; random close packing 0.637): Scott G.D., "Packing of spheres", Nature 188,
- * 908–909, 1960 [from memory]. Fruit of one grade are near-spheres of one size, so the bulk
- * density of fruit in a bin is the fruit's density times that fraction; the band 0.55–0.64 spans
- * loose to close random packing.
+ * 908–909, 1960 [from memory]. Used only for a typical bulk density: published fruit bulk
+ * densities sit below it (0.32–0.55 of the fruit's density).
  */
 export const PACKING_FRACTION = { value: 0.6, low: 0.55, high: 0.64 } as const;
-
-export const BULK_DENSITY_FROM_DENSITY: Relation<'density' | 'packing'> = {
-  id: 'bulk-density-from-density',
-  statement: `bulk density = fruit density × packing fraction ${PACKING_FRACTION.value} (random loose packing of like spheres, ${PACKING_FRACTION.low}–${PACKING_FRACTION.high})`,
-  source: 'Scott G.D., Packing of spheres, Nature 188:908–909, 1960 (from memory)',
-  exponents: { density: 1, packing: 1 },
-};
-
-/** Bulk density, kg/m³, of a loosely poured bin of fruit of the given density, kg/m³. */
-export function bulkDensityFromDensity(densityKgM3: number): number {
-  return densityKgM3 * PACKING_FRACTION.value;
-}
 
 /**
  * The ratio of horizontal to vertical pressure in a bulk at rest, K₀ = 1 − sin φ, for a

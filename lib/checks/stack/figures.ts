@@ -1,7 +1,5 @@
 import { checkTypical, climb, derivedValue, type EvidenceSet } from '@/lib/evidence/ladder';
 import {
-  BULK_DENSITY_FROM_DENSITY,
-  bulkDensityFromDensity,
   lateralRatioFromRepose,
   lateralRatioRelation,
   PACKING_FRACTION,
@@ -14,24 +12,13 @@ const round = (x: number, digits = 4) => Number(x.toPrecision(digits));
 const isPublished = (u: UsedValue) =>
   u.rung === 'own' || u.rung === 'commodity' || u.rung === 'derived';
 
-/** The packing fraction as a figure with its published band, for the spread it carries. */
-const PACKING: UsedValue = {
-  value: PACKING_FRACTION.value,
-  unit: '–',
-  rung: 'derived',
-  source: BULK_DENSITY_FROM_DENSITY.source,
-  note: null,
-  low: PACKING_FRACTION.low,
-  high: PACKING_FRACTION.high,
-  sd: null,
-  spread: 'random loose to random close packing',
-};
-
 /**
  * The bin's figures from the evidence ladder: bulk density, wall friction and Janssen's ratio,
  * each typed, else the cultivar's, the commodity's, a value derived from published figures of
- * the same fruit (bulk density from its density, the ratio from its angle of repose), a stored
- * typical value, or the check's own typical value (stated as such).
+ * the same fruit (the ratio from its angle of repose), a stored typical value, or the check's own
+ * typical value (stated as such). Bulk density is not derived from the fruit's density: loose
+ * random packing of spheres (0.60) lies above every published fruit bulk ÷ true density in the
+ * knowledge base (0.32–0.55), so the packing fraction serves only the typical fallback.
  */
 export function stackFigures(
   set: EvidenceSet,
@@ -44,16 +31,6 @@ export function stackFigures(
     {
       entered: entered.bulkDensityKgM3,
       unit: 'kg/m³',
-      derive: () =>
-        isPublished(fruitDensity)
-          ? derivedValue(
-              BULK_DENSITY_FROM_DENSITY,
-              bulkDensityFromDensity(fruitDensity.value),
-              'kg/m³',
-              { density: fruitDensity, packing: PACKING },
-              `fruit density ${fruitDensity.value} kg/m³ (${fruitDensity.source ?? 'published'})`,
-            )
-          : null,
       fallback: () =>
         checkTypical(
           round(PACKING_FRACTION.value * fruitDensity.value, 3),

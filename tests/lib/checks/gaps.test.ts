@@ -128,16 +128,14 @@ describe('the data gaps matrix', () => {
       'Static bruise threshold': 'typical',
       'Friction against the pad': 'own',
       'Drop threshold onto steel': 'missing',
-      // The commodity record's own density, packed loosely (a derived value of its own data).
-      'Bulk density': 'derived',
+      'Bulk density': 'typical',
       'Wall friction': 'typical',
       'Lateral pressure ratio': 'typical',
     });
     // Mass from density and an assumed-round shape is not derived from own data only.
     expect(row('plum-type').cells.Mass.fromOwn).toBe(false);
     expect(row('plum-type').cells['Axial diameter'].note).toMatch(/take the fruit as round/);
-    expect(row('plum-type').cells['Bulk density'].fromOwn).toBe(true);
-    expect(row('plum-type').ownCount).toBe(5);
+    expect(row('plum-type').ownCount).toBe(4);
     expect(row('plum-type').cells["Young's modulus"].checks).toEqual(['squeeze', 'drop', 'stack']);
     expect(row('plum-type').cells['Friction against the pad'].checks).toEqual(['squeeze']);
   });
@@ -154,13 +152,11 @@ describe('the data gaps matrix', () => {
       'Static bruise threshold': 'own',
       'Friction against the pad': 'commodity',
       'Drop threshold onto steel': 'missing',
-      // From a density that is itself derived from its mass and the commodity's size.
-      'Bulk density': 'derived',
+      'Bulk density': 'typical',
       'Wall friction': 'typical',
       'Lateral pressure ratio': 'typical',
     });
     expect(row('plum-alpha').cells.Density.fromOwn).toBe(false);
-    expect(row('plum-alpha').cells['Bulk density'].fromOwn).toBe(false);
     expect(row('plum-alpha').ownCount).toBe(4);
     expect(row('plum-alpha').runs).toEqual({ squeeze: true, drop: true, stack: true });
     expect(row('plum-alpha').ownOnly).toEqual({ squeeze: false, drop: false, stack: false });
@@ -201,8 +197,7 @@ describe('the data gaps matrix', () => {
       'Static bruise threshold': 'missing',
       'Friction against the pad': 'missing',
       'Drop threshold onto steel': 'missing',
-      // No density on any rung: nothing to pack.
-      'Bulk density': 'missing',
+      'Bulk density': 'typical',
       'Wall friction': 'typical',
       'Lateral pressure ratio': 'typical',
     });
@@ -268,7 +263,7 @@ describe('sorting and filtering', () => {
       'plum-delta',
     ]);
     expect(slugs(selectRows(gaps.rows, { sort: 'own' }))).toEqual([
-      // Own figures: beta 12, the record 5, alpha 4, delta 2, gamma 1.
+      // Own figures: beta 12, the record 4, alpha 4, delta 2, gamma 1.
       'plum-beta',
       'plum-type',
       'plum-alpha',

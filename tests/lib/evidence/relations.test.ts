@@ -9,7 +9,6 @@ import {
   massScaled,
   axialByShape,
   propagateRelativeSd,
-  bulkDensityFromDensity,
   lateralRatioFromRepose,
   lateralRatioRelation,
 } from '@/lib/evidence/relations';
@@ -117,12 +116,5 @@ describe('derived relations, each against a worked example', () => {
     const mean = ks.reduce((a, b) => a + b, 0) / ks.length;
     const sd = Math.sqrt(ks.reduce((a, x) => a + (x - mean) ** 2, 0) / (ks.length - 1));
     expect(Math.abs(sd / mean / first! - 1)).toBeLessThan(0.03);
-  });
-
-  it('bulk density from fruit density: loose random packing of like spheres', () => {
-    // Scott G.D., Packing of spheres, Nature 188:908–909, 1960 (from memory): loose random
-    // packing of equal spheres fills 0.60 of the volume. A bin of fruit of density 1000 kg/m³
-    // therefore weighs 600 kg/m³ of bin. Tolerance 1 %: 0.60 is Scott's figure to two digits.
-    expect(Math.abs(bulkDensityFromDensity(1000) / 600 - 1)).toBeLessThan(0.01);
   });
 });
