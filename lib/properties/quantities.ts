@@ -63,6 +63,18 @@ export const QUANTITIES = {
     variants: [''],
     hint: "Janssen's K",
   },
+  relaxation_k1: {
+    label: 'Relaxation constant k₁ (Peleg)',
+    unit: 's',
+    variants: [''],
+    hint: 'force held at a fixed deformation decays as 1 − t ÷ (k₁ + k₂ t); 1 ÷ k₁ is the initial rate',
+  },
+  relaxation_k2: {
+    label: 'Relaxation constant k₂ (Peleg)',
+    unit: '–',
+    variants: [''],
+    hint: '1 ÷ k₂ is the share of the held force that finally relaxes (give k₁ from the same test)',
+  },
   angle_of_repose: {
     label: 'Angle of repose',
     unit: '°',

@@ -2,6 +2,7 @@ import { APPLE } from './apple';
 import { BERRIES } from './berries';
 import { CITRUS } from './citrus';
 import { PEAR } from './pear';
+import { RELAXATION_VALUES } from './relaxation';
 import { STONE_FRUIT } from './stone-fruit';
 import { TROPICAL } from './tropical';
 import type { SeedCommodity } from './types';
@@ -12,7 +13,7 @@ import { VEGETABLES } from './vegetables';
  * its source and keeps its conditions; a quantity no source gives is simply absent ("no
  * published value"). A cultivar is named only where a cited source measured it.
  */
-export const COMMODITIES: SeedCommodity[] = [
+const FAMILIES: SeedCommodity[] = [
   APPLE,
   PEAR,
   ...STONE_FRUIT,
@@ -21,3 +22,16 @@ export const COMMODITIES: SeedCommodity[] = [
   ...TROPICAL,
   ...VEGETABLES,
 ];
+
+/** The families with the stress-relaxation constants (kept in their own file) merged in. */
+export const COMMODITIES: SeedCommodity[] = FAMILIES.map((c) => ({
+  ...c,
+  cultivars: c.cultivars.map((cv) => ({
+    ...cv,
+    values: [...cv.values, ...(RELAXATION_VALUES[cv.slug] ?? [])],
+  })),
+}));
+
+const slugs = new Set(FAMILIES.flatMap((c) => c.cultivars.map((cv) => cv.slug)));
+const stray = Object.keys(RELAXATION_VALUES).filter((s) => !slugs.has(s));
+if (stray.length > 0) throw new Error(`Relaxation values for unknown records: ${stray.join(', ')}`);

@@ -2,6 +2,7 @@ import { OTHER_SOURCES } from './sources-other';
 import { CITRUS_TROPICAL_SOURCES } from './sources-citrus-tropical';
 import { GRADE_SOURCES } from './sources-grades';
 import { POME_SOURCES } from './sources-pome';
+import { RELAXATION_SOURCES } from './sources-relaxation';
 import { STONE_BERRY_SOURCES } from './sources-stone-berry';
 import { TEMPERATE_SOURCES } from './sources-temperate';
 import type { SeedSource } from './types';
@@ -18,4 +19,5 @@ export const SOURCES: SeedSource[] = [
   ...CITRUS_TROPICAL_SOURCES,
   ...VEGETABLE_SOURCES,
   ...GRADE_SOURCES,
+  ...RELAXATION_SOURCES,
 ];
