@@ -42,3 +42,10 @@ export {
   type ApparentModulusFit,
 } from './apparent-modulus';
 export { hertzBruiseRadius, hertzForceForBruiseRadius, onsetContactRadius } from './hertz-bruise';
+export {
+  fitPeleg,
+  pelegRetained,
+  pelegTimeToShare,
+  type PelegConstants,
+  type PelegFit,
+} from './relaxation';

@@ -103,6 +103,8 @@ export const squeezeCheckSchema = z
     safetyFactor: measure('Safety factor', '', 0.999, 20).default(2),
     accelerationMs2: measure('Peak acceleration of the move', 'm/s²', -0.001, 100).default(0),
     maxTravelMm: measure('Maximum travel per pad', 'mm', 0, 100),
+    /** How long the grip holds the fruit (the transfer); omitted: the grip at t = 0 only. */
+    holdSeconds: measure('Hold time', 's', 0, 3600).optional(),
     mesh: z.enum(['coarse', 'normal', 'fine']).default('normal'),
     /** The grade rule the bruise is judged by (its slug); the commodity's strictest by default. */
     gradeRule: slugSchema.optional(),

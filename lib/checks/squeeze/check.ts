@@ -41,6 +41,15 @@ export async function runSqueezeCheck(
       {
         input: r.model,
         sweep: input.sweep ? sweepDiameters(input, r.fruit.diameterMm.value) : null,
+        hold:
+          input.holdSeconds === undefined
+            ? null
+            : {
+                seconds: input.holdSeconds,
+                relaxation: r.relaxation
+                  ? { k1: r.relaxation.k1.value, k2: r.relaxation.k2.value }
+                  : null,
+              },
         head: squeezeHead(r, input),
         inputWarnings: [
           ...r.fruit.warnings,

@@ -15,6 +15,7 @@ import {
 } from '@/fem';
 import { verdictOf } from '../verdict';
 import type { SqueezeHead } from './head';
+import { holdJson, holdWarnings, type HoldInput } from './hold';
 import { squeezeResultSchema, type SqueezeResult } from './result';
 
 const r4 = (v: number | null | undefined) =>
@@ -26,6 +27,8 @@ export interface SqueezeTaskInput {
   input: SqueezeInput;
   /** pad diameters of the sweep, m; null for none */
   sweep: number[] | null;
+  /** the hold after the grip closes; null or absent for the grip at t = 0 only */
+  hold?: HoldInput | null;
 }
 
 function sweepJson(input: SqueezeInput, diameters: number[]) {
@@ -61,7 +64,7 @@ function slipJson(s: GripSlipMap) {
   };
 }
 
-export function squeezeTask({ input, sweep }: SqueezeTaskInput) {
+export function squeezeTask({ input, sweep, hold }: SqueezeTaskInput) {
   // One run serves the result and the slip map at its grip.
   const run = runCase(input, true);
   const result = squeezeResultOf(run);
@@ -73,6 +76,7 @@ export function squeezeTask({ input, sweep }: SqueezeTaskInput) {
       : null,
     sweep: sweep && grip ? sweepJson(input, sweep) : null,
     slip: grip ? slipJson(slipMapOfRun(run)) : null,
+    hold: hold ? holdJson(input, hold, grip?.force ?? null) : null,
   };
 }
 
@@ -104,7 +108,11 @@ export function squeezeCheckTask({
         ? null
         : { value: margin, basis: 'static' as const, verdict: verdictOf(margin) },
     ...out,
-    warnings: [...out.model.warnings.map((w) => w.message), ...inputWarnings],
+    warnings: [
+      ...out.model.warnings.map((w) => w.message),
+      ...inputWarnings,
+      ...(out.hold ? holdWarnings(out.hold) : []),
+    ],
   });
 }
 

@@ -20,9 +20,16 @@ export function squeezeHead(r: ResolvedSqueeze, input: SqueezeCheckInput) {
     acceleration_m_s2: input.accelerationMs2,
     max_travel_mm: input.maxTravelMm,
   };
+  // The hold's figures: they move the grip over time, not the bruise margin at t = 0, so the
+  // verdict's evidence is named without them.
+  const holdUsed = {
+    hold_time_s: input.holdSeconds ?? null,
+    relaxation_k1_s: r.relaxation?.k1 ?? null,
+    relaxation_k2: r.relaxation?.k2 ?? null,
+  };
   return {
     pinned: pinnedSummary(r.fruit.pinned),
-    inputs_used: inputsUsed,
+    inputs_used: { ...inputsUsed, ...holdUsed },
     evidence: verdictEvidence(inputsUsed),
   };
 }

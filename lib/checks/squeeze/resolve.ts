@@ -5,6 +5,7 @@ import type { SqueezeCheckInput } from '@/lib/checks/inputs';
 import { climb } from '@/lib/evidence/ladder';
 import type { UsedValue } from '../used-value';
 import { FACING_PRESETS, frictionSurfacesFor } from '../facings';
+import { relaxationOf } from './hold';
 import { required, resolveFruit, type ResolvedFruit } from '../resolve-fruit';
 
 export interface ResolvedSqueeze {
@@ -12,6 +13,8 @@ export interface ResolvedSqueeze {
   density: UsedValue;
   friction: UsedValue;
   failureStress: UsedValue | null;
+  /** Peleg's relaxation constants (one published pair), or null: none on any rung. */
+  relaxation: { k1: UsedValue; k2: UsedValue } | null;
   axialMm: number;
   model: SqueezeInput;
 }
@@ -61,7 +64,8 @@ export async function resolveSqueeze(actor: Actor, v: SqueezeCheckInput): Promis
     // Tresca: at failure in uniaxial compression the largest shear is half the failure stress.
     ...(failureStress ? { failureShear: (failureStress.value * 1000) / 2 } : {}),
   };
-  return { fruit, density, friction, failureStress, axialMm, model };
+  const relaxation = relaxationOf(fruit.evidence);
+  return { fruit, density, friction, failureStress, relaxation, axialMm, model };
 }
 
 /** Pad diameters for the sweep: 12 from a quarter of the pad to three pads, within the fruit. */

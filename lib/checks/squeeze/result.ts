@@ -39,6 +39,10 @@ export const squeezeResultSchema = z.object({
     safety_factor: n,
     acceleration_m_s2: n,
     max_travel_mm: n,
+    /** The hold time and the relaxation pair it used (absent in results saved before holds). */
+    hold_time_s: nn.optional(),
+    relaxation_k1_s: usedValueSchema.nullable().optional(),
+    relaxation_k2: usedValueSchema.nullable().optional(),
   }),
   margin: z.object({ value: n, basis: z.literal('static'), verdict: verdictSchema }).nullable(),
   // The model's own answer (fem's squeezeResultJson): the parts the app reads are typed; the
@@ -91,6 +95,38 @@ export const squeezeResultSchema = z.object({
         .optional(),
     })
     .nullable(),
+  /** The grip held over time as the flesh relaxes (absent: no hold time given, or older results). */
+  hold: z
+    .object({
+      seconds: n,
+      relaxation: z.boolean(),
+      retained_at_end: nn,
+      safety_at_end: nn,
+      grip_slips_after_s: nn,
+      curve: z
+        .array(
+          z.object({
+            t_s: n,
+            grip_force_n: nn,
+            grip_lift_ratio: n,
+            held_force_n: nn,
+            held_lift_ratio: nn,
+          }),
+        )
+        .nullable(),
+      held: z
+        .object({
+          travel_per_pad_mm: n,
+          force_n: n,
+          force_end_n: n,
+          peak_pressure_kpa: n,
+          bruise_margin: nn,
+        })
+        .nullable(),
+      held_reason: z.string().nullable(),
+    })
+    .nullable()
+    .optional(),
   warnings: z.array(z.string()),
   /** The weakest rung of evidence the verdict rests on (absent in results saved before it). */
   evidence: evidenceSummarySchema.optional(),

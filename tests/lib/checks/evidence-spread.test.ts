@@ -91,7 +91,16 @@ function resolved(set: EvidenceSet): ResolvedSqueeze {
     accelG: 0,
     bruiseThreshold: fruit.staticThresholdKpa!.value * 1000,
   };
-  return { fruit, density: fruit.densityKgM3, friction, failureStress: null, axialMm: 70, model };
+  const relaxation = null;
+  return {
+    fruit,
+    density: fruit.densityKgM3,
+    friction,
+    failureStress: null,
+    relaxation,
+    axialMm: 70,
+    model,
+  };
 }
 
 describe('spreads follow the evidence', () => {

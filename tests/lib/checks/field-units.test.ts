@@ -29,6 +29,7 @@ const EXPECTED: Record<string, string> = {
   safetyFactor: '–',
   accelerationMs2: 'm/s²',
   maxTravelMm: 'mm',
+  holdSeconds: 's',
 };
 
 describe('check form units come from the input schemas', () => {
