@@ -4,6 +4,19 @@ import type { TypicalBasis } from '@/lib/properties/quantities';
 
 const HAYWARD = 'berry-hayward-physical-web';
 const MOGGIA = 'moggia-2017-blueberry';
+const SELVA = 'berry-selva-strawberry-tabriz';
+
+/** Static friction of 'Selva' strawberries: surface as stored, value, surface as published. */
+const SELVA_FRICTION = [
+  ['rubber', 0.575, 'rubber (the highest of the four surfaces)'],
+  [
+    'steel',
+    0.415,
+    'steel (the lowest of the four; not significantly different from galvanised iron)',
+  ],
+  ['galvanised steel', 0.439, 'galvanised iron, filed under galvanised steel'],
+  ['plywood', 0.473, 'plywood'],
+] as const;
 
 /** A clearly labelled typical value: no source, a wide band, and what was searched. */
 /** A typical value (see value-helpers' `typical`), its band given as low and high. */
@@ -91,33 +104,27 @@ export const BERRIES: SeedCommodity[] = [
             "No strawberry modulus with its figure found (searched: 'strawberry fruit compression elastic modulus Poisson ratio', 'strawberry cultivar Young's modulus MPa', 'strawberry Camarosa firmness modulus'). Creep studies ('Vibrant', 'Elsanta', 'Magic') give strains, not a modulus.",
           ),
           poisson('strawberry'),
-          typical(
-            'density',
-            '',
-            950,
-            850,
-            1050,
-            'from memory',
-            "No strawberry density found (searched: 'strawberry physical mechanical properties true density bulk density'). About 91 % water, with air spaces: near or a little below water.",
-          ),
-          typical(
-            'diameter',
-            'equatorial',
-            30,
-            18,
-            45,
-            'from memory',
-            "No strawberry dimensions from a study found (searched: 'strawberry fruit mass volume true density dimensions'). Grade sheets class berries under 18 mm as small and over 25 mm as large.",
-          ),
-          typical(
-            'diameter',
-            'axial',
-            35,
-            18,
-            55,
-            'from memory',
-            'As for the equatorial diameter; short-conic berries have length/width about 0.9–1.1, long-conic 1.2–1.4 (Jamieson, ISHS Acta Hortic. 1156, abstract).',
-          ),
+          {
+            quantity: 'density',
+            value: 1068.88,
+            ripeness: 'Initial moisture content 91.07 % (w.b.)',
+            note: "True density measured on 'Selva' (the only published figure found for the commodity); published as 1068.880 kg/m³. Replaces the typical 950 kg/m³.",
+            source: SELVA,
+          },
+          {
+            quantity: 'diameter',
+            variant: 'equatorial',
+            value: 28.26,
+            note: "Fruit diameter measured on 'Selva' (the only published figure found for the commodity); length 29.70 mm, geometric mean diameter 28.59 mm, sphericity 0.971.",
+            source: SELVA,
+          },
+          {
+            quantity: 'diameter',
+            variant: 'axial',
+            value: 29.7,
+            note: "Fruit length measured on 'Selva' (the only published figure found for the commodity). Long-conic cultivars run longer (length/width 1.2–1.4; Jamieson, ISHS Acta Hortic. 1156, abstract).",
+            source: SELVA,
+          },
           {
             quantity: 'mass',
             value: 21.5,
@@ -135,7 +142,19 @@ export const BERRIES: SeedCommodity[] = [
             'from memory',
             "No strawberry static bruise pressure, bioyield or failure stress found (searched: 'strawberry compression failure stress kPa', 'strawberry mass tissue strength'). Compression bruised strawberries more than impacts of similar energy (Ferreira et al. 2008; Aliasgarian Najafabadi et al.); 'Sweet Charlie' bruised 40 % more under compression than the other Florida cultivars.",
           ),
-          ...typicalFriction('strawberry', ALL_SURFACES, ''),
+          ...SELVA_FRICTION.map(([variant, value, as]) => ({
+            quantity: 'friction_coefficient' as const,
+            variant,
+            value,
+            method: 'Static coefficient of friction, whole fruit on the surface',
+            note: `Static coefficient measured on 'Selva' (the only published figure found for the commodity); surface published as ${as}.`,
+            source: SELVA,
+          })),
+          ...typicalFriction(
+            'strawberry',
+            ['plastic'],
+            "'Selva' was measured on steel 0.415, galvanised iron 0.439, plywood 0.473 and rubber 0.575, not on a plastic.",
+          ),
           typical(
             'drop_threshold_height',
             'rigid plate',
@@ -156,15 +175,67 @@ export const BERRIES: SeedCommodity[] = [
             `A recalled typical for a plastic tray or belt, not an observation. ${STRAWBERRY_IMPACTS}`,
             { observation: 'no-bruise' },
           ),
-          typical(
-            'bulk_density',
-            '',
-            500,
-            350,
-            650,
-            'from memory',
-            "No strawberry bulk density found (searched: 'strawberry bulk density kg/m3'). A 1 litre punnet of strawberries weighs about 0.5 kg (mafra.com.pl packaging page).",
-          ),
+          {
+            quantity: 'bulk_density',
+            value: 474.33,
+            ripeness: 'Initial moisture content 91.07 % (w.b.)',
+            note: "Measured on 'Selva' (the only published figure found for the commodity); published as 474.330 kg/m³, porosity 51.11 %. Replaces the typical 500 kg/m³ (a 1 litre punnet of strawberries weighs about 0.5 kg, mafra.com.pl packaging page).",
+            source: SELVA,
+          },
+        ],
+      },
+      {
+        slug: 'strawberry-selva',
+        name: 'Selva',
+        values: [
+          {
+            quantity: 'mass',
+            value: 11.885,
+            note: 'Mean fruit mass; volume 12.33 cm³.',
+            source: SELVA,
+          },
+          {
+            quantity: 'diameter',
+            value: 28.59,
+            note: 'Geometric mean diameter; sphericity 0.971.',
+            source: SELVA,
+          },
+          {
+            quantity: 'diameter',
+            variant: 'equatorial',
+            value: 28.26,
+            note: 'Fruit diameter.',
+            source: SELVA,
+          },
+          {
+            quantity: 'diameter',
+            variant: 'axial',
+            value: 29.7,
+            note: 'Fruit length.',
+            source: SELVA,
+          },
+          {
+            quantity: 'density',
+            value: 1068.88,
+            ripeness: 'Initial moisture content 91.07 % (w.b.)',
+            note: 'True density, published as 1068.880 kg/m³.',
+            source: SELVA,
+          },
+          {
+            quantity: 'bulk_density',
+            value: 474.33,
+            ripeness: 'Initial moisture content 91.07 % (w.b.)',
+            note: 'Published as 474.330 kg/m³; porosity 51.11 %. Firmness 3.63 N (probe not given in the abstract, so not stored as penetrometer firmness).',
+            source: SELVA,
+          },
+          ...SELVA_FRICTION.map(([variant, value, as]) => ({
+            quantity: 'friction_coefficient' as const,
+            variant,
+            value,
+            method: 'Static coefficient of friction, whole fruit on the surface',
+            note: `Static coefficient; surface published as ${as}.`,
+            source: SELVA,
+          })),
         ],
       },
     ],

@@ -207,4 +207,25 @@ export const STONE_BERRY_SOURCES: SeedSource[] = [
     url: 'https://czasopisma.up.lublin.pl/index.php/asphc/article/view/2792',
     note: 'Read in the abstract. Thirteen apricot cultivars and selections grown in Western Serbia.',
   },
+  {
+    key: 'stone-peach-fe-drop-test',
+    kind: 'paper',
+    authors: null,
+    year: null,
+    title: 'Determination of drop-test behavior of a sample peach using finite element method',
+    venue: 'paperexplained.cn record of the paper (journal, year and authors not shown there)',
+    url: 'https://paperexplained.cn/articles/paper/detail/524ea26b1483e0d92885d06eb4cf18acfe9471e3',
+    note: "Read in the abstract (the stored record). Peach samples (cultivar not named) were compressed and the figures fed a finite-element drop simulation: maximum force 59.6 N, Poisson's ratio 0.29, specific deformation 10.9 %, modulus of elasticity 0.89 N/mm², stress 1.19 N/mm², deformation energy 162.2 N·mm. The abstract does not say whether whole fruit or excised specimens were compressed, nor the loading rate.",
+  },
+  {
+    key: 'berry-selva-strawberry-tabriz',
+    kind: 'paper',
+    authors: null,
+    year: null,
+    title:
+      'Determination of some physical properties of strawberry fruit (cv. Selva) [Persian: تعیین برخی خصوصیات فیزیکی میوه توت‌فرنگی (رقم سلوا)]',
+    venue: 'Iranian Journal of Biosystems Engineering (ijbse.ut.ac.ir, article 36158)',
+    url: 'https://ijbse.ut.ac.ir/article_36158.html',
+    note: "Read in the Persian abstract (the stored journal page); title translated here. Authors not named on the page read (an MSc student and two faculty members of the Faculty of Agriculture, University of Tabriz). Figures at the initial moisture content of 91.07 % (w.b.): mass 11.885 g, diameter 28.26 mm, length 29.70 mm, geometric mean diameter 28.59 mm, sphericity 0.971, volume 12.33 cm³, true density 1068.880 kg/m³, bulk density 474.330 kg/m³, porosity 51.11 %, projected area 8.61 cm², firmness 3.63 N (probe not given in the abstract), static friction on steel 0.415, galvanised iron 0.439, plywood 0.473, rubber 0.575 (steel and galvanised iron not significantly different). The page prints the decimals in Persian order (e.g. '885/11' for 11.885).",
+  },
 ];
