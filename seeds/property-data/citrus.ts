@@ -8,9 +8,31 @@ const HORTFLORA = 'hortflora-mosambi-kinnow';
 const PUNCH = 'ct-orange-punch-jiroft';
 const MURCOTT = 'ct-rehal-2017-murcott';
 
-/** What the citrus searches covered, for the notes of the typical values. */
+/*
+ * Queries run on the stored pages for the typical values below, verbatim: 'orange fruit Young's
+ * modulus Poisson ratio compression', 'Valencia orange compression modulus bioyield rupture',
+ * 'Citrus sinensis fruit elastic modulus MPa', 'orange fruit bruise drop height impact', 'orange
+ * coefficient of friction rubber plastic', 'mandarin fruit physical mechanical properties rupture
+ * force modulus', 'Kinnow Nagpur mandarin modulus'; and in 2026-12 (pages, docs, code): 'orange
+ * fruit physical properties angle of repose static coefficient of friction rubber', 'orange
+ * Poisson's ratio whole fruit measured compression Valencia', 'finite element orange fruit drop
+ * impact elastic modulus Poisson ratio simulation', 'orange fruit drop height damage steel
+ * surface impact energy threshold citrus', 'sweet orange Valencia bruise threshold compression
+ * pressure kPa peel oleocellosis damage load', 'citrus fruit angle of repose orange heap bulk
+ * handling', 'mandarin tangerine fruit elastic modulus compression rupture force physical
+ * mechanical properties', 'Kinnow mandarin physical properties bulk density angle of repose
+ * static coefficient of friction', 'orange Citrus sinensis compression test Young's modulus
+ * bioyield whole fruit International Agrophysics', 'naranja propiedades físico-mecánicas módulo
+ * de elasticidad coeficiente de fricción ángulo de reposo'. Read, not storable for orange or
+ * mandarin: lemon 'Eureka' (Underhill et al. 1998, J. Texture Stud. 29:437–452: damage under a
+ * 3.7 kg static load and drops up to 100 cm, no threshold); instrumented-sphere calibration for
+ * oranges (Di Renzo et al. 2009, J. Agric. Eng. 4:9–17); kumquat (Int. Agrophys. 27:107–109) and
+ * musk lime (Citrus microcarpa: static friction 0.238 on glass to 0.247 on steel) — other species.
+ */
+
+/** What the citrus searches covered, in short, for the notes of the typical values. */
 const CITRUS_SEARCHED =
-  "Searched (stored pages): 'orange fruit Young's modulus Poisson ratio compression', 'Valencia orange compression modulus bioyield rupture', 'Citrus sinensis fruit elastic modulus MPa', 'orange fruit bruise drop height impact', 'orange coefficient of friction rubber plastic', 'mandarin fruit physical mechanical properties rupture force modulus', 'Kinnow Nagpur mandarin modulus'; found peel-only moduli (Jentzsch et al. 2022, five Citrus peels) and whole-fruit relaxation without a modulus value (Moresi et al. 2012, Tarocco), nothing for the whole fruit.";
+  "Searched (stored pages): whole-fruit Young's modulus, Poisson's ratio, bioyield and bruise pressure of orange ('Valencia', Citrus sinensis) and mandarin ('Kinnow', 'Nagpur'); drop and impact thresholds on steel; friction on rubber and plastic; angle of repose (queries in the seed file). Found peel-only moduli (Jentzsch et al. 2022, five Citrus peels), whole-fruit relaxation without a modulus value (Moresi et al. 2012, Tarocco), and lemon, kumquat and musk-lime studies (other species); nothing for the whole orange or mandarin.";
 
 /** Size, weight, specific gravity and friction as the HortFlora study gives them. */
 function hortflora(

@@ -13,12 +13,53 @@ const BERMUDEZ = 'ct-bermudez-cavendish-thesis';
 /** What the tropical searches covered, for the notes of the typical values. */
 const SEARCHED = (fruit: string, queries: string) =>
   `Searched (stored pages): ${queries}; no published ${fruit} value for this quantity was found in a readable abstract or page.`;
+/*
+ * Queries run on the stored pages (and, in 2026-12, the docs and code corpora) for the typical
+ * values below, verbatim:
+ * mango — 'mango fruit modulus of elasticity Poisson ratio compression', 'Poisson's ratio mango
+ *   fruit flesh', 'mango physical properties bulk density coefficient of static friction rubber',
+ *   'mango bruise drop height impact threshold', 'mango fruit physical properties angle of repose
+ *   coefficient of friction bulk density', 'physical properties of mango cultivars coefficient of
+ *   static friction plywood galvanized iron rubber angle of repose', 'Alphonso Kesar Totapuri mango
+ *   physical properties coefficient of friction', 'Ataulfo mango mechanical properties modulus
+ *   firmness compression', 'mango fruit rupture stress MPa compression whole fruit cultivar',
+ *   'Keitt Tommy Atkins maturation stage elasticity modulus MPa maximum stress rupture', 'mango
+ *   drop test bruise height Nam Dok Mai impact', 'Tommy Atkins mango impact bruise drop height',
+ *   'CIGR journal mango fruit physical mechanical properties rupture force'. Read, not storable:
+ *   Dantas et al. 2017 (Rev. Ciências Agrárias 40(2), doi 10.19084/RCA16095) measured the modulus
+ *   and the maximum stress to rupture of 'Keitt' and 'Tommy Atkins' — no numbers in the abstract;
+ *   Osadare et al. 2019 (Asian Food Sci. J. 10(2)) — angle of repose of mango seeds, not fruit;
+ *   Yaptenco et al. ('Carabao' firmness, Philipp. Agric. Sci.) — rupture force and stiffness only.
+ * avocado — 'avocado fruit firmness modulus elasticity compression', 'avocado Young's modulus MPa
+ *   Hertz', 'Hass avocado mesocarp Young's modulus', 'avocado Poisson ratio', 'avocado physical
+ *   properties bulk density coefficient friction', 'Hass Fuerte avocado friction coefficient',
+ *   'avocado Hass physical properties coefficient of friction angle of repose bulk density',
+ *   'avocado fruit modulus of elasticity compression bioyield Hass Fuerte', 'Hass avocado
+ *   mesocarp Young's modulus MPa ripening texture compression cylinder'. Read, not storable:
+ *   Ortiz-Viedma et al. 2018 (J. Food Eng. 219:62–70) — 'Hass' mesocarp maximum stress falls with
+ *   ripening, no numbers in the abstract.
+ * banana — 'banana fruit physical mechanical properties modulus friction coefficient', 'banana
+ *   Young's modulus MPa pulp Poisson's ratio', 'Cavendish banana modulus of elasticity', 'banana
+ *   fingers bulk density static coefficient friction', 'banana fruit physical properties angle of
+ *   repose coefficient of static friction', 'banana pulp Young's modulus compression test MPa
+ *   ripening stage', 'banana fruit bioyield point force deformation modulus of elasticity whole
+ *   finger', 'banana drop height bruise threshold impact surface', 'banana Cavendish pendulum
+ *   impact bruise energy threshold', 'plantain Musa physical properties static coefficient of
+ *   friction plywood galvanized steel angle of repose', 'Grand Nain Williams banana finger
+ *   compression firmness modulus elasticity MPa', 'Seeni Embul Kolikuttu coefficient of static
+ *   friction wood steel Styrofoam angle of repose', 'banano propiedades mecánicas módulo de
+ *   elasticidad compresión Cavendish'. Read, not storable: Millán Cardona & Ciro Velásquez
+ *   ('Cavendish Valery', Corporación Universitaria Lasallista) — compressive modulus fell over 12
+ *   days, the abstract giving only peel firmness 16.49 → 12.39 N, probe not named.
+ */
+
+/** What the tropical searches covered, in short, for the notes of the typical values. */
 const MANGO_Q =
-  "'mango fruit modulus of elasticity Poisson ratio compression', 'Poisson's ratio mango fruit flesh', 'mango physical properties bulk density coefficient of static friction rubber', 'mango bruise drop height impact threshold'";
+  "mango modulus, Poisson's ratio; bulk density, friction, angle of repose; 'Keitt', 'Tommy Atkins', 'Alphonso', 'Ataulfo' mechanics; drop and impact bruising (queries in the seed file)";
 const AVOCADO_Q =
-  "'avocado fruit firmness modulus elasticity compression', 'avocado Young's modulus MPa Hertz', 'Hass avocado mesocarp Young's modulus', 'avocado Poisson ratio', 'avocado physical properties bulk density coefficient friction', 'Hass Fuerte avocado friction coefficient'";
+  "avocado modulus, Young's modulus of 'Hass' mesocarp, Poisson's ratio; bulk density, friction and angle of repose of 'Hass' and 'Fuerte' (2026-12 queries in the seed file; Ortiz-Viedma et al. 2018 give no numbers in the abstract)";
 const BANANA_Q =
-  "'banana fruit physical mechanical properties modulus friction coefficient', 'banana Young's modulus MPa pulp Poisson's ratio', 'Cavendish banana modulus of elasticity', 'banana fingers bulk density static coefficient friction'";
+  "banana pulp and finger modulus, Poisson's ratio, bioyield; bulk density, static friction and angle of repose (also plantain, and the Sri Lankan cultivars' paper); drop and pendulum bruise thresholds; Spanish 'banano módulo de elasticidad' (2026-12 queries in the seed file)";
 
 /**
  * Mazhar et al. 2018 (Hass drops): the abstract names no drop surface, so the figures are kept
