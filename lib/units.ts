@@ -23,6 +23,7 @@ const US: Record<string, { unit: string; factor: number }> = {
   'kg/m³': { unit: 'lb/ft³', factor: LB_KG / (12 * IN_M) ** 3 },
   J: { unit: 'ft·lbf', factor: LBF_N * 12 * IN_M },
   'm/s': { unit: 'ft/s', factor: 12 * IN_M },
+  'N·m': { unit: 'lbf·in', factor: LBF_N * IN_M },
 };
 
 export function isUnitSystem(value: unknown): value is UnitSystem {

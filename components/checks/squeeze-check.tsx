@@ -28,7 +28,11 @@ export function SqueezeCheck({
         padEdgeMm: '2',
         safetyFactor: '2',
         accelerationMs2: '2',
+        horizontalAccelerationMs2: '0',
+        gripOffsetMm: '0',
         maxTravelMm: '2',
+        // A pick-and-place transfer takes a few seconds [common practice].
+        holdSeconds: '3',
       },
       choices: { facing },
       keep: (key) => !key.startsWith('facing') || facing === 'custom',

@@ -20,7 +20,10 @@ const GRIP: readonly FieldSpec[] = [
   ['padEdgeMm', 'Pad edge radius'],
   ['safetyFactor', 'Safety factor on weight', 'our default 2'],
   ['accelerationMs2', 'Peak acceleration of the move', 'upward, beyond gravity'],
+  ['horizontalAccelerationMs2', 'Sideways acceleration of the move', 'square to the pad axis'],
+  ['gripOffsetMm', 'Grip offset from the centre of mass', 'pad axis to the centre; 0: centred'],
   ['maxTravelMm', 'Maximum travel per pad', 'at most 15 % of the axial radius'],
+  ['holdSeconds', 'Hold time', 'the transfer, as the flesh relaxes; empty: not held'],
 ];
 const FACING: readonly FieldSpec[] = [
   ['facingModulusMpa', 'Facing modulus'],

@@ -102,6 +102,15 @@ export const squeezeCheckSchema = z
     friction: measure('Friction coefficient', '', 0, 2).optional(),
     safetyFactor: measure('Safety factor', '', 0.999, 20).default(2),
     accelerationMs2: measure('Peak acceleration of the move', 'm/s²', -0.001, 100).default(0),
+    /** Sideways acceleration of the move, square to the pad axis (the worst direction). */
+    horizontalAccelerationMs2: measure(
+      'Sideways acceleration of the move',
+      'm/s²',
+      -0.001,
+      100,
+    ).default(0),
+    /** Distance of the pad axis from the fruit's centre of mass. */
+    gripOffsetMm: measure('Grip offset from the centre of mass', 'mm', -0.001, 200).default(0),
     maxTravelMm: measure('Maximum travel per pad', 'mm', 0, 100),
     /** How long the grip holds the fruit (the transfer); omitted: the grip at t = 0 only. */
     holdSeconds: measure('Hold time', 's', 0, 3600).optional(),

@@ -41,6 +41,11 @@ export async function runSqueezeCheck(
       {
         input: r.model,
         sweep: input.sweep ? sweepDiameters(input, r.fruit.diameterMm.value) : null,
+        move: {
+          verticalMs2: input.accelerationMs2,
+          horizontalMs2: input.horizontalAccelerationMs2,
+          offsetMm: input.gripOffsetMm,
+        },
         hold:
           input.holdSeconds === undefined
             ? null

@@ -3,6 +3,7 @@
  * point, the pad sweep, the slip map at the grip, and the Monte Carlo probability of bruising.
  */
 import {
+  fruitMass,
   runCase,
   runMonteCarlo,
   slipMapOfRun,
@@ -16,6 +17,7 @@ import {
 import { verdictOf } from '../verdict';
 import type { SqueezeHead } from './head';
 import { holdJson, holdWarnings, type HoldInput } from './hold';
+import { twistJson, twistWarnings, type MoveInput } from './twist';
 import { squeezeResultSchema, type SqueezeResult } from './result';
 
 const r4 = (v: number | null | undefined) =>
@@ -29,6 +31,8 @@ export interface SqueezeTaskInput {
   sweep: number[] | null;
   /** the hold after the grip closes; null or absent for the grip at t = 0 only */
   hold?: HoldInput | null;
+  /** the move's accelerations and the grip's offset; absent: straight up, on the centre */
+  move?: MoveInput | null;
 }
 
 function sweepJson(input: SqueezeInput, diameters: number[]) {
@@ -64,7 +68,7 @@ function slipJson(s: GripSlipMap) {
   };
 }
 
-export function squeezeTask({ input, sweep, hold }: SqueezeTaskInput) {
+export function squeezeTask({ input, sweep, hold, move }: SqueezeTaskInput) {
   // One run serves the result and the slip map at its grip.
   const run = runCase(input, true);
   const result = squeezeResultOf(run);
@@ -77,7 +81,35 @@ export function squeezeTask({ input, sweep, hold }: SqueezeTaskInput) {
     sweep: sweep && grip ? sweepJson(input, sweep) : null,
     slip: grip ? slipJson(slipMapOfRun(run)) : null,
     hold: hold ? holdJson(input, hold, grip?.force ?? null) : null,
+    twist: move && grip ? twistOf(input, move, grip, result.steps) : null,
   };
+}
+
+function twistOf(
+  input: SqueezeInput,
+  move: MoveInput,
+  grip: NonNullable<NonNullable<ReturnType<typeof squeezeResultOf>['liftability']>['grip']>,
+  steps: ReturnType<typeof squeezeResultOf>['steps'],
+) {
+  const axial = input.axialRadius ?? input.equatorialRadius;
+  return twistJson({
+    move,
+    massKg: fruitMass('axisymmetric', input.equatorialRadius, axial, input.density ?? 0),
+    friction: input.friction ?? 0,
+    safetyFactor: input.safetyFactor ?? 1,
+    grip: {
+      force_n: grip.force,
+      contact_radius_mm: grip.contactRadius * 1e3,
+      profile: grip.profile.map((p) => ({ r_mm: p.r * 1e3, pressure_kpa: p.pressure / 1e3 })),
+    },
+    steps: steps.map((s) => ({
+      travel_per_pad_mm: s.travel * 1e3,
+      force_n: s.force,
+      contact_radius_mm: s.contactRadius * 1e3,
+      peak_pressure_kpa: s.peakPressure / 1e3,
+    })),
+    thresholdKpa: input.bruiseThreshold === undefined ? null : input.bruiseThreshold / 1e3,
+  });
 }
 
 export type SqueezeTaskResult = ReturnType<typeof squeezeTask>;
@@ -112,6 +144,7 @@ export function squeezeCheckTask({
       ...out.model.warnings.map((w) => w.message),
       ...inputWarnings,
       ...(out.hold ? holdWarnings(out.hold) : []),
+      ...(out.twist ? twistWarnings(out.twist) : []),
     ],
   });
 }

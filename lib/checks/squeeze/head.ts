@@ -18,6 +18,8 @@ export function squeezeHead(r: ResolvedSqueeze, input: SqueezeCheckInput) {
     facing_basis: FACING_PRESETS[input.facing].basis,
     safety_factor: input.safetyFactor,
     acceleration_m_s2: input.accelerationMs2,
+    horizontal_acceleration_m_s2: input.horizontalAccelerationMs2,
+    grip_offset_mm: input.gripOffsetMm,
     max_travel_mm: input.maxTravelMm,
   };
   // The hold's figures: they move the grip over time, not the bruise margin at t = 0, so the

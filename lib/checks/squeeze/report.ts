@@ -92,7 +92,122 @@ function charts(r: SqueezeResult): ChartSpec[] {
       markers:
         r.slip.stick_radius_mm == null ? [] : [{ x: r.slip.stick_radius_mm, label: 'stick edge' }],
     });
+  const hold = r.hold;
+  if (hold?.curve)
+    out.push({
+      id: 'squeeze-hold',
+      title: `Pad force held for ${hold.seconds} s as the flesh relaxes`,
+      x: { label: 'time', unit: 's' },
+      y: { label: 'pad force', unit: 'N' },
+      series: [
+        ...(hold.held
+          ? [
+              {
+                label: 'closed to hold to the end',
+                points: pointsOf(
+                  hold.curve,
+                  (p) => p.t_s,
+                  (p) => p.held_force_n,
+                ),
+              },
+            ]
+          : []),
+        {
+          label: 'closed to the lift point',
+          points: pointsOf(
+            hold.curve,
+            (p) => p.t_s,
+            (p) => p.grip_force_n,
+          ),
+        },
+      ],
+      markers: [
+        ...(grip?.force_n != null
+          ? [{ y: grip.force_n / r.inputs_used.safety_factor, label: 'slips below' }]
+          : []),
+        ...(hold.grip_slips_after_s !== null && hold.grip_slips_after_s <= hold.seconds
+          ? [{ x: hold.grip_slips_after_s, label: 'slips' }]
+          : []),
+      ],
+    });
   return out;
+}
+
+/** Force and twist at the grip: which governs, and the travel that holds both. */
+function twistFigures(r: SqueezeResult) {
+  const t = r.twist;
+  if (!t) return [];
+  return [
+    { label: 'Load the pads carry (weight and inertia)', value: t.load_n, unit: 'N' },
+    { label: 'Twist about the pad axis', value: t.torque_n_m, unit: 'N·m' },
+    { label: "Pads' torsional friction at the grip", value: t.capacity_n_m, unit: 'N·m' },
+    {
+      label: 'Governs the grip',
+      value: null,
+      unit: '–',
+      text:
+        t.offset_mm === 0
+          ? 'the load (centred grip: no twist)'
+          : `${t.governs === 'twist' ? 'the twist' : 'the load'} (load ${t.lift_utilisation}, twist ${t.twist_utilisation ?? '—'} of capacity with the safety factor)`,
+    },
+    ...(t.holding
+      ? [
+          {
+            label: 'Travel per pad to hold load and twist',
+            value: t.holding.travel_per_pad_mm,
+            unit: 'mm',
+            text: t.holding.travel_per_pad_mm === null ? (t.holding.reason ?? '—') : undefined,
+          },
+          {
+            label: 'Bruise margin there',
+            value: t.holding.bruise_margin,
+            unit: '–',
+            text: t.holding.bruise_margin === null ? '—' : undefined,
+          },
+        ]
+      : []),
+  ];
+}
+
+/** The hold's figures for the report: what the relaxation does to the grip, in words. */
+function holdFigures(r: SqueezeResult) {
+  const h = r.hold;
+  if (!h) return [];
+  if (!h.relaxation)
+    return [
+      {
+        label: 'Grip force at the end of the hold',
+        value: null,
+        unit: '–',
+        text: 'no relaxation data for this fruit: taken as held',
+      },
+    ];
+  return [
+    { label: 'Share of the grip force kept at the end', value: h.retained_at_end, unit: '–' },
+    {
+      label: 'Grip at the lift point slips after',
+      value: h.grip_slips_after_s,
+      unit: 's',
+      text:
+        h.grip_slips_after_s === null
+          ? 'never (the safety factor outlasts the relaxation)'
+          : undefined,
+    },
+    {
+      label: 'Travel per pad to hold to the end',
+      value: h.held?.travel_per_pad_mm ?? null,
+      unit: 'mm',
+      text: h.held ? undefined : (h.held_reason ?? '—'),
+    },
+    { label: 'Pad force at first, held grip', value: h.held?.force_n ?? null, unit: 'N' },
+    { label: 'Pad force at the end, held grip', value: h.held?.force_end_n ?? null, unit: 'N' },
+    {
+      label: 'Bruise margin of the held grip (at t = 0)',
+      value: h.held?.bruise_margin ?? null,
+      unit: '–',
+      text: h.held && h.held.bruise_margin === null ? 'no threshold' : undefined,
+    },
+  ];
 }
 
 /** How a saved squeeze check is shown, printed, exported and compared. */
@@ -122,7 +237,19 @@ export const squeezeDescriptor: CheckDescriptor<SqueezeResult> = {
         { label: 'Pad facing', value: null, unit: '–', text: `${u.facing} (${u.facing_basis})` },
         { label: 'Safety factor on weight', value: u.safety_factor, unit: '–' },
         { label: 'Peak acceleration of the move', value: u.acceleration_m_s2, unit: 'm/s²' },
+        {
+          label: 'Sideways acceleration of the move',
+          value: u.horizontal_acceleration_m_s2 ?? 0,
+          unit: 'm/s²',
+        },
+        { label: 'Grip offset from the centre of mass', value: u.grip_offset_mm ?? 0, unit: 'mm' },
         { label: 'Maximum travel per pad', value: u.max_travel_mm, unit: 'mm' },
+        {
+          label: 'Hold time',
+          value: u.hold_time_s ?? null,
+          unit: 's',
+          text: u.hold_time_s == null ? 'not held (grip at t = 0 only)' : undefined,
+        },
       ],
       figures: [
         {
@@ -158,11 +285,19 @@ export const squeezeDescriptor: CheckDescriptor<SqueezeResult> = {
           unit: '–',
           text: r.slip?.holds == null ? '—' : r.slip.holds ? 'holds' : 'slides',
         },
+        ...twistFigures(r),
+        ...holdFigures(r),
       ],
       used: [
         ...fruitUsedRows(u),
         { label: 'Friction', value: u.friction },
         { label: 'Failure stress', value: u.failure_stress_kpa },
+        ...(u.relaxation_k1_s
+          ? [
+              { label: 'Relaxation constant k₁', value: u.relaxation_k1_s },
+              { label: 'Relaxation constant k₂', value: u.relaxation_k2 ?? null },
+            ]
+          : []),
       ],
       margin: r.margin,
       restsOn: r.evidence?.rests_on ?? null,

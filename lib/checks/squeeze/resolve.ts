@@ -1,11 +1,13 @@
 import 'server-only';
-import { STANDARD_GRAVITY, type SqueezeInput, type Spreads } from '@/fem';
+import { type SqueezeInput, type Spreads } from '@/fem';
 import type { Actor } from '@/lib/auth/actor';
 import type { SqueezeCheckInput } from '@/lib/checks/inputs';
 import { climb } from '@/lib/evidence/ladder';
+import { ValidationError } from '@/lib/errors';
 import type { UsedValue } from '../used-value';
 import { FACING_PRESETS, frictionSurfacesFor } from '../facings';
 import { relaxationOf } from './hold';
+import { resultantAccelG } from './twist';
 import { required, resolveFruit, type ResolvedFruit } from '../resolve-fruit';
 
 export interface ResolvedSqueeze {
@@ -23,6 +25,10 @@ export interface ResolvedSqueeze {
 export async function resolveSqueeze(actor: Actor, v: SqueezeCheckInput): Promise<ResolvedSqueeze> {
   const fruit = await resolveFruit(actor, v);
   const axialMm = fruit.axialMm.value;
+  if (v.gripOffsetMm >= Math.min(fruit.diameterMm.value, axialMm) / 2) {
+    const message = `The grip offset must be less than the fruit's radius (${Math.min(fruit.diameterMm.value, axialMm) / 2} mm): the pads would miss the fruit.`;
+    throw new ValidationError(message, { gripOffsetMm: [message] });
+  }
   const density = fruit.densityKgM3;
   const friction = required(
     climb(
@@ -59,7 +65,8 @@ export async function resolveSqueeze(actor: Actor, v: SqueezeCheckInput): Promis
     density: density.value,
     friction: friction.value,
     safetyFactor: v.safetyFactor,
-    accelG: v.accelerationMs2 / STANDARD_GRAVITY,
+    // The pads carry the resultant of weight and inertia, vertical and sideways.
+    accelG: resultantAccelG(v.accelerationMs2, v.horizontalAccelerationMs2),
     ...(fruit.staticThresholdKpa ? { bruiseThreshold: fruit.staticThresholdKpa.value * 1000 } : {}),
     // Tresca: at failure in uniaxial compression the largest shear is half the failure stress.
     ...(failureStress ? { failureShear: (failureStress.value * 1000) / 2 } : {}),

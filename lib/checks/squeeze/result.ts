@@ -38,6 +38,9 @@ export const squeezeResultSchema = z.object({
     facing_basis: z.string(),
     safety_factor: n,
     acceleration_m_s2: n,
+    /** Sideways acceleration and the grip's offset (absent in results saved before them). */
+    horizontal_acceleration_m_s2: n.optional(),
+    grip_offset_mm: n.optional(),
     max_travel_mm: n,
     /** The hold time and the relaxation pair it used (absent in results saved before holds). */
     hold_time_s: nn.optional(),
@@ -95,6 +98,32 @@ export const squeezeResultSchema = z.object({
         .optional(),
     })
     .nullable(),
+  /** Force and twist of the move at the grip (absent in results saved before it). */
+  twist: z
+    .object({
+      offset_mm: n,
+      resultant_acceleration_m_s2: n,
+      load_n: n,
+      torque_n_m: n,
+      capacity_n_m: n,
+      shape_factor: n,
+      lift_utilisation: n,
+      twist_utilisation: nn,
+      combined_utilisation: nn,
+      governs: z.enum(['lift', 'twist']),
+      holds_at_grip: z.boolean(),
+      holding: z
+        .object({
+          travel_per_pad_mm: nn,
+          force_n: nn,
+          peak_pressure_kpa: nn,
+          bruise_margin: nn,
+          reason: z.string().nullable(),
+        })
+        .nullable(),
+    })
+    .nullable()
+    .optional(),
   /** The grip held over time as the flesh relaxes (absent: no hold time given, or older results). */
   hold: z
     .object({

@@ -30,6 +30,8 @@ const EXPECTED: Record<string, string> = {
   accelerationMs2: 'm/s²',
   maxTravelMm: 'mm',
   holdSeconds: 's',
+  horizontalAccelerationMs2: 'm/s²',
+  gripOffsetMm: 'mm',
 };
 
 describe('check form units come from the input schemas', () => {
