@@ -12,6 +12,9 @@ const WA_GRADES = 'pome-wa-apple-grades';
 const STORED_TENSILE = 'pome-stored-apples-tensile';
 const ARSHAD = 'pome-arshad-2017-apple-geometry';
 const FUJI_PICKING = 'pome-apple-picking-damage-fuji';
+const LULI_DEM = 'pome-scau-luli-apple-dem';
+const LULI_METHOD =
+  'Inclined-plane and rolling tests combined with DEM simulation (calibrated static friction), checked by a bottomless-cylinder lifting test';
 
 /** Ultimate tensile strength of flesh specimens, at harvest and after 18 weeks in cool store. */
 const storedTensile = (): SeedValue[] =>
@@ -265,6 +268,36 @@ export const APPLE: SeedCommodity = {
       values: [waMinimumFirmness(11, 48.9)],
     },
     {
+      slug: 'apple-luli',
+      name: 'Luli',
+      values: [
+        {
+          quantity: 'friction_coefficient',
+          variant: 'foam',
+          value: 0.46,
+          method: LULI_METHOD,
+          note: "Published for 'Luli' (鲁丽) apples against a super-high-density foam (特高密度泡棉), a calibrated DEM static friction coefficient. Taken first as the lower of the two foams (the harsher figure for a grip that must not slip); against a high-density foam 0.61 (below). Foam kinds and thicknesses are not given in the abstract.",
+          source: LULI_DEM,
+        },
+        {
+          quantity: 'friction_coefficient',
+          variant: 'foam',
+          value: 0.61,
+          method: LULI_METHOD,
+          note: "Published for 'Luli' apples against a high-density foam (高密度泡棉), a calibrated DEM static friction coefficient.",
+          source: LULI_DEM,
+        },
+        {
+          quantity: 'friction_coefficient',
+          variant: 'fruit',
+          value: 0.42,
+          method: LULI_METHOD,
+          note: "Published for 'Luli' apples against each other (apple particle models), a calibrated DEM static friction coefficient; the same study gives apple–apple restitution 0.65 and rolling friction 0.032.",
+          source: LULI_DEM,
+        },
+      ],
+    },
+    {
       slug: 'apple-type',
       name: 'Apple (commodity record)',
       isType: true,
@@ -434,7 +467,8 @@ export const APPLE: SeedCommodity = {
           low: 10,
           high: 30,
           observation: 'recommended-max',
-          note: "Typical value, not published: no no-bruise drop height onto a named hard surface was readable. Found instead: Komarnicki & Stopa 2013 (Inż. Roln. 3(146)) estimate 30 mm as not causing plastic deformation, on a pendulum whose impact surface is not named; Pang et al. 1994 (Trans. ASAE 37(3)) give per-cultivar heights for a 100 mm² bruise onto steel, rubber and plastic, not visible in the abstract (tested range 6–143 mm); 'Jazz' apples struck by a bare aluminium plate did not bruise at 22 N peak force (Fu et al. 2017), a force, not a height; 'Royal Gala' bruising began at about 0.08 J on a pendulum whose impactor is not named (Shen & Shan, UBC student report, weak); apple-to-apple drops rarely bruised below 1 cm² contact (Pang et al. 1992); apples dropped 1400 mm onto metal (kind not named) bruised, about 951 mm² (Unuigbe & Onuoha), an upper bound too high to guide a check. 20 mm is kept below the 30 mm estimate.",
+          note: "Typical value, not published: no no-bruise drop height onto a named hard surface was readable. Found: 30 mm estimated as not causing plastic deformation on a pendulum, surface not named (Komarnicki & Stopa 2013); per-cultivar heights for a 100 mm² bruise onto steel, rubber, plastic not in the abstract (Pang et al. 1994, range 6–143 mm); no bruise at 22 N on bare aluminium ('Jazz', Fu et al. 2017), a force; about 0.08 J onset, impactor not named ('Royal Gala', student report); 1400 mm onto metal bruised (Unuigbe & Onuoha), too high to guide. 20 mm is kept below the 30 mm estimate. Searched in 2026-12: 'apple bruise threshold drop height steel no bruising critical height', 'Jonagold apple bruise threshold impact energy pendulum', 'apples should not be dropped more than inches onto hard surfaces', '苹果 跌落 损伤 临界跌落高度 钢板': a 'Gala' drop-bruise boundary study (Trans. CSAE 2008) gives no value in its abstract; the WSU 4-inch guide is for pears only.",
+
           isTypicalDefault: true,
           typicalBasis: 'from memory',
           source: null,
@@ -444,12 +478,15 @@ export const APPLE: SeedCommodity = {
           value: 480,
           low: 350,
           high: 600,
-          note: "Typical value, not published for commercial fruit: the only published figure read, 240.1 kg/m³ ('apparent density' of a pile of small 'Golab' apples), is ambiguous and kept on that cultivar. Searched: 'apple bulk density bin kg/m3', 'apple physical properties bulk density porosity'. 480 kg/m³ is about 0.55 × the 'Fuji' fruit density 878 kg/m³, i.e. a bin porosity near 45 % (the 'Golab' study reports 50–57 %).",
+          note: "Typical value, not published for commercial fruit: the only published figure read, 240.1 kg/m³ ('apparent density' of a pile of small 'Golab' apples), is ambiguous and kept on that cultivar. Searched: 'apple bulk density bin kg/m3', 'apple physical properties bulk density porosity'. 480 kg/m³ is about 0.55 × the 'Fuji' fruit density 878 kg/m³, i.e. a bin porosity near 45 % (the 'Golab' study reports 50–57 %). Also searched in 2026-12: 'apple fruit bulk density kg m-3 porosity true density cultivars physical properties', 'Golab Kohanz Shafi Abadi bulk density fruit density coefficient of static friction', 'Redspar Delbarstival apple density bulk density static coefficient of friction': Gorji Chakespari et al. (J. Agric. Sci. 2(3):61, 2010) measured bulk density of 'Golab Kohanz' and 'Shafi Abadi', values not in the part read.",
           isTypicalDefault: true,
           typicalBasis: 'from memory',
           source: null,
         },
-        typicalJanssenK(),
+        {
+          ...typicalJanssenK(),
+          note: `${typicalJanssenK().note} No published angle of repose of apples was found to derive it from. Searched in 2026-12: 'apple fruit angle of repose physical properties', 'apple discrete element calibration angle of repose Fuji static friction coefficient', 'Calibrating and simulating contact parameters of the discrete element for apple particles stacking angle' (Zhang et al., Trans. CSAE 40(12), 2024: a stacking-angle calibration of 'Red Fuji', 'Hua Niu' and 'Golden Delicious', its measured angle not in the part of the abstract read), '苹果 离散元 接触参数 标定 堆积角 红富士'.`,
+        },
       ],
     },
   ],

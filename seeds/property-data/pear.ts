@@ -3,6 +3,7 @@ import { storageModulus, typicalJanssenK, typicalValue } from './value-helpers';
 
 const STORAGE_STUDY = 'tjaf-pear-apple-storage';
 const UCD_BARTLETT = 'pome-ucd-bartlett';
+const WSU_PEAR_IMPACT = 'pome-wsu-pear-impact';
 const SU_PEAR = 'pome-ouyang-2019-su-pear';
 const SU_METHOD =
   'Cylindrical flesh specimens in compression, with and without lateral confinement (true stress–strain)';
@@ -13,7 +14,7 @@ const typical = (v: Omit<SeedValue, 'isTypicalDefault' | 'typicalBasis' | 'sourc
   typicalValue(v, 'from memory');
 
 const PEAR_FRICTION_NOTE =
-  "Typical value, not published here: Öztürk et al. 2009 measured the static friction of 'Deveci' and 'Santa Maria' pears, but the coefficients are not in the abstract read. Searched: 'pear physical properties density bulk density friction coefficient cultivar', 'pear fruit length width mass true density static coefficient of friction rubber plywood galvanized'.";
+  "Typical value, not published here: Öztürk et al. 2009 measured the static friction of 'Deveci' and 'Santa Maria' pears, but the coefficients are not in the abstract read. Searched: 'pear physical properties density bulk density friction coefficient cultivar', 'pear fruit length width mass true density static coefficient of friction rubber plywood galvanized'; in 2026-12 also 'pear fruit physical properties angle of repose coefficient of friction', 'some physical properties of pear fruit cultivars true density static coefficient of friction plywood galvanized', 'Iranian pear variety Shahmiveh Natanzi Spadona physical mechanical properties', '梨 果实 物理特性 休止角 密度 摩擦系数'. A DEM calibration of four Chinese pears (Snow, Crisp, Huangguan, Qiuyue; Agronomy 12(7):1720, 2022) calibrates pear–steel friction, but its values are not in the part of the abstract read.";
 
 const PEAR_DROP_NOTE =
   "Typical value, not published: no pear no-bruise drop height onto a named surface could be read. Found: 'Bartlett' share bruised 40 % at 10 cm rising to 100 % at 41 cm, surface not named (Mitchell, read second-hand); 3-inch (76 mm) drops cause substantial bruising of 'Bartlett' (California Agriculture 54(3), 2000; its 'about 8 mm' is a slip), surface not named; all 'Williams' and 'Ankara' fruit bruised in 10–20 cm pendulum drops, impactor not named (Turk. J. Agric. For.); Stropek & Gołacki 2020 (rigid plate) give no no-bruise velocity in the part read; Celik 2017 simulated 0.25–1 m drops onto steel, wood, rubber. Pathare et al. 2021, Sinobas et al. 1991 and Acta Agroph. 25(4) 2018 (glass ball, 20–80 cm) dropped an impactor onto the fruit, with no no-bruise level stated.";
@@ -135,7 +136,7 @@ export const PEAR: SeedCommodity = {
           value: 1030,
           low: 1000,
           high: 1070,
-          note: "Typical value, not published here: Öztürk et al. 2009 measured fruit density of 'Deveci' and 'Santa Maria', but the values are not in the abstract read. Pears sink in water, which is why packing-house immersion dumps use flotation salts (California Agriculture 54(3), 2000), so the density exceeds 1000 kg/m³.",
+          note: "Typical value, not published here: Öztürk et al. 2009 measured fruit density of 'Deveci' and 'Santa Maria', but the values are not in the abstract read. Pears sink in water, which is why packing-house immersion dumps use flotation salts (California Agriculture 54(3), 2000), so the density exceeds 1000 kg/m³. Also searched in 2026-12: 'some physical properties of pear fruit cultivars true density', 'pear fruit length width thickness geometric mean diameter sphericity true density mass cultivar', 'Simulation parameter calibration typical pear varieties discrete element elastic modulus Poisson density Huangguan' (the pear DEM study's intrinsic parameters are not in the part read).",
         }),
         {
           quantity: 'diameter',
@@ -150,7 +151,7 @@ export const PEAR: SeedCommodity = {
           value: 85,
           low: 70,
           high: 110,
-          note: 'Typical value, not published here: Öztürk et al. 2009 measured fruit length, but the values are not in the abstract read. European pears are longer than wide; 85 mm is about 1.3 × the published 63.5 mm diameter class.',
+          note: "Typical value, not published here: Öztürk et al. 2009 measured fruit length, but the values are not in the abstract read. European pears are longer than wide; 85 mm is about 1.3 × the published 63.5 mm diameter class. Also searched in 2026-12: 'pear fruit length width thickness geometric mean diameter sphericity true density mass cultivar Turkey Santa Maria Williams' (a HortScience weight–diameter model for 'Williams' gives no length).",
         }),
         {
           quantity: 'mass',
@@ -165,7 +166,7 @@ export const PEAR: SeedCommodity = {
           value: 70,
           low: 40,
           high: 120,
-          note: "Typical value, not published: no static bruise threshold, bioyield or failure stress for pear could be read (Öztürk et al. give rupture forces 23.04–39.59 N, forces not stresses; the storage study gives bioyield forces without values in its abstract; Blahovec et al. test static bruising of nine pear varieties by hysteresis loss). Searched: 'pear fruit compression bioyield stress failure stress', 'pear cultivars elastic modulus rupture stress'. Kept below the published apple value (100 kPa, Wang et al. 2024): pears are softer (ripe 'Bartlett' 2–4 lbf against 19–22 lbf at harvest).",
+          note: "Typical value, not published: no static bruise threshold, bioyield or failure stress for pear could be read (Öztürk et al. give rupture forces 23.04–39.59 N, forces not stresses; the storage study gives bioyield forces without values in its abstract; Blahovec et al. test static bruising of nine varieties by hysteresis loss). Kept below the published apple value (100 kPa, Wang et al. 2024): pears are softer (ripe 'Bartlett' 2–4 lbf against 19–22 lbf at harvest). Searched: 'pear fruit compression bioyield stress failure stress', 'pear cultivars elastic modulus rupture stress'; in 2026-12 also 'Conference pear flesh compression modulus failure stress', 'Korla fragrant pear flesh elastic modulus failure stress', 'pear flesh Stropek Gołacki quasi-static compression yield', '梨 果肉 压缩 弹性模量 屈服强度 破坏应力', '砀山酥梨 压缩 弹性模量 生物屈服点': only texture (TPA) studies and relaxation or creep models ('Dangshan', 'Korla') without a yield stress.",
         }),
         typical({
           quantity: 'friction_coefficient',
@@ -191,15 +192,28 @@ export const PEAR: SeedCommodity = {
           high: 0.45,
           note: PEAR_FRICTION_NOTE,
         }),
-        typical({
+        {
           quantity: 'drop_threshold_height',
           variant: 'rigid plate',
-          value: 20,
-          low: 10,
-          high: 50,
+          value: 101.6,
           observation: 'recommended-max',
-          note: PEAR_DROP_NOTE,
-        }),
+          stage: 'firm',
+          method: 'Handling guide for harvest, sorting, grading and packing',
+          ripeness: 'Firm pears',
+          note: "Published as 'pears should not be dropped more than 4 inches onto hard surfaces' (4 in × 25.4 = 101.6 mm); 'hard surfaces' is stored as 'rigid plate' (the material is not named). A guide's maximum for firm fruit, not a measured no-bruise height; the page adds that cold fruit is more sensitive and that ripening fruit bruise far more. It replaces the typical 20 mm kept before. Caution: California Agriculture 54(3), 2000 reports substantial bruising of 'Bartlett' from 3-inch (76 mm) drops onto a surface it does not name, below this maximum; the check takes this figure, the only one onto a named hard surface.",
+          source: WSU_PEAR_IMPACT,
+        },
+        {
+          quantity: 'drop_threshold_height',
+          variant: 'fruit',
+          value: 203.2,
+          observation: 'recommended-max',
+          stage: 'firm',
+          method: 'Handling guide for harvest, sorting, grading and packing',
+          ripeness: 'Firm pears',
+          note: "Published as 'nor more than 8 inches upon other pears' (8 in × 25.4 = 203.2 mm). A guide's maximum for a drop onto other pears, not a measured threshold.",
+          source: WSU_PEAR_IMPACT,
+        },
         typical({
           quantity: 'drop_threshold_height',
           variant: 'rubber',
@@ -207,7 +221,7 @@ export const PEAR: SeedCommodity = {
           low: 20,
           high: 80,
           observation: 'recommended-max',
-          note: `${PEAR_DROP_NOTE} Rubber is taken at twice the rigid-plate value.`,
+          note: `${PEAR_DROP_NOTE} Rubber: twice the former typical 20 mm rigid-plate value. Searched in 2026-12: 'pear impact bruise threshold energy Blanquilla', 'Rocha pear bruising impact'.`,
         }),
         {
           quantity: 'bulk_density',
@@ -217,7 +231,10 @@ export const PEAR: SeedCommodity = {
           note: "Range between 'Deveci' and 'Santa Maria'; the abstract does not say which cultivar gave which end. The value is the middle of the range.",
           source: 'ozturk-2009-pear',
         },
-        typicalJanssenK(),
+        {
+          ...typicalJanssenK(),
+          note: `${typicalJanssenK().note} No published angle of repose of pears was found to derive it from. Searched in 2026-12: 'pear fruit physical properties angle of repose coefficient of friction', 'pear angle of repose simulation calibration static friction coefficient steel plate', 'measured stacking angle of pears degrees', '梨 离散元 仿真参数 标定 堆积角', '梨 果实 物理特性 休止角'. The pear DEM calibration (Agronomy 12(7):1720, 2022) uses a pile test, but its measured angle is not in the part read.`,
+        },
       ],
     },
   ],

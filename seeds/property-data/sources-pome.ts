@@ -243,4 +243,26 @@ export const POME_SOURCES: SeedSource[] = [
     url: 'http://www.acta-agrophysica.org/Podatnosc-gruszek-na-obicia-po-zbiorze-i-przechowywaniu,102717,0,2.html',
     note: "Read in the abstract (journal page; the corresponding author is B. Dobrzański, the full author list is not shown). A 25.68 g glass ball dropped onto 'Conference', 'Lukasówka', 'Concorde' and 'Amfora' pears from 20, 40 and 80 cm; bruise volumes, no no-bruise level.",
   },
+  {
+    key: 'pome-wsu-pear-impact',
+    kind: 'report',
+    authors: null,
+    year: null,
+    title: 'Tree Fruit Market Diseases: pear impact (impact and pressure bruises of pears)',
+    venue: 'WSU Tree Fruit Research & Extension Center, Postharvest Information Network',
+    url: 'http://postharvest.tfrec.wsu.edu/market/pearimpact',
+    note: "Read in the stored full page; authors and year not shown (the page carries only a display date, 17 February 2019). It states that firm pears 'should not be dropped more than 4 inches onto hard surfaces nor more than 8 inches upon other pears when being harvested, sorted, graded, and packed', and that cold fruit is more sensitive to injury. A handling guide's maximum, not a measured threshold; no cultivar named on the page.",
+  },
+  {
+    key: 'pome-scau-luli-apple-dem',
+    kind: 'paper',
+    authors: null,
+    year: null,
+    title:
+      "Calibration of contact parameters of 'Luli' apple for simulation based on discrete element (基于离散元的'鲁丽'苹果仿真接触参数标定)",
+    venue: 'Journal of South China Agricultural University (华南农业大学学报)',
+    doi: '10.7671/j.issn.1001-411X.202403013',
+    url: 'https://journal.scau.edu.cn/article/doi/10.7671/j.issn.1001-411X.202403013',
+    note: "Read in the abstract (Chinese and English, journal page); authors, year, volume and pages not shown on the part read (the DOI suffix suggests a 2024 submission). Restitution, static and rolling friction coefficients of 'Luli' apples against two foams and against each other, calibrated by combining physical tests with DEM simulation, checked by a bottomless-cylinder lifting test.",
+  },
 ];
