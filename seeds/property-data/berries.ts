@@ -101,7 +101,7 @@ export const BERRIES: SeedCommodity[] = [
             0.1,
             2,
             'from memory',
-            "No strawberry modulus with its figure found (searched: 'strawberry fruit compression elastic modulus Poisson ratio', 'strawberry cultivar Young's modulus MPa', 'strawberry Camarosa firmness modulus'). Creep studies ('Vibrant', 'Elsanta', 'Magic') give strains, not a modulus.",
+            "No strawberry modulus with its figure found (searched: 'strawberry fruit compression elastic modulus Poisson ratio', 'strawberry cultivar Young's modulus MPa', 'strawberry Camarosa firmness modulus', 'strawberry cultivars compression test elastic modulus failure stress kPa', 'strawberry Hongyan compression elastic modulus damage finite element', and in Chinese '草莓 力学特性 弹性模量 泊松比'). Creep studies ('Vibrant', 'Elsanta', 'Magic') give strains, not a modulus.",
           ),
           poisson('strawberry'),
           {
@@ -140,7 +140,7 @@ export const BERRIES: SeedCommodity[] = [
             5,
             60,
             'from memory',
-            "No strawberry static bruise pressure, bioyield or failure stress found (searched: 'strawberry compression failure stress kPa', 'strawberry mass tissue strength'). Compression bruised strawberries more than impacts of similar energy (Ferreira et al. 2008; Aliasgarian Najafabadi et al.); 'Sweet Charlie' bruised 40 % more under compression than the other Florida cultivars.",
+            "No strawberry static bruise pressure, bioyield or failure stress found (searched: 'strawberry compression failure stress kPa', 'strawberry mass tissue strength', 'strawberry cultivars compression test elastic modulus failure stress kPa'). The 'Paros' study (Fatehi, Mahmoudi, Hosseinpour, Samimi Akhijahani; Iranian Food Science and Technology Research Journal 16(1):17–27, 2020, Persian) measured a bioyield point by size class, but the part of its abstract read gives no figure. Compression bruised strawberries more than impacts of similar energy (Ferreira et al. 2008; Aliasgarian Najafabadi et al.); 'Sweet Charlie' bruised 40 % more under compression than the other Florida cultivars.",
           ),
           ...SELVA_FRICTION.map(([variant, value, as]) => ({
             quantity: 'friction_coefficient' as const,
@@ -258,7 +258,7 @@ export const BERRIES: SeedCommodity[] = [
             0.2,
             3,
             'from memory',
-            "No blueberry modulus with its figure found (searched: 'blueberry fruit elastic modulus compression', 'apparent modulus of elasticity blueberries FirmTech'). Tetteh et al. (Trans. ASABE 49:113–121, 2006) computed apparent moduli from FirmTech 2 readings, but the abstract gives no figure.",
+            "No blueberry modulus with its figure found (searched: 'blueberry fruit elastic modulus compression', 'apparent modulus of elasticity blueberries FirmTech', 'blueberry cultivars compression Young's modulus rupture force stress', 'Duke blueberry firmness elastic modulus compression', 'blueberry finite element drop damage elastic modulus Poisson ratio', and in Chinese '蓝莓 果实 弹性模量 泊松比'). Tetteh et al. (Trans. ASABE 49:113–121, 2006) computed apparent moduli from FirmTech 2 readings, but the abstract gives no figure.",
           ),
           poisson('blueberry'),
           typical(
@@ -336,7 +336,7 @@ export const BERRIES: SeedCommodity[] = [
             500,
             700,
             'from memory',
-            "No blueberry bulk density found (searched: 'blueberry bulk density'). Small round berries pack more densely than large fruit.",
+            "No blueberry bulk density found (searched: 'blueberry bulk density', 'blueberry physical properties bulk density true density static friction angle of repose highbush cultivar'). Small round berries pack more densely than large fruit.",
           ),
         ],
       },

@@ -204,7 +204,7 @@ export const STONE_FRUIT: SeedCommodity[] = [
             30,
             250,
             'from memory',
-            "No peach static bruise pressure, bioyield or failure stress found (searched: 'peach bruise threshold', 'Dixred peach rupture stress', 'peach failure stress bioyield kPa'). Published only as forces: a 44 N load held 1 min bruised peaches (Vergano et al. 1991; no contact area given), and 'Dixred' peaches could be packed 13–16 layers deep at harvest but only 4–6 after 28 days at 0 °C (stone-tubitak-2003-dixred-peach). Stored near the apple figure (100 kPa); ripe peaches bruise far lower.",
+            "No peach static bruise pressure, bioyield or failure stress found (searched: 'peach bruise threshold', 'Dixred peach rupture stress', 'peach failure stress bioyield kPa', 'peach fruit static compression bruise threshold pressure kPa', 'peach flesh bio-yield stress maturity', 'peach modulus of elasticity bioyield stress compression cultivar MPa', and in Chinese '桃 果肉 弹性模量 泊松比 屈服'). The finite-element peach study gives a stress of 1.19 MPa at the maximum force (stored as failure_stress), not a no-bruise level. Published only as forces: a 44 N load held 1 min bruised peaches (Vergano et al. 1991; no contact area given), and 'Dixred' peaches could be packed 13–16 layers deep at harvest but only 4–6 after 28 days at 0 °C (stone-tubitak-2003-dixred-peach). Stored near the apple figure (100 kPa); ripe peaches bruise far lower.",
           ),
           ...independenceFriction(
             "Measured on the nectarine 'Independence' (Prunus persica var. nucipersica, the same species as peach), not on peach: no peach friction coefficient was found (searched: 'peach coefficient of friction rubber steel', 'peach cultivars physical properties static coefficient of friction galvanized rubber plywood', 'peach bulk density porosity static friction angle'); kept as the nearest published figure, as the nectarine record keeps the peach steel-plate drop.",
@@ -236,9 +236,12 @@ export const STONE_FRUIT: SeedCommodity[] = [
             430,
             620,
             'from memory',
-            "No peach bulk density found (searched: 'peach bulk density physical properties'). Published neighbours: apricot 'Sonnati Salmas' 443 kg/m³, kiwifruit 'Hayward' 575 kg/m³.",
+            "No peach bulk density found (searched: 'peach bulk density physical properties', 'peach cultivars physical properties static coefficient of friction bulk density fruit density'). Published neighbours: apricot 'Sonnati Salmas' 443 kg/m³, kiwifruit 'Hayward' 575 kg/m³.",
           ),
-          typicalJanssenK(),
+          {
+            ...typicalJanssenK(),
+            note: `${typicalJanssenK().note} No angle of repose found for peach (searched: 'stone fruit angle of repose emptying filling peach apricot plum fruits', 'peach fruit physical properties coefficient of static friction angle of repose'); the typical ratio stays.`,
+          },
         ],
       },
       {
@@ -361,7 +364,7 @@ export const STONE_FRUIT: SeedCommodity[] = [
             30,
             250,
             'from memory',
-            "No nectarine static bruise pressure, bioyield or failure stress found (searched: 'nectarine bruise threshold', 'nectarine physical mechanical properties'). Taken as for peach.",
+            "No nectarine static bruise pressure, bioyield or failure stress found (searched: 'nectarine bruise threshold', 'nectarine physical mechanical properties', 'nectarine impact bruising threshold drop height cultivars', 'nectarine cultivar flesh Young's modulus compression'). Taken as for peach.",
           ),
           ...independenceFriction(
             "Measured on 'Independence'; the commodity record takes it as typical of nectarine.",
@@ -388,7 +391,10 @@ export const STONE_FRUIT: SeedCommodity[] = [
             'from memory',
             "No nectarine bulk density found (searched: 'nectarine bulk density'). As for peach.",
           ),
-          typicalJanssenK(),
+          {
+            ...typicalJanssenK(),
+            note: `${typicalJanssenK().note} No angle of repose found for nectarine (searched: 'stone fruit angle of repose emptying filling peach apricot plum fruits', 'nectarine fruit physical properties coefficient of static friction angle of repose'); the typical ratio stays.`,
+          },
         ],
       },
       {
@@ -488,7 +494,7 @@ export const STONE_FRUIT: SeedCommodity[] = [
             950,
             1150,
             'from memory',
-            "No plum density found (searched: 'plum fruit physical properties true density'). Whole watery fruit are close to water; stone fruit with a stone slightly above.",
+            "No plum density found (searched: 'plum fruit physical properties true density', 'plum physical properties true density bulk density porosity sphericity static friction', 'plum cultivars physical properties bulk density static coefficient of friction angle of repose'). Whole watery fruit are close to water; stone fruit with a stone slightly above.",
           ),
           {
             quantity: 'diameter',
@@ -523,7 +529,7 @@ export const STONE_FRUIT: SeedCommodity[] = [
             30,
             250,
             'from memory',
-            "No plum static bruise pressure found (searched: 'plum bruise threshold', 'plum rupture force modulus'). Plums are described as having low bruising susceptibility (Crisosto, Horticulturae 9:682, 2023, abstract); stored as for peach.",
+            "No plum static bruise pressure found (searched: 'plum bruise threshold', 'plum rupture force modulus', 'plum fruit bioyield point stress compression cultivar', 'plum impact bruising pendulum drop height bruise volume'). Plums are described as having low bruising susceptibility (Crisosto, Horticulturae 9:682, 2023, abstract); stored as for peach.",
           ),
           ...typicalFriction('plum', ''),
           tableDrop(
@@ -537,7 +543,7 @@ export const STONE_FRUIT: SeedCommodity[] = [
             50,
             300,
             'from memory',
-            "No plum drop onto steel found (searched: 'plum drop height bruise'). Plums bruise less than peaches (no minimum firmness needed at 10 cm onto a PVC belt for three of four cultivars), and peaches often bruise from 31 cm onto steel; 100 mm is stored. A recalled typical, not an observation.",
+            "No plum drop onto steel found (searched: 'plum drop height bruise', 'plum impact bruising pendulum drop height bruise volume cultivar'). Plums bruise less than peaches (no minimum firmness needed at 10 cm onto a PVC belt for three of four cultivars), and peaches often bruise from 31 cm onto steel; 100 mm is stored. A recalled typical, not an observation.",
           ),
           typical(
             'bulk_density',
@@ -546,9 +552,12 @@ export const STONE_FRUIT: SeedCommodity[] = [
             450,
             650,
             'from memory',
-            "No plum bulk density found (searched: 'plum bulk density'). Published neighbours: apricot 443, kiwifruit 575 kg/m³.",
+            "No plum bulk density found (searched: 'plum bulk density', 'plum physical properties true density bulk density porosity'). Published neighbours: apricot 443, kiwifruit 575 kg/m³.",
           ),
-          typicalJanssenK(),
+          {
+            ...typicalJanssenK(),
+            note: `${typicalJanssenK().note} No angle of repose found for plum (searched: 'stone fruit angle of repose emptying filling peach apricot plum fruits', 'plum fruit physical properties coefficient of static friction angle of repose'); the typical ratio stays.`,
+          },
         ],
       },
       ...(
@@ -677,7 +686,10 @@ export const STONE_FRUIT: SeedCommodity[] = [
             note: "Measured on 'Sonnati Salmas' at 82.34 % moisture (wet basis); porosity 52.87 %.",
             source: 'ahmadi-2009-apricot',
           },
-          typicalJanssenK(),
+          {
+            ...typicalJanssenK(),
+            note: `${typicalJanssenK().note} No angle of repose found for apricot (searched: 'stone fruit angle of repose emptying filling peach apricot plum fruits', 'apricot fruit physical properties coefficient of static friction angle of repose'); the typical ratio stays.`,
+          },
         ],
       },
       {
