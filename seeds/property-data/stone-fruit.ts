@@ -100,7 +100,7 @@ const VERGANO_STEEL: SeedValue = {
 };
 
 /**
- * The only peach modulus, Poisson's ratio and tissue stress read with their figures: a
+ * The only peach modulus and Poisson's ratio read with their figures: a
  * compression test of peach samples that fed a finite-element drop simulation (cultivar not named).
  */
 const PEACH_FE = (where: string): SeedValue[] => {
@@ -122,12 +122,6 @@ const PEACH_FE = (where: string): SeedValue[] => {
       value: 0.29,
       ...common,
       note: `Published Poisson's ratio 0.29, from the compression test. ${where} It replaces the typical 0.45 that finite-element studies commonly assume.`,
-    },
-    {
-      quantity: 'failure_stress',
-      value: 1190,
-      ...common,
-      note: `Published as a stress of 1.19 N/mm² (× 1000 = 1190 kPa) beside the maximum force of 59.6 N; read as the stress at the maximum force. Our reading: the abstract does not say how the stress was computed, and it is well above modulus × strain (0.89 MPa × 0.109 ≈ 0.097 MPa), so it is likely a contact stress rather than a bulk one. Not a no-bruise level. ${where}`,
     },
   ];
 };
@@ -204,7 +198,7 @@ export const STONE_FRUIT: SeedCommodity[] = [
             30,
             250,
             'from memory',
-            "No peach static bruise pressure, bioyield or failure stress found (searched: 'peach bruise threshold', 'Dixred peach rupture stress', 'peach failure stress bioyield kPa', 'peach fruit static compression bruise threshold pressure kPa', 'peach flesh bio-yield stress maturity', 'peach modulus of elasticity bioyield stress compression cultivar MPa', and in Chinese '桃 果肉 弹性模量 泊松比 屈服'). The finite-element peach study gives a stress of 1.19 MPa at the maximum force (stored as failure_stress), not a no-bruise level. Published only as forces: a 44 N load held 1 min bruised peaches (Vergano et al. 1991; no contact area given), and 'Dixred' peaches could be packed 13–16 layers deep at harvest but only 4–6 after 28 days at 0 °C (stone-tubitak-2003-dixred-peach). Stored near the apple figure (100 kPa); ripe peaches bruise far lower.",
+            "No peach static bruise pressure, bioyield or failure stress found (searched: 'peach bruise threshold', 'Dixred peach rupture stress', 'peach failure stress bioyield kPa', 'peach fruit static compression bruise threshold pressure kPa', 'peach flesh bio-yield stress maturity', 'peach modulus of elasticity bioyield stress compression cultivar MPa', and in Chinese '桃 果肉 弹性模量 泊松比 屈服'). The finite-element peach study's 1.19 MPa at the maximum force is likely a contact stress (not stored). Published only as forces: a 44 N load held 1 min bruised peaches (Vergano et al. 1991; no contact area given), and 'Dixred' peaches could be packed 13–16 layers deep at harvest but only 4–6 after 28 days at 0 °C (stone-tubitak-2003-dixred-peach). Stored near the apple figure (100 kPa); ripe peaches bruise far lower.",
           ),
           ...independenceFriction(
             "Measured on the nectarine 'Independence' (Prunus persica var. nucipersica, the same species as peach), not on peach: no peach friction coefficient was found (searched: 'peach coefficient of friction rubber steel', 'peach cultivars physical properties static coefficient of friction galvanized rubber plywood', 'peach bulk density porosity static friction angle'); kept as the nearest published figure, as the nectarine record keeps the peach steel-plate drop.",
