@@ -201,6 +201,28 @@ export interface CompressionTestsTable {
   created_at: Generated<Timestamp>;
 }
 
+/** migrations/20261206000100_relaxation_tests.ts: a held-deformation test and its Peleg fit. */
+export interface RelaxationTestsTable {
+  id: Generated<number>;
+  cultivar_id: number;
+  uploaded_by: number;
+  storage_key: string;
+  file_name: string;
+  rows: number;
+  deformation_mm: number;
+  specimen: string;
+  loading_rate: string | null;
+  temperature_c: number | null;
+  f0_n: number;
+  k1_s: number;
+  k2: number;
+  r2_linear: number;
+  r2_force: number;
+  is_demo: Generated<Bool>;
+  draft_revision_id: number | null;
+  created_at: Generated<Timestamp>;
+}
+
 export interface AssessmentsTable {
   id: Generated<number>;
   owner_id: number;
@@ -262,6 +284,7 @@ export interface Database {
   follows: FollowsTable;
   images: ImagesTable;
   compression_tests: CompressionTestsTable;
+  relaxation_tests: RelaxationTestsTable;
   assessments: AssessmentsTable;
   sessions: SessionsTable;
   grade_rules: GradeRulesTable;
