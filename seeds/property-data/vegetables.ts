@@ -44,6 +44,18 @@ export const VEGETABLES: SeedCommodity[] = [
           },
         ],
       },
+      // Searched 2026-12 for tomato (nothing storable found): 'tomato pericarp Young's modulus cultivar
+      // compression failure stress', 'Li tomato exocarp mesocarp locular gel elastic modulus failure stress values
+      // MPa' (J. Food Eng. 2012: only its reference list is stored), 'Babarinsa Ige Roma tomato bioyield stress'
+      // and 'Roma tomatoes stress at bioyield unripe half-ripe full-ripe' (only the first page of the IISTE paper
+      // is stored, its values are not in it), 'physical and mechanical properties of tomato fruits as related to
+      // robot's harvesting' (Trans. CSAE 2008: no values in the abstract; Cobra 26: failure forces 81.8 N pink,
+      // 50.3 N red, forces without a contact area), 'tomato fruit elastic modulus ranged from MPa whole fruit
+      // compression cultivar', 'Van linden tomato bruise susceptibility instrumented pendulum impact energy
+      // threshold', 'tomato fruit true density bulk density porosity coefficient of friction plywood galvanized
+      // values variety' (five Saudi varieties: no values in the abstract), 'tomato angle of repose degrees'. The
+      // deficit-irrigation study (Misr J. Agric. Eng.) gives maximum packing-box heights of 177–526 mm by water
+      // regime, a box depth rather than a stress or drop height, so not stored.
       {
         slug: 'tomato-type',
         name: 'Tomato (commodity record)',
@@ -254,9 +266,17 @@ export const VEGETABLES: SeedCommodity[] = [
             value: 0.099,
             source: CHERRY,
           },
-          typicalJanssenK(),
+          {
+            ...typicalJanssenK(),
+            note: `${typicalJanssenK().note} No angle of repose of cherry tomatoes was found to derive it from (searched 2026-12: 'cherry tomato physical properties static coefficient of friction rubber angle of repose bulk density cultivar', 'tomato angle of repose degrees physical properties fruits handling'); Polat et al. 2007 list no angle for 'Forme'.`,
+          },
         ],
       },
+      // Searched 2026-12 for cherry tomato (nothing storable found): 'cherry tomato mechanical properties
+      // cultivars rupture force firmness modulus of elasticity Kabas', 'cherry tomato physical properties static
+      // coefficient of friction rubber angle of repose bulk density cultivar'. The cherry-tomato peel studies
+      // (Matas et al. 2004, Inbred 10, Sweet 100, Sausalito Cocktail) are tensile tests of peels, with no values
+      // in the abstracts read.
       {
         slug: 'cherry-tomato-type',
         name: 'Cherry tomato (commodity record)',
@@ -472,6 +492,12 @@ export const VEGETABLES: SeedCommodity[] = [
             note: 'Published as the mean length.',
             source: SALEH,
           },
+          {
+            quantity: 'angle_of_repose',
+            value: 27.2,
+            note: 'Published as the mean angle of repose of Nicola tubers (27.20°); the abstract does not say whether by filling or emptying. Small Nigerian-grown tubers (width 37.3 mm).',
+            source: SALEH,
+          },
         ],
       },
       {
@@ -490,6 +516,12 @@ export const VEGETABLES: SeedCommodity[] = [
             variant: 'axial',
             value: 57.4,
             note: 'Published as the mean length.',
+            source: SALEH,
+          },
+          {
+            quantity: 'angle_of_repose',
+            value: 26.4,
+            note: 'Published as the mean angle of repose of Diamant tubers (26.40°); the abstract does not say whether by filling or emptying. Small Nigerian-grown tubers (width 35.2 mm).',
             source: SALEH,
           },
         ],
@@ -538,6 +570,10 @@ export const VEGETABLES: SeedCommodity[] = [
             note: 'Recalled, not re-read: about 0.45–0.49 from Finney & Hall 1967; the value is the middle.',
             source: 'finney-hall-1967',
           },
+          // Density: searched 2026-12 'potato tuber specific gravity typically ranges 1.06 1.10 Russet Burbank
+          // specific gravity extension' — Kleinkopf et al. 1987 (Am. Potato J. 64:579) give only the spread of
+          // specific gravity within a Russet Burbank field (up to 40 units of 0.001 among tubers), no mean; the
+          // WA DPIRD specific-gravity page and Idaho's Dr. Potato page give no figure in the part stored.
           typical(
             {
               quantity: 'density',
@@ -585,6 +621,20 @@ export const VEGETABLES: SeedCommodity[] = [
             note: "Measured on 'Ramos'; the commodity record takes it as typical of potato. Maximum impact stress, constant at 0.9 MPa once bruising had begun (critical-stress criterion). No static bruise threshold for potato was found; the Spunta study gives bioyield forces of 84.25–114.12 N and rupture forces of 100.90–139.78 N, forces without a contact area (veg-almady-2024-spunta), so not stored as stresses.",
             source: RAMOS,
           },
+          // Bioyield / failure stress and per-cultivar modulus: searched 2026-12 'Russet Burbank potato tissue
+          // modulus of elasticity failure stress', 'potato cultivars Young's modulus failure stress compression
+          // cylinders', 'Vivaldi Primura Young's modulus MPa Poisson's ratio' (Bentini et al., Biosyst. Eng. 104:25,
+          // 2009, and the 2008 Ragusa paper: E and ν of Vivaldi and Primura measured, no value in the abstract or
+          // the part stored), 'Baritelle Hyde potato tissue failure stress', 'Bajema Hyde dynamic failure potato',
+          // 'Mathew Hyde potato impact damage thresholds', 'Bintje potato Young's modulus bruise threshold',
+          // 'Acta Agrophysica potato modulus', 'potato Holland Favorita elastic modulus'. Read without a storable
+          // stress: Sadowska et al., Int. Agrophys. 18:347 (2004), cv. Irga, fracture stress and E in kPa, values
+          // not in the abstract; Yurtlu et al. 2012 (Elfe, Marabel, Orlo); Konstankiewicz 2001 (Danusia, Kuba,
+          // Triada); King Edward/Record fracture study; Schoorl & Holt, J. Texture Stud. 1983: whole Sebago and
+          // Pontiac tubers cracked between flat plates at a stored energy of about 1.6 J and 0.9 J (quasi-static,
+          // not an impact, so not stored as impact energy); Molema et al. 1997: repeated 0.3 J pendulum impacts
+          // raised discoloured volume (impactor surface not named, not stored); Gharibani et al. 2015 (Agria,
+          // Sabalan) and Almady et al. 2024 (Spunta) give forces only.
           typical(
             {
               quantity: 'bioyield_stress',
@@ -595,6 +645,11 @@ export const VEGETABLES: SeedCommodity[] = [
             },
             'from memory',
           ),
+          // Friction: searched 2026-12 'Schaper Yaeger coefficients of friction of Irish potatoes' (cited in the
+          // Writtle paper's references only), 'potato static coefficient of friction galvanized iron plywood rubber
+          // tubers cultivar values', 'Sante Marfona static coefficient of friction wood galvanized values' (Abedi
+          // et al. 2019: wood highest, galvanised sheet lowest, no values in the abstract), 'potato discrete
+          // element parameter calibration static friction coefficient steel' (no potato calibration stored).
           typical(
             {
               quantity: 'friction_coefficient',
@@ -668,16 +723,42 @@ export const VEGETABLES: SeedCommodity[] = [
             note: 'The study advises keeping drops of boxed potatoes below 15 cm, especially for the first layer of a pallet stack; bottom-layer tubers of boxes dropped onto concrete or a plastic slip read above 100 g. A box drop, not a bare tuber: for a loose tuber on concrete use the rigid-plate figure above.',
             source: 'veg-packaged-potato-ird',
           },
-          typical(
-            {
-              quantity: 'bulk_density',
-              value: 670,
-              low: 600,
-              high: 750,
-              note: `${POTATO_NOT_FOUND} The bin-load sources named in /work/shared/PROPERTY-SOURCES.md (Willson, USDA ARS 52-32, 1968; ASABE EP446) were not read. With a tuber density near 1080 kg/m³ and a void fraction of roughly 0.35–0.4, bulk density lies near 650–700 kg/m³.`,
-            },
-            'from memory',
-          ),
+          // Bulk density and angle of repose: searched 2026-12 'potato angle of repose bulk density tubers heap
+          // storage', 'aardappel loading density potatoes kg/m3 storage bulk', 'potato tubers angle of repose
+          // degrees physical properties' (Saleh & Awolola give the angle; the Agria and Sante/Marfona papers
+          // measure bulk density but print no value in the part stored; ASABE EP446 and Willson ARS 52-32 are
+          // stored only as their first pages, without the figures).
+          {
+            quantity: 'bulk_density',
+            value: 650,
+            method: 'Storage design figure for potatoes in bulk',
+            note: 'Published as "the weight of potatoes in bulk is about 650 kg/m3" (1000 t take 1538 m³); the same page gives a 2 m³ Dutch potato box as about 1300 kg, also 650 kg/m³. Two other storage pages agree within 3 % (below). Kept first: the only figure given as a bulk density outright. Replaces the typical 670 kg/m³ (2026-12).',
+            source: 'veg-potatobusiness-2018-storage-builders',
+          },
+          {
+            quantity: 'bulk_density',
+            value: 666.7,
+            note: 'Published as "one tonne of potatoes takes 1.5 m³" with 35 % of the pile voids; 1000 kg ÷ 1.5 m³ = 666.7 kg/m³. The same page notes pressure marks always form on bottom tubers of 3–5 m piles and advises piling ware potatoes no higher than 4 m, seed 3 m.',
+            source: 'veg-kiss-kartoffel-lagerung-14',
+          },
+          {
+            quantity: 'bulk_density',
+            value: 670,
+            note: 'The loading density of potatoes taken in a store-capacity example (20 m² × 3.5 m × 670 kg/m³ = 50 t).',
+            source: 'veg-aardappelpagina-stack-ventilation',
+          },
+          {
+            quantity: 'angle_of_repose',
+            value: 27.2,
+            note: "Measured on 'Nicola' (the only published figures found for the commodity, with 'Diamant' below); the commodity record takes it as typical of potato. Small Nigerian-grown tubers; the method (filling or emptying) is not stated in the abstract. The bin check derives its lateral pressure ratio from it.",
+            source: SALEH,
+          },
+          {
+            quantity: 'angle_of_repose',
+            value: 26.4,
+            note: "Measured on 'Diamant'; the second of the two published figures, 0.8° below Nicola's.",
+            source: SALEH,
+          },
         ],
       },
     ],
