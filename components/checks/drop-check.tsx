@@ -77,7 +77,7 @@ export function DropCheck({
         `${
           r?.margin?.basis === 'dynamic'
             ? `Published dynamic threshold: ${r.dynamic?.basis} (${r.dynamic?.source ?? 'no source'}) ÷ this drop.`
-            : 'Static threshold ÷ elastic Hertz peak pressure — far stricter than drop tests (see below).'
+            : 'Static threshold ÷ elastic Hertz peak pressure — an estimate, tested below against this fruit’s published drop figures.'
         }${r?.relation ? ` ${r.relation}` : ''}`
       }
       extras={(r) => <DropExtras result={r} />}

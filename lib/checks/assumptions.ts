@@ -9,6 +9,8 @@ export const ASSUMPTIONS: Record<string, string> = {
     'carrying the pressure over one fruit’s square (the harsher case); Hertz between two like spheres (K. L. Johnson, Contact ' +
     'Mechanics, 1985, ch. 4); static and elastic, no creep in storage and no transport vibration.',
   squeeze:
-    'Linear elastic, static, Coulomb friction at the pads, no relaxation of the flesh under a held grip; axisymmetric fruit squeezed ' +
-    'on its axis by two opposed pads.',
+    'Linear elastic, static, Coulomb friction at the pads; axisymmetric fruit squeezed on its axis by two opposed pads. A held grip ' +
+    "loses force as the flesh relaxes: with a published Peleg relaxation pair for the fruit the check follows it (Lee & Radok's " +
+    'correspondence for a held displacement); without one it assumes none and says so. Twist from an off-centre grip uses the ' +
+    "contacts' full-slip torsional friction (Lubkin 1951) and an elliptic force–torque limit.",
 };

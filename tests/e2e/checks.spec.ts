@@ -162,3 +162,31 @@ test("an admin adds the site's own grade rule, and engineers may judge by it", a
   expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
   await page.screenshot({ path: 'tests/artifacts/admin-grade-rules-390.png', fullPage: true });
 });
+
+test('how far to trust the checks: every check against its published outcomes, at 1280 and 390 px', async ({
+  page,
+  signInAs,
+}) => {
+  await signInAs('engineer');
+  await page.goto('/checks/drop');
+  await page.getByRole('link', { name: 'How far to trust the checks' }).click();
+  await expect(page.getByRole('heading', { name: 'How far to trust the checks' })).toBeVisible();
+  // The counts are the table's own; the seeded record gives rows for all three checks.
+  for (const check of ['squeeze', 'stack', 'drop'])
+    await expect(page.getByTestId(`calibration-count-${check}`)).toContainText(
+      /\d+ of \d+ published outcomes agree/,
+    );
+  // Disagreements stay in the table, in words.
+  await expect(page.getByRole('cell', { name: /disagrees/ }).first()).toBeVisible();
+  await expect(page.getByRole('cell', { name: /Wang, Wang & Wu 2024/ })).toBeVisible();
+  await page.screenshot({ path: 'tests/artifacts/calibration-1280.png', fullPage: true });
+  await page.setViewportSize({ width: 390, height: 844 });
+  await expect(page.getByTestId('calibration-count-drop')).toBeVisible();
+  await page.screenshot({ path: 'tests/artifacts/calibration-390.png', fullPage: true });
+});
+
+test('a buyer is refused the calibration page', async ({ page, signInAs }) => {
+  await signInAs('buyer');
+  const answer = await page.goto('/checks/calibration');
+  expect(answer?.status()).toBe(403);
+});

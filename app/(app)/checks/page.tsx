@@ -43,6 +43,12 @@ export default async function ChecksPage() {
           </li>
         ))}
       </ul>
+      <p className="mt-4 text-sm text-stone-700">
+        <Link href="/checks/calibration" className="text-leaf-700 underline">
+          How far to trust the checks
+        </Link>{' '}
+        — each check against the outcomes published for it.
+      </p>
     </section>
   );
 }

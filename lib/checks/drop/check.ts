@@ -46,6 +46,7 @@ function relationOf(
 }
 import type { DropResult } from './result';
 import { dynamicLimits } from './limits';
+import { judgeDrop } from '../calibration-rules';
 
 const round = (x: number, digits = 4) => Number(x.toPrecision(digits));
 
@@ -109,6 +110,36 @@ function safeHeights(
   });
 }
 
+/**
+ * Where the verdict rests on the estimate: how the same estimate fares on the surfaces where this
+ * fruit has a published drop figure (its own or its commodity's), judged as the calibration
+ * table judges it — so a reader sees at once whether the estimate is to be trusted for this fruit.
+ */
+function estimateCheck(heights: ReturnType<typeof safeHeights>, surface: DropSurface): string {
+  const tested = heights.filter(
+    (h) =>
+      h.surface !== surface &&
+      h.dynamic_safe_height_mm !== null &&
+      h.static_safe_height_mm !== null &&
+      (h.dynamic_rung === 'own' || h.dynamic_rung === 'commodity'),
+  );
+  if (tested.length === 0)
+    return ' This fruit has no published drop figure on any surface to test the estimate against: treat it as untested.';
+  const words = tested.map((h) => {
+    const observation = h.dynamic_upper_bound ? 'bruised-at' : 'no-bruise';
+    const judged = judgeDrop(observation, h.dynamic_safe_height_mm!, h.static_safe_height_mm!);
+    const ratio = round(h.static_safe_height_mm! / h.dynamic_safe_height_mm!, 2);
+    return {
+      agrees: judged.agrees,
+      text: `onto ${h.label.toLowerCase()} the estimate gives ${h.static_safe_height_mm} mm against the published ${h.dynamic_safe_height_mm} mm (${ratio}×; ${judged.agrees ? 'agrees' : 'disagrees'}: ${judged.rule})`,
+    };
+  });
+  const verdict = words.every((w) => w.agrees)
+    ? 'it agrees where it can be tested'
+    : 'it disagrees with the published record for this fruit, so do not rely on it here — test drops of the fruit instead';
+  return ` Tested on this fruit's published drop figures: ${words.map((w) => w.text).join('; ')} — ${verdict}.`;
+}
+
 /** Peak pressure and impact energy over a range of heights, for the chart. */
 function series(fruit: FruitSI, surface: ReturnType<typeof surfaceSI>, heightM: number) {
   const top = Math.max(1, 2 * heightM);
@@ -166,10 +197,11 @@ export async function runDropCheck(actor: Actor, raw: unknown): Promise<DropResu
   }
   if (!limits.length) {
     warnings.push(
-      `No published dynamic bruise threshold for a drop onto ${DROP_SURFACES[input.surface].label.toLowerCase()} for this fruit: the verdict below rests on the static threshold only, which is far stricter than drop tests.`,
+      `No published dynamic bruise threshold for a drop onto ${DROP_SURFACES[input.surface].label.toLowerCase()} for this fruit: the verdict below rests on the elastic estimate from the static threshold, which can be far stricter or far looser than drop tests (see how it fares on this fruit's published figures).`,
     );
   }
   const margin = dynamicMargin ?? staticMargin;
+  const heights = safeHeights(f, fruit, pad, limitsFor, bruiseLimit);
   const inputsUsed = {
     ...fruitUsed(f),
     height_mm: input.heightMm,
@@ -220,17 +252,13 @@ export async function runDropCheck(actor: Actor, raw: unknown): Promise<DropResu
             source: f.staticThresholdKpa!.source,
             rung: f.staticThresholdKpa!.rung,
           },
-    safe_heights: safeHeights(f, fruit, pad, limitsFor, bruiseLimit),
+    safe_heights: heights,
     bruise,
     within_tolerance_height_mm: withinM === null ? null : round(withinM * 1000),
     // Which figure the verdict rests on, and how the two relate, in one sentence.
-    relation: relationOf(
-      limits[0] ?? null,
-      bruise,
-      withinM,
-      heightM,
-      DROP_SURFACES[input.surface].label,
-    ),
+    relation:
+      relationOf(limits[0] ?? null, bruise, withinM, heightM, DROP_SURFACES[input.surface].label) +
+      (limits[0] || !bruise ? '' : estimateCheck(heights, input.surface)),
     series: series(fruit, surface, heightM),
     warnings,
     units: {
