@@ -24,6 +24,9 @@ const US: Record<string, { unit: string; factor: number }> = {
   J: { unit: 'ft·lbf', factor: LBF_N * 12 * IN_M },
   'm/s': { unit: 'ft/s', factor: 12 * IN_M },
   'N·m': { unit: 'lbf·in', factor: LBF_N * IN_M },
+  'mm³': { unit: 'in³', factor: (IN_M * 1000) ** 3 },
+  // 1 in³ per ft·lbf = 16 387.064 mm³ ÷ 1.3558179 J.
+  'mm³/J': { unit: 'in³/(ft·lbf)', factor: (IN_M * 1000) ** 3 / (LBF_N * 12 * IN_M) },
 };
 
 export function isUnitSystem(value: unknown): value is UnitSystem {

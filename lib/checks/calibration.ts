@@ -4,6 +4,7 @@ import type { Actor } from '@/lib/auth/actor';
 import { listPublishedCultivars } from '@/lib/data/cultivars';
 import { citationOf } from '@/lib/evidence/ladder';
 import { runDropCheck } from './drop/check';
+import { susceptibilityOf } from './drop/volume';
 import { resolveFruit } from './resolve-fruit';
 import { runStackCheck } from './stack/check';
 import { DROP_SURFACES } from './surfaces';
@@ -179,7 +180,60 @@ async function squeezeRows(actor: Actor): Promise<CalibrationRow[]> {
   ];
 }
 
+/**
+ * Bruise volumes published at an impact energy, against the drop check's volume from the
+ * fruit's first bruise susceptibility (V = BS · E). The stored susceptibility is one study's
+ * volume ÷ energy at its highest energy, so that point is left out: the rows are the points it
+ * was not made from.
+ */
+async function volumeRows(actor: Actor): Promise<CalibrationRow[]> {
+  const fruit = await resolveFruit(actor, { cultivar: 'strawberry-type' });
+  const bs = susceptibilityOf(fruit.evidence, DROP_SURFACES.steel.thresholdVariants, true);
+  if (!bs) return [];
+  const cases = [
+    {
+      what: "'Selva' and 'Gavita', lowest energy",
+      energy: 0.022,
+      volume: 46,
+      source: 'Aliasgarian Najafabadi et al.',
+    },
+    {
+      what: 'Florida cultivars, lowest energy',
+      energy: 0.04,
+      volume: 13,
+      source: 'Ferreira et al. 2008',
+    },
+    {
+      what: 'Florida cultivars, highest energy',
+      energy: 0.083,
+      volume: 91,
+      source: 'Ferreira et al. 2008',
+    },
+  ];
+  return cases.map((c) => {
+    const predicted = bs.value * c.energy;
+    return {
+      check: 'drop' as const,
+      case: `Strawberry bruise volume, ${c.what} (${c.energy} J)`,
+      source: c.source,
+      published: [{ value: c.volume, unit: 'mm³' }, ' bruised at ', { value: c.energy, unit: 'J' }],
+      predicted: [
+        { value: sig(predicted), unit: 'mm³' },
+        ` from ${bs.value} mm³/J (${bs.source ?? 'published'})`,
+      ],
+      ratio: sig(predicted / c.volume),
+      agrees: predicted / c.volume >= 0.5 && predicted / c.volume <= 2,
+      rule: 'within a factor of 2 of the published volume',
+    };
+  });
+}
+
 /** The whole table, drop rows first. */
 export async function calibrationTable(actor: Actor): Promise<CalibrationRow[]> {
-  return [...(await squeezeRows(actor)), ...(await stackRows(actor)), ...(await dropRows(actor))];
+  return [
+    ...(await squeezeRows(actor)),
+    ...(await stackRows(actor)),
+    ...(await dropRows(actor)),
+    ...(await volumeRows(actor)),
+  ];
 }

@@ -63,6 +63,12 @@ export const QUANTITIES = {
     variants: [''],
     hint: "Janssen's K",
   },
+  bruise_susceptibility: {
+    label: 'Bruise susceptibility (volume per impact energy)',
+    unit: 'mm³/J',
+    variants: 'surface-or-none',
+    hint: 'slope of bruise volume against impact energy; the onset energy of the same fit is an impact threshold (energy) of the same source',
+  },
   relaxation_k1: {
     label: 'Relaxation constant k₁ (Peleg)',
     unit: 's',
@@ -83,7 +89,12 @@ export const QUANTITIES = {
   },
 } as const satisfies Record<
   string,
-  { label: string; unit: string; variants: readonly string[] | 'surface' | 'probe'; hint: string }
+  {
+    label: string;
+    unit: string;
+    variants: readonly string[] | 'surface' | 'surface-or-none' | 'probe';
+    hint: string;
+  }
 >;
 
 export type Quantity = keyof typeof QUANTITIES;
@@ -172,7 +183,10 @@ export function isQuantity(value: unknown): value is Quantity {
 /** The variants a quantity accepts. */
 export function variantsOf(quantity: Quantity): readonly string[] {
   const v = QUANTITIES[quantity].variants;
-  return v === 'surface' ? SURFACES : v === 'probe' ? PROBES : v;
+  if (v === 'surface') return SURFACES;
+  // A surface only where the source names one (a pendulum's impactor often goes unnamed).
+  if (v === 'surface-or-none') return ['', ...SURFACES];
+  return v === 'probe' ? PROBES : v;
 }
 
 export const SOURCE_KINDS = [

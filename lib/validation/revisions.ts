@@ -27,6 +27,7 @@ const BOUNDS: Record<Quantity, { min: number; max: number; minOpen?: boolean; ma
     friction_coefficient: { min: 0, max: 5, minOpen: true },
     bulk_density: { min: 0, max: 3000, minOpen: true },
     lateral_pressure_ratio: { min: 0, max: 1, minOpen: true },
+    bruise_susceptibility: { min: 0, max: 1_000_000, minOpen: true },
     relaxation_k1: { min: 0, max: 1_000_000, minOpen: true },
     relaxation_k2: { min: 1, max: 1000 },
     angle_of_repose: { min: 0, max: 90, minOpen: true, maxOpen: true },

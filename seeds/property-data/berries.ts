@@ -94,6 +94,24 @@ export const BERRIES: SeedCommodity[] = [
         name: 'Strawberry (commodity record)',
         isType: true,
         values: [
+          {
+            quantity: 'bruise_susceptibility',
+            value: 1640,
+            low: 1640,
+            high: 2091,
+            method: "Pendulum impacts of 'Selva' and 'Gavita' fruit, impactor not named",
+            note: 'Bruise volume 46 → 134.5 mm³ as the impact energy rose 0.022 → 0.082 J; stored as volume ÷ energy, the usual definition of bruise susceptibility: 134.5 ÷ 0.082 = 1640 mm³/J at the highest energy (2091 at the lowest, the band). Of the two strawberry studies the harsher, so the check takes it first; the Florida study gives 1096 mm³/J at 0.083 J.',
+            source: 'aliasgarian-strawberry',
+          },
+          {
+            quantity: 'bruise_susceptibility',
+            value: 1096,
+            low: 325,
+            high: 1096,
+            method: 'Pendulum impacts of Florida cultivars, impactor not named',
+            note: 'Bruise volume 13 → 91 mm³ as the impact energy rose 0.040 → 0.083 J; stored as volume ÷ energy at the highest energy, 91 ÷ 0.083 = 1096 mm³/J (325 at 0.040 J, the band). About 1.5× below the Selva/Gavita study at 0.08 J.',
+            source: 'ferreira-2008-strawberry',
+          },
           typical(
             'youngs_modulus',
             'apparent',

@@ -110,6 +110,15 @@ export const PEAR: SeedCommodity = {
       isType: true,
       values: [
         {
+          quantity: 'bruise_susceptibility',
+          variant: 'rigid plate',
+          value: 3000,
+          method:
+            'Whole pears impacting a rigid plate, filmed at high speed; bruise volume against the energy the fruit absorbed',
+          note: 'Published as a bruise susceptibility that rises with impact speed and levels off at about 3 cm³/J (= 3000 mm³/J) at the highest speeds, for two cultivars; the levelled value is stored, the harsher one. It is per absorbed energy: the drop check applies it to the whole impact energy, which overstates the bruise (on the safe side).',
+          source: 'pome-stropek-golacki-2020-pear',
+        },
+        {
           quantity: 'youngs_modulus',
           variant: 'apparent',
           value: 1.68,

@@ -47,6 +47,7 @@ function relationOf(
 import type { DropResult } from './result';
 import { dynamicLimits } from './limits';
 import { judgeDrop } from '../calibration-rules';
+import { susceptibilityOf, volumeBruiseJson } from './volume';
 
 const round = (x: number, digits = 4) => Number(x.toPrecision(digits));
 
@@ -140,6 +141,29 @@ function estimateCheck(heights: ReturnType<typeof safeHeights>, surface: DropSur
   return ` Tested on this fruit's published drop figures: ${words.map((w) => w.text).join('; ')} — ${verdict}.`;
 }
 
+/** The bruise from the fruit's published bruise susceptibility for this surface, if it has one. */
+function volumeBruiseOf(
+  f: ResolvedFruit,
+  surface: DropSurface,
+  energyJ: number,
+  massKg: number,
+  limitM: number | null,
+) {
+  const drop = DROP_SURFACES[surface];
+  if (!('thresholdVariants' in drop) || surface === 'foam') return null;
+  const hard = surface === 'steel' || surface === 'hard plastic';
+  const bs = susceptibilityOf(f.evidence, drop.thresholdVariants, hard);
+  return bs ? volumeBruiseJson(bs, energyJ, massKg, limitM === null ? null : limitM * 1000) : null;
+}
+
+/** Which figures the verdict rests on when the bruise is sized from a published susceptibility. */
+function volumeRelation(v: ReturnType<typeof volumeBruiseJson>, limit: Limit | null): string {
+  const sized = `The bruise is sized from the published bruise susceptibility (${v.source ?? 'no source'}, ${v.susceptibility_mm3_j} mm³/J): ${v.impact_energy_j} J of impact energy leaves about ${v.volume_mm3} mm³, ${v.diameter_mm} mm across taken as ${v.shape}.`;
+  if (!limit)
+    return `${sized} No drop height is published for this surface, so the margin rests on the static threshold.`;
+  return `${sized} The margin rests on the drop figure ${limit.basis} (${limit.source ?? 'no source'}); the two come from different drop tests of the fruit.`;
+}
+
 /** Peak pressure and impact energy over a range of heights, for the chart. */
 function series(fruit: FruitSI, surface: ReturnType<typeof surfaceSI>, heightM: number) {
   const top = Math.max(1, 2 * heightM);
@@ -175,13 +199,20 @@ export async function runDropCheck(actor: Actor, raw: unknown): Promise<DropResu
   const grade = await chooseGradeRule(f.pinned?.commodityId ?? null, input.gradeRule);
   const rule = grade && ruleView(grade, f.pinned?.commodity ?? null);
   const thresholdPa = f.staticThresholdKpa ? f.staticThresholdKpa.value * 1000 : null;
-  const bruise =
-    thresholdPa === null
+  const bruiseLimit = rule ? bruiseRadiusLimit(rule) : null;
+  // A published bruise susceptibility (drop tests of the fruit) sizes the bruise before the
+  // elastic estimate from the static threshold does.
+  const volume = volumeBruiseOf(f, input.surface, impact.impactEnergy, fruit.mass, bruiseLimit);
+  const bruise = volume
+    ? judgeBruise(volume.diameter_mm / 2000, rule)
+    : thresholdPa === null
       ? null
       : judgeBruise(impactBruiseRadius(fruit, surface, impact.contactRadius, thresholdPa), rule);
-  const bruiseLimit = rule ? bruiseRadiusLimit(rule) : null;
-  const withinM =
-    thresholdPa !== null && bruiseLimit !== null
+  const withinM = volume
+    ? volume.within_tolerance_height_mm === null
+      ? null
+      : volume.within_tolerance_height_mm / 1000
+    : thresholdPa !== null && bruiseLimit !== null
       ? heightForBruise(fruit, surface, thresholdPa, bruiseLimit)
       : null;
   const warnings: string[] = [...f.warnings];
@@ -254,11 +285,18 @@ export async function runDropCheck(actor: Actor, raw: unknown): Promise<DropResu
           },
     safe_heights: heights,
     bruise,
+    bruise_volume: volume,
     within_tolerance_height_mm: withinM === null ? null : round(withinM * 1000),
     // Which figure the verdict rests on, and how the two relate, in one sentence.
-    relation:
-      relationOf(limits[0] ?? null, bruise, withinM, heightM, DROP_SURFACES[input.surface].label) +
-      (limits[0] || !bruise ? '' : estimateCheck(heights, input.surface)),
+    relation: volume
+      ? volumeRelation(volume, limits[0] ?? null)
+      : relationOf(
+          limits[0] ?? null,
+          bruise,
+          withinM,
+          heightM,
+          DROP_SURFACES[input.surface].label,
+        ) + (limits[0] || !bruise ? '' : estimateCheck(heights, input.surface)),
     series: series(fruit, surface, heightM),
     warnings,
     units: {

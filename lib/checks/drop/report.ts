@@ -30,21 +30,40 @@ export const dropDescriptor: CheckDescriptor<DropResult> = {
           text: r.dynamic ? undefined : 'none published for this surface',
         },
         {
-          label: 'Static margin (stricter)',
+          label: 'Static margin (elastic estimate)',
           value: r.static?.margin ?? null,
           unit: '–',
           text: r.static ? undefined : 'no static threshold',
         },
-        ...(r.bruise
+        ...(r.bruise_volume
           ? [
-              { label: 'Bruise from the Hertz field', value: r.bruise.diameter_mm, unit: 'mm' },
               {
-                label: 'Tallest drop within the grade (Hertz)',
+                label: 'Bruise susceptibility (published)',
+                value: r.bruise_volume.susceptibility_mm3_j,
+                unit: 'mm³/J',
+              },
+              { label: 'Bruise volume', value: r.bruise_volume.volume_mm3, unit: 'mm³' },
+              {
+                label: 'Bruise across (taken as a hemisphere)',
+                value: r.bruise_volume.diameter_mm,
+                unit: 'mm',
+              },
+              {
+                label: 'Tallest drop within the grade (susceptibility)',
                 value: r.within_tolerance_height_mm ?? null,
                 unit: 'mm',
               },
             ]
-          : []),
+          : r.bruise
+            ? [
+                { label: 'Bruise from the Hertz field', value: r.bruise.diameter_mm, unit: 'mm' },
+                {
+                  label: 'Tallest drop within the grade (Hertz)',
+                  value: r.within_tolerance_height_mm ?? null,
+                  unit: 'mm',
+                },
+              ]
+            : []),
       ],
       used: [...fruitUsedRows(u)],
       margin: r.margin,

@@ -72,6 +72,20 @@ export const dropResultSchema = z.object({
   ),
   /** The bruise the Hertz field predicts from the static threshold, against the grade rule. */
   bruise: bruiseSchema.nullable().optional(),
+  /** The bruise from a published bruise susceptibility (volume per impact energy), where one exists. */
+  bruise_volume: z
+    .object({
+      susceptibility_mm3_j: n,
+      source: z.string().nullable(),
+      rung: z.enum(RUNGS),
+      impact_energy_j: n,
+      volume_mm3: n,
+      diameter_mm: n,
+      within_tolerance_height_mm: nn,
+      shape: z.string(),
+    })
+    .nullable()
+    .optional(),
   /** Tallest drop onto this surface whose predicted bruise stays within the rule, mm. */
   within_tolerance_height_mm: nn.optional(),
   /** Which figure the verdict rests on, and how the published and predicted heights relate. */
