@@ -8,6 +8,15 @@ function PhraseText({ phrase }: { phrase: Phrase }) {
   return <>{phrase.map((p) => (typeof p === 'string' ? p : u.show(p.value, p.unit))).join('')}</>;
 }
 
+/** The agreement in words, shaded too (the words carry it, not the colour). */
+function Agreement({ row }: { row: CalibrationRow }) {
+  return (
+    <span className={row.agrees ? 'font-medium text-leaf-700' : 'font-medium text-red-700'}>
+      {row.agrees ? 'agrees' : 'disagrees'}
+    </span>
+  );
+}
+
 const CHECK_NAMES = { squeeze: 'Squeeze', stack: 'Stack', drop: 'Drop' } as const;
 
 /** The checks against the published record: every row with its rule, agreeing or not. */
@@ -36,8 +45,37 @@ export function CalibrationTable({ rows }: { rows: CalibrationRow[] }) {
       {checks.map((c) => (
         <section key={c} className="space-y-2">
           <h2 className="text-base font-semibold">{CHECK_NAMES[c]} check</h2>
-          <div className="overflow-x-auto rounded-lg border border-stone-200 bg-white">
-            <table className="w-full min-w-[40rem] text-left text-sm">
+          {/* Phones: one card per row, the agreement beside the case. */}
+          <ul className="space-y-2 sm:hidden">
+            {rows
+              .filter((r) => r.check === c)
+              .map((r, i) => (
+                <li key={i} className="rounded-lg border border-stone-200 bg-white p-3 text-sm">
+                  <p className="flex items-start justify-between gap-2">
+                    <span className="font-medium">{r.case}</span>
+                    <Agreement row={r} />
+                  </p>
+                  <p className="mt-1">
+                    <span className="text-stone-500">Published: </span>
+                    <PhraseText phrase={r.published} />{' '}
+                    <span className="text-xs text-stone-500">({r.source})</span>
+                  </p>
+                  <p className="mt-1">
+                    <span className="text-stone-500">The check predicts: </span>
+                    <PhraseText phrase={r.predicted} />
+                    {r.ratio === null ? null : (
+                      <span className="text-xs text-stone-500">
+                        {' '}
+                        — {r.ratio}× the published figure
+                      </span>
+                    )}
+                  </p>
+                  <p className="mt-1 text-xs text-stone-500">Judged: {r.rule}</p>
+                </li>
+              ))}
+          </ul>
+          <div className="hidden overflow-x-auto rounded-lg border border-stone-200 bg-white sm:block">
+            <table className="w-full text-left text-sm">
               <thead className="bg-stone-50 text-xs uppercase tracking-wide text-stone-600">
                 <tr>
                   <th className="px-3 py-2">Case</th>
@@ -65,13 +103,7 @@ export function CalibrationTable({ rows }: { rows: CalibrationRow[] }) {
                         )}
                       </td>
                       <td className="px-3 py-2">
-                        <span
-                          className={
-                            r.agrees ? 'font-medium text-leaf-700' : 'font-medium text-red-700'
-                          }
-                        >
-                          {r.agrees ? 'agrees' : 'disagrees'}
-                        </span>
+                        <Agreement row={r} />
                         <span className="block text-xs text-stone-500">{r.rule}</span>
                       </td>
                     </tr>

@@ -35,7 +35,7 @@ export function judgeDrop(
 export function judgeRange(value: number, low: number, high: number, widen: number): Judgement {
   return {
     agrees: value >= low * (1 - widen) && value <= high * (1 + widen),
-    rule: `within the published ${low}–${high}, widened by ${Math.round(widen * 100)} % either side`,
+    rule: `within the published range, widened by ${Math.round(widen * 100)} % either side`,
   };
 }
 
