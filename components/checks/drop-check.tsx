@@ -85,19 +85,19 @@ export function DropCheck({
   );
 }
 
-/** What only the drop check shows: the stricter static figure in words, and safe heights. */
+/** What only the drop check shows: the elastic estimate in words, and safe heights. */
 function DropExtras({ result }: { result: DropCheckResult }) {
   const { show } = useUnits();
   return (
     <>
       {result.static ? (
         <p className="text-sm text-stone-700">
-          Secondary, stricter figure: static threshold {show(result.static.threshold_kpa, 'kPa')} ÷
-          elastic peak pressure = margin <span className="num">{result.static.margin}</span>.
-          Elastic Hertz with the tissue&apos;s static strength ignores that flesh is stiffer and
-          stronger at impact rates, that the skin spreads the load and that bruising starts below
-          the surface; measured drop thresholds are far higher, so this figure is a conservative
-          bound, not the verdict.
+          Elastic estimate: static threshold {show(result.static.threshold_kpa, 'kPa')} ÷ elastic
+          peak pressure = margin <span className="num">{result.static.margin}</span>. Elastic Hertz
+          with the tissue&apos;s static strength ignores that flesh is stiffer and stronger at
+          impact rates, that the skin spreads the load and that bruising starts below the surface;
+          against published drop tests it has run both far below and well above them — see how far
+          to trust the checks.
         </p>
       ) : null}
       {result.relation ? (
@@ -122,7 +122,7 @@ function SafeHeights({ rows }: { rows: DropCheckResult['safe_heights'] }) {
           <tr>
             <th className="py-1 pr-2">Surface</th>
             <th className="py-1 pr-2">From the published drop threshold</th>
-            <th className="py-1 pr-2">No bruise, from the static threshold (elastic, stricter)</th>
+            <th className="py-1 pr-2">No bruise, elastic estimate from the static threshold</th>
             <th className="py-1">Bruise within the grade (Hertz field)</th>
           </tr>
         </thead>

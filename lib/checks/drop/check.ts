@@ -160,8 +160,10 @@ function volumeBruiseOf(
 function volumeRelation(v: ReturnType<typeof volumeBruiseJson>, limit: Limit | null): string {
   const sized = `The bruise is sized from the published bruise susceptibility (${v.source ?? 'no source'}, ${v.susceptibility_mm3_j} mm³/J): ${v.impact_energy_j} J of impact energy leaves about ${v.volume_mm3} mm³, ${v.diameter_mm} mm across taken as ${v.shape}.`;
   if (!limit)
-    return `${sized} No drop height is published for this surface, so the margin rests on the static threshold.`;
-  return `${sized} The margin rests on the drop figure ${limit.basis} (${limit.source ?? 'no source'}); the two come from different drop tests of the fruit.`;
+    return `${sized} No drop height is published for this surface, so the onset margin rests on the static threshold.`;
+  if (limit.rung === 'typical')
+    return `${sized} The onset margin rests on a typical drop figure, ${limit.basis} (${limit.source ?? 'typical'}), not a test of this fruit: the bruise size above is the stronger evidence.`;
+  return `${sized} The onset margin rests on the drop figure ${limit.basis} (${limit.source ?? 'no source'}); the two come from different drop tests of the fruit.`;
 }
 
 /** Peak pressure and impact energy over a range of heights, for the chart. */

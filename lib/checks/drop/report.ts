@@ -68,8 +68,9 @@ export const dropDescriptor: CheckDescriptor<DropResult> = {
       used: [...fruitUsedRows(u)],
       margin: r.margin,
       restsOn: r.evidence?.rests_on ?? null,
-      // A published drop figure outranks the estimate: the bruise verdict leads only without one.
-      bruise: r.margin?.basis === 'dynamic' ? null : (r.bruise ?? null),
+      // A published drop figure outranks the elastic estimate: that bruise verdict leads only
+      // without one. A bruise sized from a published susceptibility (drop tests) always leads.
+      bruise: r.bruise_volume || r.margin?.basis !== 'dynamic' ? (r.bruise ?? null) : null,
       relation: r.relation ?? null,
       charts: [
         {
