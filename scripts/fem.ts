@@ -7,6 +7,7 @@
 import { parseArgs } from 'node:util';
 import { FemConvergenceError, FemInputError, runSqueeze, squeezeResultJson } from '../fem';
 import type { MeshLevel, SqueezeInput, SqueezeResultJson } from '../fem';
+import { helpText, wantsHelp } from './cli-help';
 
 type NumberField = Exclude<
   keyof SqueezeInput,
@@ -162,6 +163,10 @@ const joinNegatives = (argv: string[]) =>
   );
 
 function main(argv: string[]): number {
+  if (wantsHelp(argv)) {
+    process.stdout.write(helpText());
+    return 0;
+  }
   let values: Values = {};
   try {
     const parsed = parseArgs({
@@ -172,7 +177,7 @@ function main(argv: string[]): number {
     });
     values = parsed.values;
     if (parsed.positionals.length !== 1 || parsed.positionals[0] !== 'squeeze') {
-      throw new UsageError('usage: tenderline squeeze [options] [--json]');
+      throw new UsageError('usage: tenderline squeeze [options] [--json] (--help lists them)');
     }
     const data = squeezeResultJson(runSqueeze(toInput(values)));
     process.stdout.write((values.json ? JSON.stringify(data, null, 2) : pretty(data)) + '\n');
