@@ -1,77 +1,70 @@
 import { fileError } from './decode';
 
-/** Which cells of a row hold the curve; other columns (time, say) are carried but not read. */
-export interface CurveColumns {
-  displacement: number;
-  force: number;
-  /** a display name per column, for messages */
-  names: string[];
+/** What a lab file's header must name: its quantities, each with the one unit it is read in. */
+export interface HeaderSpec<Q extends string> {
+  /** header words (lower case) and the quantity each names */
+  words: Record<string, Q>;
+  /** per quantity, in the order columns are checked and read: its unit and accepted spellings */
+  units: Record<Q, { unit: string; spellings: string[] }>;
+  /** a header the messages offer as a model */
+  example: string;
 }
 
-const QUANTITY_NAMES: Record<string, 'displacement' | 'force'> = {
-  displacement: 'displacement',
-  deformation: 'displacement',
-  deflection: 'displacement',
-  travel: 'displacement',
-  force: 'force',
-  load: 'force',
+/** Which cell of a row holds each quantity; other columns are carried but not read. */
+export type Columns<Q extends string> = Record<Q, number> & {
+  /** a display name per column, for messages */
+  names: string[];
 };
 
-const UNITS: Record<'displacement' | 'force', { unit: string; spellings: string[] }> = {
-  displacement: {
-    unit: 'mm',
-    spellings: ['mm', 'millimetre', 'millimetres', 'millimeter', 'millimeters'],
-  },
-  force: { unit: 'N', spellings: ['n', 'newton', 'newtons'] },
-};
-
-const EXAMPLE = 'e.g. displacement_mm,force_n or displacement (mm),force (N)';
-
-// "displacement_mm", "displacement mm", "displacement/mm", "Displacement (mm)", "force [N]".
+// "force_n", "force n", "force/n", "Force (N)", "force [N]", and likewise for every quantity.
 const HEADER_CELL =
   /^([a-z]+)\s*(?:\(\s*([^)]*?)\s*\)|\[\s*([^\]]*?)\s*\]|[_/ ]\s*([^\s()[\]]+))?$/i;
 
-function readCell(cell: string) {
+function readCell<Q extends string>(cell: string, spec: HeaderSpec<Q>) {
   const m = HEADER_CELL.exec(cell.trim());
   if (!m) return null;
-  const quantity = QUANTITY_NAMES[m[1].toLowerCase()];
+  const quantity = spec.words[m[1].toLowerCase()];
   if (!quantity) return null;
   return { quantity, unit: m[2] ?? m[3] ?? m[4] ?? null };
 }
 
-function unitProblem(quantity: 'displacement' | 'force', unit: string | null): string | null {
-  const { unit: wanted, spellings } = UNITS[quantity];
+// A unit other than the one named is refused rather than converted: a unit guessed wrong moves
+// the fit by a factor, and the lab's own export can be set to the unit asked for.
+function unitProblem<Q extends string>(spec: HeaderSpec<Q>, quantity: Q, unit: string | null) {
+  const { unit: wanted, spellings } = spec.units[quantity];
   if (unit === null || unit === '') {
-    return `the ${quantity} column names no unit; write the header with units, ${EXAMPLE}`;
+    return `the ${quantity} column names no unit; write the header with units, ${spec.example}`;
   }
   if (spellings.includes(unit.toLowerCase())) return null;
   return `${quantity} is in '${unit.slice(0, 20)}'; give it in ${wanted}`;
 }
 
-/** Find the displacement (mm) and force (N) columns in row 1, or refuse with why. */
-export function readHeader(cells: string[]): CurveColumns {
+/** Find each quantity's column, in its unit, in row 1, or refuse with why. */
+export function readUnitHeader<Q extends string>(cells: string[], spec: HeaderSpec<Q>): Columns<Q> {
   if (cells.every((c) => /^[-+.\d\s eE]*$/.test(c))) {
-    throw fileError(`row 1: the first row must be a header naming columns and units, ${EXAMPLE}`);
+    throw fileError(
+      `row 1: the first row must be a header naming columns and units, ${spec.example}`,
+    );
   }
-  const found: Partial<Record<'displacement' | 'force', number>> = {};
+  const found: Partial<Record<Q, number>> = {};
   const names = cells.map((c) => c || 'an unnamed column');
   cells.forEach((cell, i) => {
-    const read = readCell(cell);
+    const read = readCell(cell, spec);
     if (!read) return;
     if (found[read.quantity] !== undefined) {
       throw fileError(
         `row 1: two ${read.quantity} columns (${found[read.quantity]! + 1} and ${i + 1})`,
       );
     }
-    const problem = unitProblem(read.quantity, read.unit);
+    const problem = unitProblem(spec, read.quantity, read.unit);
     if (problem) throw fileError(`row 1: ${problem}`);
     found[read.quantity] = i;
     names[i] = read.quantity;
   });
-  for (const quantity of ['displacement', 'force'] as const) {
+  for (const quantity of Object.keys(spec.units) as Q[]) {
     if (found[quantity] === undefined) {
-      throw fileError(`row 1: the header has no ${quantity} column with its unit, ${EXAMPLE}`);
+      throw fileError(`row 1: the header has no ${quantity} column with its unit, ${spec.example}`);
     }
   }
-  return { displacement: found.displacement!, force: found.force!, names };
+  return { ...(found as Record<Q, number>), names };
 }

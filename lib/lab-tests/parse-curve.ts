@@ -1,7 +1,6 @@
-import { assertNoFormula, delimiterOf, parseNumberCell, splitCells } from './cells';
-import { decodeCsvBytes, fileError } from './decode';
-import { readHeader } from './header';
-import { MAX_DATA_ROWS, groupDigits } from './limits';
+import { readCsvRows } from './csv-rows';
+import { fileError } from './decode';
+import type { HeaderSpec } from './header';
 
 /** One reading: total plate travel in mm, plate force in N. */
 export interface CurvePoint {
@@ -14,6 +13,26 @@ export interface ParsedCurve {
   /** data rows read (the header and blank lines not counted) */
   rows: number;
 }
+
+// "displacement_mm", "displacement mm", "displacement/mm", "Displacement (mm)", "force [N]".
+const CURVE_HEADER: HeaderSpec<'displacement' | 'force'> = {
+  words: {
+    displacement: 'displacement',
+    deformation: 'displacement',
+    deflection: 'displacement',
+    travel: 'displacement',
+    force: 'force',
+    load: 'force',
+  },
+  units: {
+    displacement: {
+      unit: 'mm',
+      spellings: ['mm', 'millimetre', 'millimetres', 'millimeter', 'millimeters'],
+    },
+    force: { unit: 'N', spellings: ['n', 'newton', 'newtons'] },
+  },
+  example: 'e.g. displacement_mm,force_n or displacement (mm),force (N)',
+};
 
 const fmt = (x: number) => String(Number(x.toPrecision(6)));
 
@@ -40,40 +59,19 @@ function checkSigns(point: CurvePoint, row: number): void {
  * N) into its loading curve. Every refusal names its row (1-based, the header is row 1).
  */
 export function parseCompressionCsv(bytes: Uint8Array): ParsedCurve {
-  const lines = decodeCsvBytes(bytes).split(/\r\n|\n|\r/);
-  const delimiter = delimiterOf(lines[0]);
-  const headerCells = splitCells(lines[0], delimiter, 1);
-  assertNoFormula(headerCells, headerCells, 1);
-  const columns = readHeader(headerCells);
-  const points: CurvePoint[] = [];
-  for (let i = 1; i < lines.length; i++) {
-    const row = i + 1;
-    if (lines[i].trim() === '') continue;
-    if (points.length === MAX_DATA_ROWS) {
-      throw fileError(
-        `row ${row}: the file has more than ${groupDigits(MAX_DATA_ROWS)} data rows; at most ${groupDigits(MAX_DATA_ROWS)} are accepted`,
-      );
-    }
-    const cells = splitCells(lines[i], delimiter, row);
-    assertNoFormula(cells, columns.names, row);
-    if (cells.length !== headerCells.length) {
-      throw fileError(
-        `row ${row}: ${cells.length} cells, but the header has ${headerCells.length}`,
-      );
-    }
-    const point = {
-      displacementMm: parseNumberCell(cells[columns.displacement], 'displacement', row),
-      forceN: parseNumberCell(cells[columns.force], 'force', row),
-    };
-    checkSigns(point, row);
-    const previous = points.at(-1);
-    if (previous && !(point.displacementMm > previous.displacementMm)) {
-      throw fileError(
-        `row ${row}: displacement ${fmt(point.displacementMm)} mm does not increase on the row before (${fmt(previous.displacementMm)} mm); give the loading part only, displacement strictly increasing`,
-      );
-    }
-    points.push(point);
-  }
-  if (points.length === 0) throw fileError('row 2: the file has a header but no data rows');
+  const points = readCsvRows(
+    bytes,
+    CURVE_HEADER,
+    (values, row, previous: CurvePoint | undefined) => {
+      const point = { displacementMm: values.displacement, forceN: values.force };
+      checkSigns(point, row);
+      if (previous && !(point.displacementMm > previous.displacementMm)) {
+        throw fileError(
+          `row ${row}: displacement ${fmt(point.displacementMm)} mm does not increase on the row before (${fmt(previous.displacementMm)} mm); give the loading part only, displacement strictly increasing`,
+        );
+      }
+      return point;
+    },
+  );
   return { points, rows: points.length };
 }

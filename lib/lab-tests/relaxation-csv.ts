@@ -1,7 +1,6 @@
-import { assertNoFormula, delimiterOf, parseNumberCell, splitCells } from './cells';
-import { decodeCsvBytes, fileError } from './decode';
-import { MAX_DATA_ROWS, groupDigits } from './limits';
-import { readRelaxationHeader } from './relaxation-header';
+import { readCsvRows } from './csv-rows';
+import { fileError } from './decode';
+import type { HeaderSpec } from './header';
 
 /** One reading of a held deformation: time since the end of loading in s, plate force in N. */
 export interface RelaxationReading {
@@ -14,6 +13,18 @@ export interface ParsedRelaxation {
   /** data rows read (the header and blank lines not counted) */
   rows: number;
 }
+
+// "time_s", "time s", "time/s", "Time (s)", "force [N]" — the spellings the compression header
+// takes. A time in ms or min is refused rather than converted: a unit guessed wrong moves k₁ a
+// thousand or sixty times, and the lab's own export can be set to seconds.
+const RELAXATION_HEADER: HeaderSpec<'time' | 'force'> = {
+  words: { time: 'time', t: 'time', force: 'force', load: 'force' },
+  units: {
+    time: { unit: 's', spellings: ['s', 'sec', 'secs', 'second', 'seconds'] },
+    force: { unit: 'N', spellings: ['n', 'newton', 'newtons'] },
+  },
+  example: 'e.g. time_s,force_n or time (s),force (N)',
+};
 
 const fmt = (x: number) => String(Number(x.toPrecision(6)));
 
@@ -49,34 +60,14 @@ function checkReading(
  * row at t = 0, the end of loading). Every refusal names its row (1-based, the header is row 1).
  */
 export function parseRelaxationCsv(bytes: Uint8Array): ParsedRelaxation {
-  const lines = decodeCsvBytes(bytes).split(/\r\n|\n|\r/);
-  const delimiter = delimiterOf(lines[0]);
-  const headerCells = splitCells(lines[0], delimiter, 1);
-  assertNoFormula(headerCells, headerCells, 1);
-  const columns = readRelaxationHeader(headerCells);
-  const readings: RelaxationReading[] = [];
-  for (let i = 1; i < lines.length; i++) {
-    const row = i + 1;
-    if (lines[i].trim() === '') continue;
-    if (readings.length === MAX_DATA_ROWS) {
-      throw fileError(
-        `row ${row}: the file has more than ${groupDigits(MAX_DATA_ROWS)} data rows; at most ${groupDigits(MAX_DATA_ROWS)} are accepted`,
-      );
-    }
-    const cells = splitCells(lines[i], delimiter, row);
-    assertNoFormula(cells, columns.names, row);
-    if (cells.length !== headerCells.length) {
-      throw fileError(
-        `row ${row}: ${cells.length} cells, but the header has ${headerCells.length}`,
-      );
-    }
-    const reading = {
-      timeS: parseNumberCell(cells[columns.time], 'time', row),
-      forceN: parseNumberCell(cells[columns.force], 'force', row),
-    };
-    checkReading(reading, readings.at(-1), row);
-    readings.push(reading);
-  }
-  if (readings.length === 0) throw fileError('row 2: the file has a header but no data rows');
+  const readings = readCsvRows(
+    bytes,
+    RELAXATION_HEADER,
+    (values, row, previous: RelaxationReading | undefined) => {
+      const reading = { timeS: values.time, forceN: values.force };
+      checkReading(reading, previous, row);
+      return reading;
+    },
+  );
   return { readings, rows: readings.length };
 }
