@@ -180,13 +180,20 @@ export interface ImagesTable {
   created_at: Generated<Timestamp>;
 }
 
-export interface CompressionTestsTable {
+/** The columns every uploaded lab test has: whose file, for which cultivar, and its draft. */
+export interface UploadedTestColumns {
   id: Generated<number>;
   cultivar_id: number;
   uploaded_by: number;
   storage_key: string;
   file_name: string;
   rows: number;
+  is_demo: Generated<Bool>;
+  draft_revision_id: number | null;
+  created_at: Generated<Timestamp>;
+}
+
+export interface CompressionTestsTable extends UploadedTestColumns {
   diameter_mm: number | null;
   radius1_mm: number | null;
   radius2_mm: number | null;
@@ -196,19 +203,10 @@ export interface CompressionTestsTable {
   fit_from_mm: number;
   fit_to_mm: number;
   note: string | null;
-  is_demo: Generated<Bool>;
-  draft_revision_id: number | null;
-  created_at: Generated<Timestamp>;
 }
 
 /** migrations/20261206000100_relaxation_tests.ts: a held-deformation test and its Peleg fit. */
-export interface RelaxationTestsTable {
-  id: Generated<number>;
-  cultivar_id: number;
-  uploaded_by: number;
-  storage_key: string;
-  file_name: string;
-  rows: number;
+export interface RelaxationTestsTable extends UploadedTestColumns {
   deformation_mm: number;
   specimen: string;
   loading_rate: string | null;
@@ -218,9 +216,6 @@ export interface RelaxationTestsTable {
   k2: number;
   r2_linear: number;
   r2_force: number;
-  is_demo: Generated<Bool>;
-  draft_revision_id: number | null;
-  created_at: Generated<Timestamp>;
 }
 
 export interface AssessmentsTable {

@@ -2,21 +2,26 @@ import 'server-only';
 import { db } from '@/lib/db';
 import { typed } from '@/lib/db-kysely';
 import type { Actor } from '@/lib/auth/actor';
+import type { TestSource, UploadedTestFacts } from '@/lib/lab-tests/test-source';
+import type { RevisionValue } from '@/lib/properties/records';
+import type { RevisionValueInput } from '@/lib/validation/revisions';
 import { recordAudit } from '@/lib/audit-trail';
+import { getRevision } from './cultivars';
+import { createDraft, updateDraft } from './revisions';
+import type { TestKind, UploadedTestRecord } from './uploaded-tests';
 
-/** A source row a lab upload cites, as lib/lab-tests builds it. */
-export interface TestSource {
-  key: string;
-  kind: 'report' | 'demo';
-  authors: string;
-  year: number;
-  title: string;
-  venue: string;
-  note: string | null;
+/** The facts every test's source is written from. */
+export function uploadedFacts(test: UploadedTestRecord): UploadedTestFacts {
+  return {
+    id: test.id,
+    createdAt: test.createdAt,
+    uploaderName: test.uploadedBy.name,
+    isDemo: test.isDemo,
+  };
 }
 
 /** The test's source, created once (with its audit row) and reused by later drafts. */
-export async function ensureTestSource(
+async function ensureTestSource(
   actor: Actor,
   source: TestSource,
   detail: Record<string, unknown>,
@@ -35,7 +40,7 @@ export async function ensureTestSource(
 }
 
 /** The draft recorded on a test, if it is still this actor's and still editable. */
-export async function openDraftOf(actor: Actor, draftRevisionId: number | null) {
+async function openDraftOf(actor: Actor, draftRevisionId: number | null) {
   if (draftRevisionId === null) return null;
   const row = await typed()
     .selectFrom('property_revisions')
@@ -51,7 +56,7 @@ export async function openDraftOf(actor: Actor, draftRevisionId: number | null) 
  * Remove a draft this actor just made. createDraft and updateDraft each commit on their own; if a
  * later step fails, the new draft goes again so no half-made draft is left behind.
  */
-export async function discardDraft(actor: Actor, id: number, reason: string): Promise<void> {
+async function discardDraft(actor: Actor, id: number, reason: string): Promise<void> {
   await db.transaction(async (trx) => {
     const mine = trx('property_revisions').where({ id, author_id: actor.id, status: 'draft' });
     if (!(await mine.clone().first())) return;
@@ -65,4 +70,53 @@ export async function discardDraft(actor: Actor, id: number, reason: string): Pr
       detail: { reason },
     });
   });
+}
+
+/** What a draft from one test holds, as the test's kind makes it. */
+export interface TestDraft {
+  source: TestSource;
+  /** added to the source's audit detail, naming the test */
+  sourceDetail: Record<string, unknown>;
+  summary: string;
+  /** the draft's values from the published ones: the test's added, or replacing its earlier */
+  values: (published: RevisionValue[]) => RevisionValueInput[];
+  /** the audit reason when a failed start discards the new draft */
+  discardReason: string;
+}
+
+/**
+ * Start a draft revision of the test's cultivar holding `draft.values`, citing the test's source,
+ * and record it on the test. An editable draft already made from the test by the same actor is
+ * reused (created: false). The caller has checked the actor may read tests and edit revisions.
+ */
+export async function startDraftFromTest(
+  actor: Actor,
+  kind: TestKind,
+  test: UploadedTestRecord,
+  draft: TestDraft,
+): Promise<{ revisionId: number; created: boolean }> {
+  const open = await openDraftOf(actor, test.draftRevisionId);
+  if (open !== null) return { revisionId: open, created: false };
+  await ensureTestSource(actor, draft.source, draft.sourceDetail);
+  const revision = await createDraft(actor, test.cultivar.slug, draft.summary);
+  try {
+    const { values } = await getRevision(actor, revision.id);
+    await updateDraft(actor, revision.id, { summary: draft.summary, values: draft.values(values) });
+    await db.transaction(async (trx) => {
+      await trx(kind.table).where({ id: test.id }).update({ draft_revision_id: revision.id });
+      await recordAudit(trx, {
+        actorId: actor.id,
+        action: kind.draftAction,
+        entity: kind.entity,
+        entityId: test.id,
+        detail: { revision: revision.id, cultivar: test.cultivar.slug },
+      });
+    });
+  } catch (error) {
+    await discardDraft(actor, revision.id, draft.discardReason).catch((e) =>
+      console.error(`could not discard draft ${revision.id}`, e),
+    );
+    throw error;
+  }
+  return { revisionId: revision.id, created: true };
 }

@@ -1,15 +1,12 @@
 import type { RevisionValue } from '@/lib/properties/records';
 import type { RevisionValueInput } from '@/lib/validation/revisions';
 import { FIT_STRAIN } from './limits';
+import { uploadedTestSource, type UploadedTestFacts } from './test-source';
 
 export const LAB_TEST_METHOD = 'Parallel-plate compression, Hertz fit (ASAE S368)';
 
 /** What the draft needs to know about a stored test. */
-export interface LabTestFacts {
-  id: number;
-  createdAt: string;
-  uploaderName: string;
-  isDemo: boolean;
+export interface LabTestFacts extends UploadedTestFacts {
   modulusMpa: number;
   rSquared: number;
   fitFromMm: number;
@@ -24,16 +21,11 @@ const sig = (x: number, n = 3) => String(Number(x.toPrecision(n)));
 
 /** The source a draft value cites: one per test, a report (demo for demo uploads). */
 export function labTestSource(test: LabTestFacts) {
-  const date = test.createdAt.slice(0, 10);
-  return {
-    key: `lab-test-${test.id}`,
-    kind: test.isDemo ? ('demo' as const) : ('report' as const),
-    authors: test.uploaderName,
-    year: Number(date.slice(0, 4)),
-    title: `In-house compression test #${test.id}, ${date}, uploaded by ${test.uploaderName}`,
-    venue: 'Tenderline lab-test upload',
-    note: test.isDemo ? 'Demo upload: invented curve, not a measurement.' : null,
-  };
+  return uploadedTestSource(test, {
+    prefix: 'lab-test',
+    what: 'compression test',
+    invented: 'curve',
+  });
 }
 
 function fitNote(test: LabTestFacts): string {

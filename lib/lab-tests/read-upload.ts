@@ -1,5 +1,10 @@
+import { z } from 'zod';
 import { ValidationError } from '@/lib/errors';
 import { readBytes } from '@/lib/http/body';
+import { slugSchema } from '@/lib/validation/cultivars';
+import { formObject } from '@/lib/validation/form';
+import { parseInput } from '@/lib/validation/parse';
+import { UPLOAD_BODY_LIMIT } from './limits';
 
 /**
  * A multipart body read with a hard limit whatever Content-Length said (a chunked upload declares
@@ -29,4 +34,16 @@ export async function uploadedFile(form: FormData, field = 'file') {
   // Control characters are dropped: the name is shown, never used as a storage key.
   const fileName = name.replace(/[\u0000-\u001f\u007f]/g, '').slice(0, 200) || 'upload.csv';
   return { fileName, bytes: new Uint8Array(await file.arrayBuffer()) };
+}
+
+/** A `[slug]` route's cultivar, a bad one refused under `cultivar` as the upload form names it. */
+export async function cultivarSlugOf(params: Promise<{ slug: string }>): Promise<string> {
+  return parseInput(z.object({ cultivar: slugSchema }), { cultivar: (await params).slug }).cultivar;
+}
+
+/** A lab-test upload as the data layer takes it: the file, its name and the form's text fields. */
+export async function readTestUpload(request: Request, cultivarSlug: string) {
+  const form = await readUploadForm(request, UPLOAD_BODY_LIMIT);
+  const { fileName, bytes } = await uploadedFile(form);
+  return { cultivarSlug, fileName, bytes, fields: formObject(form) };
 }

@@ -1,15 +1,12 @@
 import type { RevisionValue } from '@/lib/properties/records';
 import type { RevisionValueInput } from '@/lib/validation/revisions';
 import { toValueInput } from './draft-value';
+import { uploadedTestSource, type UploadedTestFacts } from './test-source';
 
 export const RELAXATION_METHOD = 'Stress relaxation at held deformation, Peleg fit';
 
 /** What the draft needs to know about a stored relaxation test. */
-export interface RelaxationTestFacts {
-  id: number;
-  createdAt: string;
-  uploaderName: string;
-  isDemo: boolean;
+export interface RelaxationTestFacts extends UploadedTestFacts {
   k1S: number;
   k2: number;
   f0N: number;
@@ -30,16 +27,11 @@ const sig = (x: number, n = 3) => String(Number(x.toPrecision(n)));
  * source, so they must never be split between two. A report, or 'demo' for the demo file.
  */
 export function relaxationTestSource(test: RelaxationTestFacts) {
-  const date = test.createdAt.slice(0, 10);
-  return {
-    key: `relax-test-${test.id}`,
-    kind: test.isDemo ? ('demo' as const) : ('report' as const),
-    authors: test.uploaderName,
-    year: Number(date.slice(0, 4)),
-    title: `In-house stress-relaxation test #${test.id}, ${date}, uploaded by ${test.uploaderName}`,
-    venue: 'Tenderline lab-test upload',
-    note: test.isDemo ? 'Demo upload: invented readings, not a measurement.' : null,
-  };
+  return uploadedTestSource(test, {
+    prefix: 'relax-test',
+    what: 'stress-relaxation test',
+    invented: 'readings',
+  });
 }
 
 function fitNote(test: RelaxationTestFacts): string {

@@ -1,23 +1,18 @@
 import { NextResponse } from 'next/server';
-import { z } from 'zod';
 import { requireActor } from '@/lib/auth/session';
 import { createRelaxationTest, listRelaxationTests } from '@/lib/data/relaxation-tests';
 import { handle } from '@/lib/http/handler';
 import { UPLOAD_BODY_LIMIT } from '@/lib/lab-tests/limits';
-import { readUploadForm, uploadedFile } from '@/lib/lab-tests/read-upload';
-import { formObject } from '@/lib/validation/form';
-import { parseInput } from '@/lib/validation/parse';
-import { slugSchema } from '@/lib/validation/cultivars';
+import { cultivarSlugOf, readTestUpload } from '@/lib/lab-tests/read-upload';
 
 type Context = { params: Promise<{ slug: string }> };
-const slugOf = async (context: Context) =>
-  parseInput(z.object({ cultivar: slugSchema }), { cultivar: (await context.params).slug })
-    .cultivar;
 
 /** The cultivar's relaxation tests, newest first. */
 export const GET = handle(async (_request, context: Context) => {
   const actor = await requireActor('lab-tests:upload');
-  const tests = await listRelaxationTests(actor, { cultivarSlug: await slugOf(context) });
+  const tests = await listRelaxationTests(actor, {
+    cultivarSlug: await cultivarSlugOf(context.params),
+  });
   return NextResponse.json({ tests });
 });
 
@@ -29,15 +24,8 @@ export const GET = handle(async (_request, context: Context) => {
 export const POST = handle(
   async (request, context: Context) => {
     const actor = await requireActor('lab-tests:upload');
-    const cultivarSlug = await slugOf(context);
-    const form = await readUploadForm(request, UPLOAD_BODY_LIMIT);
-    const { fileName, bytes } = await uploadedFile(form);
-    const { id, isDemo, fit } = await createRelaxationTest(actor, {
-      cultivarSlug,
-      fileName,
-      bytes,
-      fields: formObject(form),
-    });
+    const upload = await readTestUpload(request, await cultivarSlugOf(context.params));
+    const { id, isDemo, fit } = await createRelaxationTest(actor, upload);
     return NextResponse.json({ test: { id, isDemo, fit } }, { status: 201 });
   },
   { accept: ['multipart/form-data'], maxBodyBytes: UPLOAD_BODY_LIMIT },
