@@ -2,7 +2,7 @@ import { expect, test } from '@playwright/test';
 import { ACCOUNTS, signIn, signOut } from './helpers';
 import { inviteByApi, latestLinkTo } from './invitation-helpers';
 
-test('an admin invites a buyer, who accepts through the e-mailed link and signs in', async ({
+test('an admin invites a buyer, who accepts through the e-mailed link and is signed in', async ({
   page,
 }) => {
   const buyerEmail = `visiting.qa.${Date.now()}@orchardbuyer.example`;
@@ -23,6 +23,8 @@ test('an admin invites a buyer, who accepts through the e-mailed link and signs 
   const body = await message.getByTestId('outbox-body').innerText();
   const link = body.match(/https?:\/\/\S+\/invite\/[A-Za-z0-9_-]+/)?.[0];
   expect(link, 'invitation link in the e-mail').toBeTruthy();
+  // The outbox shows the address as a link that opens it.
+  await expect(message.getByRole('link', { name: link! })).toHaveAttribute('href', link!);
   await signOut(page);
 
   // The link hands its token to the accept page and leaves the address bar.
@@ -32,7 +34,11 @@ test('an admin invites a buyer, who accepts through the e-mailed link and signs 
   await page.getByLabel('Password', { exact: true }).fill('a-long-buyer-password');
   await page.getByLabel('Repeat password').fill('a-long-buyer-password');
   await page.getByRole('button', { name: 'Create account' }).click();
-  await expect(page.getByTestId('form-success')).toContainText('is ready');
+  // Signed in straight away: the buyer's home, no second sign-in with the new password.
+  await expect(page).toHaveURL(/\/$/);
+  await expect(page.getByTestId('area-nav').getByRole('link')).toHaveText(['Atlas', 'Properties']);
+  await expect(page.getByText('Visiting QA (buyer)')).toBeVisible();
+  await signOut(page);
 
   // The link is single use: 410 Gone, in plain words.
   const used = await page.goto(link!);

@@ -1,4 +1,5 @@
 import { AdminTabs } from '@/components/admin/admin-tabs';
+import { MailBody } from '@/components/admin/mail-body';
 import { PageTitle } from '@/components/ui/page-title';
 import { requirePageActor } from '@/lib/auth/session';
 import { listOutbox } from '@/lib/data/outbox';
@@ -33,12 +34,7 @@ export default async function OutboxPage() {
             <p className="text-xs text-stone-500 wrap-anywhere">
               from {m.from} to {m.to}
             </p>
-            <pre
-              className="mt-2 whitespace-pre-wrap wrap-anywhere text-sm text-stone-800"
-              data-testid="outbox-body"
-            >
-              {m.text}
-            </pre>
+            <MailBody text={m.text} />
           </li>
         ))}
       </ul>
