@@ -1,9 +1,13 @@
 'use server';
 
 import { revalidatePath } from 'next/cache';
+import { cookies } from 'next/headers';
+import { redirect } from 'next/navigation';
+import { signInThisBrowser } from '@/lib/auth/browser-session';
 import { requireActor } from '@/lib/auth/session';
 import { resendInvitation, revokeInvitation } from '@/lib/data/invitation-admin';
 import { acceptInvitation, createInvitation, INVITATION_DAYS } from '@/lib/data/invitations';
+import { LINK_COOKIE, linkCookieOptions } from '@/lib/invitations/link-cookie';
 import { formObject } from '@/lib/validation/form';
 import { invitationIdFormSchema } from '@/lib/validation/invitations';
 import { parseInput } from '@/lib/validation/parse';
@@ -60,15 +64,31 @@ export async function resendInvitationAction(
   });
 }
 
-/** Public: the invitation link's form. The token travels in a hidden field. */
+/**
+ * Public: the invitation link's form. The token travels in a hidden field. Accepting signs this
+ * browser in (lib/auth/browser-session.ts) and opens the home page; the link's cookie is cleared.
+ */
 export async function acceptInvitationAction(
   _prev: ActionState,
   form: FormData,
 ): Promise<ActionState> {
   const values = formObject(form);
+  let signedIn = false;
   const state = await runAction(async () => {
     const result = await acceptInvitation(values.token, values);
-    return `Your account ${result.email} is ready. Sign in with your new password.`;
+    try {
+      await signInThisBrowser({ id: result.userId, email: result.email }, 'invitation');
+      signedIn = true;
+    } catch (error) {
+      // The account stands either way; the sign-in page still opens it.
+      console.error('[invitation] the new account could not be signed in', error);
+    }
+    (await cookies()).set(LINK_COOKIE, '', { ...linkCookieOptions(), maxAge: 0 });
+    return signedIn
+      ? `Your account ${result.email} is ready and you are signed in.`
+      : `Your account ${result.email} is ready. Sign in with your new password.`;
   });
+  // Straight into the product, signed in: no second sign-in right after choosing the password.
+  if (state.ok && signedIn) redirect('/');
   return keepValues(state, { name: values.name ?? '' });
 }
