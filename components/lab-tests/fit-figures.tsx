@@ -1,20 +1,10 @@
 import type { LabTestWithData } from '@/lib/data/lab-tests';
 import { FIT_STRAIN } from '@/lib/lab-tests/limits';
+import { Figure } from './figure';
 import { dateText, geometryText, rangeText, sig } from './format';
 
 /** R² below this means the readings leave the Hertz law inside the fitted range. */
 const WEAK_FIT = 0.95;
-
-function Figure({ label, value, testId }: { label: string; value: string; testId: string }) {
-  return (
-    <div className="rounded-md border border-stone-200 bg-white px-3 py-2">
-      <dt className="text-xs text-stone-500">{label}</dt>
-      <dd className="num text-lg font-semibold text-stone-900" data-testid={testId}>
-        {value}
-      </dd>
-    </div>
-  );
-}
 
 /** The headline result of a test and what it was computed from. */
 export function FitFigures({ test }: { test: LabTestWithData }) {

@@ -1,28 +1,17 @@
 'use client';
 
-import Link from 'next/link';
 import { useUnits } from '@/components/units/units-provider';
 import type { RelaxationTestRecord } from '@/lib/data/relaxation-tests';
 import type { RelaxationPlot } from '@/lib/lab-tests/relaxation-plot';
-import { DraftFromTestButton } from './draft-from-test-button';
+import { Figure } from './figure';
 import { dateText, sig } from './format';
 import { RelaxationChart } from './relaxation-chart';
+import { TestDraftPanel } from './test-draft-panel';
 
 /** R² of the force curve below this means the readings leave Peleg's form. */
 const WEAK_FIT = 0.95;
 
 const percent = (share: number) => `${sig(share * 100)} %`;
-
-function Figure({ label, value, testId }: { label: string; value: string; testId: string }) {
-  return (
-    <div className="rounded-md border border-stone-200 bg-white px-3 py-2">
-      <dt className="text-xs text-stone-500">{label}</dt>
-      <dd className="num text-lg font-semibold text-stone-900" data-testid={testId}>
-        {value}
-      </dd>
-    </div>
-  );
-}
 
 function conditions(test: RelaxationTestRecord): string {
   const parts = [test.specimen];
@@ -108,24 +97,12 @@ export function RelaxationResult({
         {test.uploadedBy.name} on {dateText(test.createdAt)}.
       </p>
       {canDraft ? (
-        <div className="space-y-2">
-          {test.draftRevisionId ? (
-            <p className="text-sm text-stone-600">
-              A draft was started from this test:{' '}
-              <Link
-                href={`/editor/revisions/${test.draftRevisionId}`}
-                className="text-leaf-700 underline underline-offset-2"
-              >
-                open that draft
-              </Link>
-              .
-            </p>
-          ) : null}
-          <DraftFromTestButton
-            endpoint={`/api/relaxation-tests/${test.id}/draft`}
-            label="Start a draft"
-          />
-        </div>
+        <TestDraftPanel
+          draftRevisionId={test.draftRevisionId}
+          startedFrom="test"
+          endpoint={`/api/relaxation-tests/${test.id}/draft`}
+          label="Start a draft"
+        />
       ) : null}
     </section>
   );

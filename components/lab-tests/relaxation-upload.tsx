@@ -1,12 +1,10 @@
 'use client';
 
-import { useRouter } from 'next/navigation';
-import { useState, type FormEvent, type InputHTMLAttributes } from 'react';
-import { Button } from '@/components/ui/button';
+import type { InputHTMLAttributes } from 'react';
 import { FieldFrame } from '@/components/ui/field-frame';
-import { FormMessage } from '@/components/ui/form-message';
 import { RELAXATION_SPECIMENS } from '@/lib/lab-tests/relaxation-schema';
-import { uploadAnswer, type UploadErrors } from './upload-answer';
+import { TestUploadForm } from './test-upload-form';
+import type { UploadErrors } from './upload-answer';
 
 const SELECT =
   'block w-full rounded-md border border-stone-300 bg-white px-2 py-1.5 text-sm aria-invalid:border-red-500';
@@ -14,7 +12,8 @@ const INPUT =
   'block w-full rounded-md border border-stone-300 bg-white px-3 py-1.5 text-sm shadow-sm focus:border-leaf-600 focus:outline-none focus:ring-1 focus:ring-leaf-600 aria-invalid:border-red-500';
 
 // The compression form shares the page, so ids take a prefix; the names are the route's fields.
-const id = (name: string) => `relax-${name}`;
+const PREFIX = 'relax-';
+const id = (name: string) => `${PREFIX}${name}`;
 
 function Input({
   label,
@@ -37,114 +36,68 @@ function Input({
 
 /** Upload a relaxation-test CSV for a cultivar; errors appear beside their fields. */
 export function RelaxationUpload({ cultivars }: { cultivars: { slug: string; label: string }[] }) {
-  const router = useRouter();
-  const [pending, setPending] = useState(false);
-  const [errors, setErrors] = useState<UploadErrors>({});
-  const [message, setMessage] = useState<string>();
-
-  async function submit(event: FormEvent<HTMLFormElement>) {
-    event.preventDefault();
-    const element = event.currentTarget;
-    const form = new FormData(element);
-    const slug = String(form.get('cultivar') ?? '');
-    form.delete('cultivar');
-    if (!slug) {
-      setErrors({ cultivar: ['Choose the cultivar the sample belongs to.'] });
-      setMessage('Some fields are not valid.');
-      return;
-    }
-    setPending(true);
-    setMessage(undefined);
-    try {
-      const response = await fetch(`/api/cultivars/${encodeURIComponent(slug)}/relaxation-tests`, {
-        method: 'POST',
-        body: form,
-      });
-      const answer = await uploadAnswer(response);
-      if (answer.id !== null) {
-        element.reset();
-        setErrors({});
-        router.push(`/editor/lab-tests?relaxation=${answer.id}#relaxation-result`);
-      } else {
-        setErrors(answer.errors);
-        setMessage(answer.message);
-      }
-    } catch {
-      setErrors({});
-      setMessage('The upload did not reach the server; check the connection and try again.');
-    }
-    setPending(false);
-  }
-
   return (
-    <form
-      onSubmit={submit}
-      className="max-w-xl space-y-3"
-      data-testid="relaxation-upload"
-      noValidate
+    <TestUploadForm
+      cultivars={cultivars}
+      idPrefix={PREFIX}
+      cultivarLabel="Fruit and variety"
+      route="relaxation-tests"
+      resultHref={(testId) => `/editor/lab-tests?relaxation=${testId}#relaxation-result`}
+      staysOnPage
+      testId="relaxation-upload"
+      submitLabel="Fit the relaxation test"
+      pendingLabel="Fitting…"
     >
-      <FieldFrame id={id('cultivar')} label="Fruit and variety" errors={errors.cultivar}>
-        {(control) => (
-          <select {...control} name="cultivar" defaultValue="" className={SELECT}>
-            <option value="">Choose a cultivar…</option>
-            {cultivars.map((c) => (
-              <option key={c.slug} value={c.slug}>
-                {c.label}
-              </option>
-            ))}
-          </select>
-        )}
-      </FieldFrame>
-      <FieldFrame id={id('specimen')} label="Specimen" errors={errors.specimen}>
-        {(control) => (
-          <select
-            {...control}
-            name="specimen"
-            defaultValue={RELAXATION_SPECIMENS[0]}
-            className={SELECT}
-          >
-            {RELAXATION_SPECIMENS.map((s) => (
-              <option key={s} value={s}>
-                {s.charAt(0).toUpperCase() + s.slice(1)}
-              </option>
-            ))}
-          </select>
-        )}
-      </FieldFrame>
-      <Input
-        label="Held plate travel (mm)"
-        name="deformationMm"
-        inputMode="decimal"
-        hint="The deformation the plates held during the readings, above 0 and at most 100 mm."
-        errors={errors}
-      />
-      <div className="grid gap-3 sm:grid-cols-2">
-        <Input
-          label="Loading rate (optional)"
-          name="loadingRate"
-          hint="As the lab gives it, e.g. 20 mm/min."
-          errors={errors}
-        />
-        <Input
-          label="Test temperature (°C, optional)"
-          name="temperatureC"
-          inputMode="decimal"
-          hint="From −5 to 50 °C."
-          errors={errors}
-        />
-      </div>
-      <Input
-        label="Relaxation readings (CSV)"
-        name="file"
-        type="file"
-        accept=".csv,text/csv"
-        hint="Header naming units, e.g. time_s,force_n; the first row at t = 0 s, the end of loading; at most 2 MB and 50 000 rows."
-        errors={errors}
-      />
-      <FormMessage tone="error" message={message} />
-      <Button type="submit" disabled={pending} aria-busy={pending}>
-        {pending ? 'Fitting…' : 'Fit the relaxation test'}
-      </Button>
-    </form>
+      {(errors) => (
+        <>
+          <FieldFrame id={id('specimen')} label="Specimen" errors={errors.specimen}>
+            {(control) => (
+              <select
+                {...control}
+                name="specimen"
+                defaultValue={RELAXATION_SPECIMENS[0]}
+                className={SELECT}
+              >
+                {RELAXATION_SPECIMENS.map((s) => (
+                  <option key={s} value={s}>
+                    {s.charAt(0).toUpperCase() + s.slice(1)}
+                  </option>
+                ))}
+              </select>
+            )}
+          </FieldFrame>
+          <Input
+            label="Held plate travel (mm)"
+            name="deformationMm"
+            inputMode="decimal"
+            hint="The deformation the plates held during the readings, above 0 and at most 100 mm."
+            errors={errors}
+          />
+          <div className="grid gap-3 sm:grid-cols-2">
+            <Input
+              label="Loading rate (optional)"
+              name="loadingRate"
+              hint="As the lab gives it, e.g. 20 mm/min."
+              errors={errors}
+            />
+            <Input
+              label="Test temperature (°C, optional)"
+              name="temperatureC"
+              inputMode="decimal"
+              hint="From −5 to 50 °C."
+              errors={errors}
+            />
+          </div>
+          <Input
+            label="Relaxation readings (CSV)"
+            name="file"
+            type="file"
+            accept=".csv,text/csv"
+            hint="Header naming units, e.g. time_s,force_n; the first row at t = 0 s, the end of loading; at most 2 MB and 50 000 rows."
+            errors={errors}
+          />
+        </>
+      )}
+    </TestUploadForm>
   );
 }

@@ -2,7 +2,7 @@ import Link from 'next/link';
 import { notFound } from 'next/navigation';
 import { CurveChart } from '@/components/lab-tests/curve-chart';
 import { FitFigures } from '@/components/lab-tests/fit-figures';
-import { StartDraftButton } from '@/components/lab-tests/start-draft-button';
+import { TestDraftPanel } from '@/components/lab-tests/test-draft-panel';
 import { PageTitle } from '@/components/ui/page-title';
 import { can } from '@/lib/auth/roles';
 import { requirePageActor } from '@/lib/auth/session';
@@ -47,21 +47,12 @@ export default async function LabTestPage({ params }: { params: Promise<{ id: st
         </p>
       )}
       {can(actor.role, 'revisions:edit') ? (
-        <div className="space-y-2">
-          {test.draftRevisionId ? (
-            <p className="text-sm text-stone-600">
-              A draft was started from this result:{' '}
-              <Link
-                href={`/editor/revisions/${test.draftRevisionId}`}
-                className="text-leaf-700 underline underline-offset-2"
-              >
-                open that draft
-              </Link>
-              .
-            </p>
-          ) : null}
-          <StartDraftButton testId={test.id} />
-        </div>
+        <TestDraftPanel
+          draftRevisionId={test.draftRevisionId}
+          startedFrom="result"
+          endpoint={`/api/lab-tests/${test.id}/draft`}
+          label="Start a draft from this result"
+        />
       ) : null}
     </section>
   );
