@@ -2,7 +2,6 @@
 
 import {
   CartesianGrid,
-  Legend,
   Line,
   LineChart,
   ReferenceLine,
@@ -31,6 +30,8 @@ export function ChartFrame({ spec, testId }: { spec: ChartSpec; testId?: string 
       data-testid={testId ?? `chart-${spec.id}`}
     >
       <figcaption className="px-1 text-sm font-medium">{spec.title}</figcaption>
+      {/* The y axis's title above the plot, level: a rotated title was clipped on short plots. */}
+      <p className="px-1 text-xs text-stone-600">{label(spec.y)}</p>
       <div className="h-64 w-full">
         <ResponsiveContainer width="100%" height="100%">
           <LineChart margin={{ top: 8, right: 12, bottom: 22, left: 4 }}>
@@ -43,18 +44,8 @@ export function ChartFrame({ spec, testId }: { spec: ChartSpec; testId?: string 
               allowDuplicatedCategory={false}
               label={{ value: label(spec.x), position: 'insideBottom', offset: -10 }}
             />
-            <YAxis
-              width={64}
-              tickFormatter={tick}
-              label={{
-                value: label(spec.y),
-                angle: -90,
-                position: 'insideLeft',
-                style: { textAnchor: 'middle' },
-              }}
-            />
+            <YAxis width={52} tickFormatter={tick} />
             <Tooltip formatter={(v) => tick(Number(v))} labelFormatter={(v) => tick(Number(v))} />
-            <Legend verticalAlign="top" />
             {spec.series.map((s, i) => (
               <Line
                 key={s.label}
@@ -80,12 +71,33 @@ export function ChartFrame({ spec, testId }: { spec: ChartSpec; testId?: string 
                 // A threshold line is drawn even when the curves stay below it.
                 ifOverflow="extendDomain"
                 strokeDasharray="4 4"
-                label={m.label}
+                // Beside the line, not over it: right of a vertical line, above a level one.
+                label={{
+                  value: m.label,
+                  position: m.x !== undefined ? 'right' : 'insideBottomRight',
+                  fontSize: 11,
+                  fill: '#44403c',
+                }}
               />
             ))}
           </LineChart>
         </ResponsiveContainer>
       </div>
+      {/* The series named below the plot, wrapping as the width asks (many on a comparison). */}
+      {spec.series.length > 0 ? (
+        <ul className="flex flex-wrap gap-x-3 gap-y-0.5 px-1 text-xs text-stone-700">
+          {spec.series.map((s, i) => (
+            <li key={s.label} className="flex items-center gap-1">
+              <span
+                aria-hidden
+                className="inline-block h-0.5 w-4"
+                style={{ background: COLOURS[i % COLOURS.length] }}
+              />
+              {s.label}
+            </li>
+          ))}
+        </ul>
+      ) : null}
     </figure>
   );
 }

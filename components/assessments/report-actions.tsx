@@ -5,7 +5,16 @@ import { useState } from 'react';
 import { Button } from '@/components/ui/button';
 
 /** Print, downloads, and a re-run on today's data when a newer revision exists. */
-export function ReportActions({ id, canRerun }: { id: number; canRerun: boolean }) {
+export function ReportActions({
+  id,
+  canRerun,
+  openHref,
+}: {
+  id: number;
+  canRerun: boolean;
+  /** The check's page holding this assessment's inputs, to adjust them there. */
+  openHref: string;
+}) {
   const router = useRouter();
   const [state, setState] = useState<{ pending?: boolean; error?: string }>({});
   async function rerun() {
@@ -24,6 +33,12 @@ export function ReportActions({ id, canRerun }: { id: number; canRerun: boolean 
       <Button type="button" variant="secondary" onClick={() => window.print()}>
         Print
       </Button>
+      <a
+        href={openHref}
+        className="rounded-md border border-stone-300 bg-white px-3 py-1.5 text-sm font-medium"
+      >
+        Open in the check
+      </a>
       <a
         href={`/api/assessments/${id}/report`}
         className="rounded-md border border-stone-300 bg-white px-3 py-1.5 text-sm font-medium"

@@ -3,7 +3,7 @@ import { CheckWarnings, UsedValues } from '@/components/checks/used-values';
 import type { CheckReport, Figure } from '@/lib/checks/report';
 import { ChartFrame } from './chart-frame';
 
-function FigureValue({ f }: { f: Figure }) {
+export function FigureValue({ f }: { f: Figure }) {
   if (f.value === null) return <>{f.text ?? '—'}</>;
   return (
     <>

@@ -2,10 +2,10 @@
 
 import type { ReactNode } from 'react';
 import { ChartFrame } from '@/components/assessments/chart-frame';
-import { FigureGrid } from '@/components/assessments/report-results';
+import { FigureGrid, FigureValue } from '@/components/assessments/report-results';
 import type { CheckDescriptor } from '@/lib/checks/report';
 import type { CheckNameValue } from '@/lib/validation/check-names';
-import { MarginPanel } from './margin-panel';
+import { BRUISE_HEADLINE, MarginPanel } from './margin-panel';
 import { SaveAssessment } from './save-assessment';
 import type { CheckState } from './use-check';
 import { CheckWarnings, UsedValues } from './used-values';
@@ -41,8 +41,34 @@ export function CheckWorkbench<R>({
 }) {
   const { result, pending } = state;
   const report = result ? descriptor.report(result) : null;
+  const lead = report?.figures[0] ?? null;
   return (
     <div className="grid gap-6 lg:grid-cols-[minmax(0,20rem)_minmax(0,1fr)]">
+      {/* The answer where the eye is: a slim bar that stays in view while the inputs change. */}
+      <div
+        className="sticky top-0 z-20 -mx-1 flex flex-wrap items-baseline gap-x-4 gap-y-1 rounded-md border border-stone-300 bg-white/95 px-3 py-2 text-sm shadow-sm backdrop-blur lg:col-span-2"
+        data-testid="result-bar"
+        aria-live="polite"
+      >
+        {pending ? <span className="text-stone-500">Working…</span> : null}
+        {report?.margin ? (
+          <span>
+            Margin <span className="num font-semibold">{report.margin.value}</span> ·{' '}
+            {report.margin.verdict}
+          </span>
+        ) : (
+          <span className="text-stone-500">{result ? 'No margin' : 'No result yet'}</span>
+        )}
+        {report?.bruise ? <span>{BRUISE_HEADLINE[report.bruise.verdict]}</span> : null}
+        {lead ? (
+          <span>
+            {lead.label}:{' '}
+            <span className="num">
+              <FigureValue f={lead} />
+            </span>
+          </span>
+        ) : null}
+      </div>
       {form}
       <div className="min-w-0 space-y-5">
         <MarginPanel

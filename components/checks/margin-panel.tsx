@@ -7,7 +7,7 @@ const BRUISE_TONE: Record<BruiseView['verdict'], string> = {
   'beyond tolerance': 'border-red-600 bg-red-50 text-red-900',
 };
 
-const BRUISE_HEADLINE: Record<BruiseView['verdict'], string> = {
+export const BRUISE_HEADLINE: Record<BruiseView['verdict'], string> = {
   'no bruise': 'no bruise',
   'within tolerance': "bruise within the grade's tolerance",
   'beyond tolerance': 'bruise beyond tolerance',

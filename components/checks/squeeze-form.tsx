@@ -22,8 +22,14 @@ const GRIP: readonly FieldSpec[] = [
   ['accelerationMs2', 'Peak acceleration of the move', 'upward, beyond gravity'],
   ['horizontalAccelerationMs2', 'Sideways acceleration of the move', 'square to the pad axis'],
   ['gripOffsetMm', 'Grip offset from the centre of mass', 'pad axis to the centre; 0: centred'],
-  ['maxTravelMm', 'Maximum travel per pad', 'at most 15 % of the axial radius'],
   ['holdSeconds', 'Hold time', 'the transfer, as the flesh relaxes; empty: not held'],
+];
+const ADVANCED: readonly FieldSpec[] = [
+  [
+    'maxTravelMm',
+    'Maximum travel per pad',
+    "empty: 5 % of the fruit's radius along the squeeze; at most 15 %",
+  ],
 ];
 const FACING: readonly FieldSpec[] = [
   ['facingModulusMpa', 'Facing modulus'],
@@ -92,6 +98,12 @@ export function SqueezeForm(p: SqueezeFormProps) {
           </p>
         </div>
         {p.facing === 'custom' ? <MeasureFields fields={FACING} state={state} /> : null}
+        <details className="rounded-md border border-stone-200 p-2" data-testid="squeeze-advanced">
+          <summary className="cursor-pointer text-sm font-medium">Advanced model settings</summary>
+          <div className="mt-2">
+            <MeasureFields fields={ADVANCED} state={state} />
+          </div>
+        </details>
       </fieldset>
       <FruitFieldset fields={FRUIT} state={state} option={option} />
       <CheckFormError message={p.message} />

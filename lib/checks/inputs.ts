@@ -111,7 +111,8 @@ export const squeezeCheckSchema = z
     ).default(0),
     /** Distance of the pad axis from the fruit's centre of mass. */
     gripOffsetMm: measure('Grip offset from the centre of mass', 'mm', -0.001, 200).default(0),
-    maxTravelMm: measure('Maximum travel per pad', 'mm', 0, 100),
+    /** Omitted: chosen from the fruit's size (see AUTO_TRAVEL in the squeeze resolver). */
+    maxTravelMm: measure('Maximum travel per pad', 'mm', 0, 100).optional(),
     /** How long the grip holds the fruit (the transfer); omitted: the grip at t = 0 only. */
     holdSeconds: measure('Hold time', 's', 0, 3600).optional(),
     mesh: z.enum(['coarse', 'normal', 'fine']).default('normal'),

@@ -142,7 +142,7 @@ describe('squeeze check: the bruise at the grip against the grade', () => {
 describe('squeeze bad input: 400 with a field message', () => {
   beforeAll(async () => signInAs(await userId(ACCOUNTS.engineer)));
   const cases: [string, unknown, string][] = [
-    ['missing travel', { ...FRUIT }, 'maxTravelMm'],
+    // A missing travel is chosen from the fruit's size (see the cherry tomato below).
     ['negative travel', { ...FRUIT, maxTravelMm: -1 }, 'maxTravelMm'],
     ['travel as text', { ...FRUIT, maxTravelMm: 'two' }, 'maxTravelMm'],
     [
@@ -200,6 +200,24 @@ describe('squeeze bad input: 400 with a field message', () => {
     const json = await res.json();
     expect(res.status, JSON.stringify(json)).toBe(400);
     expect(json.fieldErrors.maxTravelMm[0]).toMatch(/at most 1\.59 mm/);
+  });
+  it('with no travel typed, the travel follows the fruit: the cherry tomato runs', async () => {
+    // Forme: 21.23 mm along its axis (Polat et al. 2007). 5 % of the 10.615 mm axial radius is
+    // 0.5308 mm, rounded down to 0.530 mm, inside the model's 15 % limit of 1.59 mm.
+    const res = await post(squeeze, {
+      cultivar: 'cherry-tomato-forme',
+      modulusMpa: 1,
+      poisson: 0.4,
+      padDiameterMm: 10,
+      padEdgeMm: 1,
+      sweep: false,
+    });
+    const json = await res.json();
+    expect(res.status, JSON.stringify(json)).toBe(200);
+    expect(json.result.inputs_used.max_travel_mm).toBe(0.53);
+    expect(json.result.inputs_used.max_travel_auto).toBe(true);
+    expect(json.result.model.liftability.grip).not.toBeNull();
+    expect(json.result.warnings.join(' ')).not.toMatch(/of the fruit's radius along the squeeze/);
   });
   it('a cultivar with only a draft is refused', async () => {
     const [commodity] = await db('commodities').select('id').limit(1);

@@ -20,7 +20,8 @@ export function squeezeHead(r: ResolvedSqueeze, input: SqueezeCheckInput) {
     acceleration_m_s2: input.accelerationMs2,
     horizontal_acceleration_m_s2: input.horizontalAccelerationMs2,
     grip_offset_mm: input.gripOffsetMm,
-    max_travel_mm: input.maxTravelMm,
+    max_travel_mm: r.maxTravelMm,
+    max_travel_auto: r.maxTravelAuto,
   };
   // The hold's figures: they move the grip over time, not the bruise margin at t = 0, so the
   // verdict's evidence is named without them.

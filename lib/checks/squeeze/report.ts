@@ -243,7 +243,13 @@ export const squeezeDescriptor: CheckDescriptor<SqueezeResult> = {
           unit: 'm/s²',
         },
         { label: 'Grip offset from the centre of mass', value: u.grip_offset_mm ?? 0, unit: 'mm' },
-        { label: 'Maximum travel per pad', value: u.max_travel_mm, unit: 'mm' },
+        {
+          label: u.max_travel_auto
+            ? "Maximum travel per pad (5 % of the fruit's radius)"
+            : 'Maximum travel per pad',
+          value: u.max_travel_mm,
+          unit: 'mm',
+        },
         {
           label: 'Hold time',
           value: u.hold_time_s ?? null,

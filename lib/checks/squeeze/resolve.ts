@@ -18,7 +18,23 @@ export interface ResolvedSqueeze {
   /** Peleg's relaxation constants (one published pair), or null: none on any rung. */
   relaxation: { k1: UsedValue; k2: UsedValue } | null;
   axialMm: number;
+  /** The squeeze's largest travel per pad, mm: as typed, or chosen from the fruit's size. */
+  maxTravelMm: number;
+  maxTravelAuto: boolean;
   model: SqueezeInput;
+}
+
+/**
+ * The largest travel per pad when none is typed: 5 % of the fruit's radius along the squeeze —
+ * the strain up to which the linear model holds without a warning, well inside its 15 % limit —
+ * whatever the fruit's size (a fixed 2 mm was too deep for a cherry tomato). Rounded down to
+ * three figures, so the rounding never crosses the 5 %.
+ */
+export const AUTO_TRAVEL = 0.05;
+export function autoTravelMm(axialMm: number): number {
+  const raw = (AUTO_TRAVEL * axialMm) / 2;
+  const step = 10 ** (Math.floor(Math.log10(raw)) - 2);
+  return Number((Math.floor(raw / step) * step).toPrecision(3));
 }
 
 /** The squeeze case in SI from the form's figures and the cultivar's published ones. */
@@ -43,6 +59,7 @@ export async function resolveSqueeze(actor: Actor, v: SqueezeCheckInput): Promis
   );
   const failureStress =
     climb(fruit.evidence, { quantity: 'failure_stress' }, { unit: 'kPa' })?.used ?? null;
+  const maxTravelMm = v.maxTravelMm ?? autoTravelMm(axialMm);
   const preset = FACING_PRESETS[v.facing];
   const facingModulus = v.facing === 'custom' ? v.facingModulusMpa : preset.modulusMpa;
   const facingThickness = v.facing === 'custom' ? v.facingThicknessMm : preset.thicknessMm;
@@ -51,7 +68,7 @@ export async function resolveSqueeze(actor: Actor, v: SqueezeCheckInput): Promis
     axialRadius: axialMm / 2000,
     modulus: fruit.modulusMpa.value * 1e6,
     poisson: fruit.poisson.value,
-    travel: v.maxTravelMm / 1000,
+    travel: maxTravelMm / 1000,
     mesh: v.mesh,
     ...(v.padDiameterMm !== undefined && { padDiameter: v.padDiameterMm / 1000 }),
     ...(v.padEdgeMm !== undefined && { edgeRadius: v.padEdgeMm / 1000 }),
@@ -72,7 +89,10 @@ export async function resolveSqueeze(actor: Actor, v: SqueezeCheckInput): Promis
     ...(failureStress ? { failureShear: (failureStress.value * 1000) / 2 } : {}),
   };
   const relaxation = relaxationOf(fruit.evidence);
-  return { fruit, density, friction, failureStress, relaxation, axialMm, model };
+  return {
+    ...{ fruit, density, friction, failureStress, relaxation, axialMm, model },
+    ...{ maxTravelMm, maxTravelAuto: v.maxTravelMm === undefined },
+  };
 }
 
 /** Pad diameters for the sweep: 12 from a quarter of the pad to three pads, within the fruit. */

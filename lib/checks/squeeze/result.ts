@@ -42,6 +42,8 @@ export const squeezeResultSchema = z.object({
     horizontal_acceleration_m_s2: n.optional(),
     grip_offset_mm: n.optional(),
     max_travel_mm: n,
+    /** True when the travel was chosen from the fruit's size (absent in older results). */
+    max_travel_auto: z.boolean().optional(),
     /** The hold time and the relaxation pair it used (absent in results saved before holds). */
     hold_time_s: nn.optional(),
     relaxation_k1_s: usedValueSchema.nullable().optional(),

@@ -98,6 +98,8 @@ function resolved(set: EvidenceSet): ResolvedSqueeze {
     friction,
     failureStress: null,
     relaxation,
+    maxTravelMm: 2,
+    maxTravelAuto: false,
     axialMm: 70,
     model,
   };

@@ -6,6 +6,7 @@ import { MarginPanel } from '@/components/checks/margin-panel';
 import { CautionNote } from '@/components/shell/caution-note';
 import { PageTitle } from '@/components/ui/page-title';
 import { requirePageActor } from '@/lib/auth/session';
+import { checkHref } from '@/lib/checks/check-url';
 import { CHECKS } from '@/lib/checks/registry';
 import { marginBasis } from '@/lib/checks/report';
 import { getAssessment } from '@/lib/data/assessments';
@@ -76,7 +77,11 @@ export default async function AssessmentReport({ params }: { params: Promise<{ i
         ) : null}
         {a.notes ? <p className="whitespace-pre-wrap text-stone-700">{a.notes}</p> : null}
       </div>
-      <ReportActions id={a.id} canRerun={Boolean(a.newerRevision || a.newerCommodityRevision)} />
+      <ReportActions
+        id={a.id}
+        canRerun={Boolean(a.newerRevision || a.newerCommodityRevision)}
+        openHref={checkHref(a.check, a.inputs)}
+      />
       <MarginPanel
         hasResult
         margin={margin}
