@@ -13,16 +13,24 @@ const STYLES: { words: string[]; shape: keyof typeof SHAPES; palette: Palette }[
     palette: pal('#e6ef9a', '#b8c94a', '#6f7f22', '#f4f0c8'),
   },
   { words: ['kiwi'], shape: 'kiwi', palette: pal('#b58a5c', '#8a6238', '#5a3e22', '#7fb236') },
+  { words: ['peach'], shape: 'stone', palette: pal('#ffd0a0', '#f59a6a', '#c65a3c', '#ffd68f') },
+  // Smooth-skinned and redder than a peach.
   {
-    words: ['peach', 'nectarine'],
+    words: ['nectarine'],
     shape: 'stone',
-    palette: pal('#ffc08a', '#f07f4f', '#b4432f', '#ffd68f'),
+    palette: pal('#ffb070', '#d8342a', '#7c1420', '#ffd060'),
   },
   { words: ['apricot'], shape: 'stone', palette: pal('#ffd28a', '#f2a23c', '#b8691c', '#ffe0a0') },
   {
     words: ['plum', 'prune'],
     shape: 'stone',
     palette: pal('#9c6fb0', '#5e2f78', '#2e1540', '#e0c56a'),
+  },
+  // Before 'cherry' and 'tomato': a cherry tomato is neither a cherry nor a beefsteak tomato.
+  {
+    words: ['cherry-tomato'],
+    shape: 'truss',
+    palette: pal('#ff9a7a', '#e8402a', '#a01c12', '#f2c6a0'),
   },
   { words: ['cherry'], shape: 'cherry', palette: pal('#e8606a', '#a3172a', '#560812', '#f2c6cc') },
   {
@@ -43,14 +51,26 @@ const STYLES: { words: string[]; shape: keyof typeof SHAPES; palette: Palette }[
   },
   { words: ['banana'], shape: 'banana', palette: pal('#fff08a', '#f2d23c', '#b09420', '#5a4020') },
   {
-    words: ['grape', 'blueberr'],
-    shape: 'cluster',
-    palette: pal('#8a7fd0', '#4a3f90', '#231c50', '#cfc8f0'),
+    words: ['blueberr'],
+    shape: 'blueberries',
+    palette: pal('#8a9ad8', '#3c4a8c', '#1c2250', '#6a5a80'),
+  },
+  { words: ['grape'], shape: 'cluster', palette: pal('#8a7fd0', '#4a3f90', '#231c50', '#cfc8f0') },
+  // Mandarins (and tangerines, clementines) are flatter, smaller and deeper in colour.
+  {
+    words: ['mandarin', 'tangerine', 'clementine'],
+    shape: 'mandarin',
+    palette: pal('#ffa84a', '#f0701a', '#a8400c', '#ffe0a0'),
   },
   {
-    words: ['orange', 'mandarin', 'citrus', 'lemon', 'lime'],
+    words: ['orange', 'citrus', 'lemon', 'lime'],
     shape: 'citrus',
     palette: pal('#ffc04a', '#f28a1c', '#b45a10', '#ffe0a0'),
+  },
+  {
+    words: ['potato'],
+    shape: 'tuber',
+    palette: pal('#e8cf9a', '#c09a5c', '#7a5a30', '#f2e2b8'),
   },
 ];
 

@@ -104,6 +104,77 @@ export const SHAPES: Record<string, (p: Palette) => string> = {
       p.light,
     ) +
     `<path d="M600 260 q 10 -60 60 -90" stroke="#6b4a2b" stroke-width="14" fill="none"/>${leaf(620, 210)}`,
+  // A potato: a lumpy, elongated tuber with shallow eyes and no stem or leaf.
+  tuber: (p) =>
+    `<path d="M330 470 c -20 -120 90 -200 230 -190 c 90 6 130 -30 220 -20 c 120 14 170 110 150 210 c -20 110 -110 190 -250 200 c -90 6 -140 -20 -210 -10 c -90 12 -130 -90 -140 -190 z" fill="url(#body)"/>` +
+    [
+      [430, 420],
+      [560, 360],
+      [720, 340],
+      [820, 470],
+      [660, 560],
+      [480, 580],
+    ]
+      .map(
+        ([x, y]) =>
+          `<path d="M${x - 16} ${y} q 16 -12 32 0" stroke="${p.shade}" stroke-width="7" fill="none" stroke-linecap="round"/>`,
+      )
+      .join('') +
+    dots(
+      [
+        [500, 480],
+        [610, 450],
+        [760, 410],
+        [560, 640],
+        [700, 600],
+      ],
+      4,
+      p.shade,
+    ),
+  // A mandarin: smaller and flattened, a sunken stem end and a leafy twig, a finely pitted peel.
+  mandarin: (p) =>
+    `<ellipse cx="600" cy="510" rx="240" ry="175" fill="url(#body)"/>` +
+    dots(
+      ring(600, 510, 1, 18).map(([x, y], i) => {
+        const a = (2 * Math.PI * i) / 18;
+        return [Math.round(x + 150 * Math.cos(a)), Math.round(y + 105 * Math.sin(a))];
+      }),
+      4,
+      p.shade,
+    ) +
+    `<ellipse cx="600" cy="345" rx="38" ry="13" fill="${p.shade}"/>` +
+    `<path d="M600 340 q 6 -40 30 -64" stroke="#6b4a2b" stroke-width="10" fill="none" stroke-linecap="round"/>` +
+    `<path d="M628 278 c 40 -70 130 -90 200 -60 c -60 60 -140 80 -200 60 z" fill="#3f7a33"/>` +
+    `<path d="M626 282 c -30 -60 -110 -80 -170 -50 c 50 50 120 66 170 50 z" fill="#4f8a3c"/>`,
+  // Cherry tomatoes on the vine: a truss of small round fruit with green calyces.
+  truss: () =>
+    `<path d="M300 260 q 300 -80 620 40 M420 238 l 10 140 M560 220 l 0 210 M700 236 l -10 150 M820 270 l 0 230" stroke="#3f7a33" stroke-width="14" fill="none" stroke-linecap="round"/>` +
+    [
+      [430, 450, 100],
+      [560, 540, 110],
+      [690, 450, 100],
+      [820, 570, 95],
+    ]
+      .map(
+        ([x, y, r]) =>
+          `<circle cx="${x}" cy="${y}" r="${r}" fill="url(#body)"/>` +
+          `<path d="M${x} ${y - r + 6} l 24 -26 l -4 34 l 36 4 l -34 12 l -22 -24 l -22 24 l -34 -12 l 36 -4 l -4 -34 z" fill="#3f7a33"/>`,
+      )
+      .join(''),
+  // Blueberries: a few loose round berries, each with its star-shaped crown.
+  blueberries: (p) =>
+    [
+      [470, 520, 130],
+      [720, 500, 140],
+      [600, 690, 110],
+    ]
+      .map(
+        ([x, y, r]) =>
+          `<circle cx="${x}" cy="${y}" r="${r}" fill="url(#body)"/>` +
+          `<circle cx="${x + r * 0.1}" cy="${y - r * 0.35}" r="${r * 0.22}" fill="${p.shade}"/>` +
+          `<path d="M${x + r * 0.1} ${y - r * 0.55} l 8 16 l 18 2 l -13 12 l 4 18 l -17 -9 l -17 9 l 4 -18 l -13 -12 l 18 -2 z" fill="${p.accent}"/>`,
+      )
+      .join(''),
   citrus: (p) =>
     `<circle cx="600" cy="470" r="260" fill="url(#body)"/>` +
     dots([...ring(600, 470, 120, 14), ...ring(600, 470, 200, 24)], 5, p.shade) +
