@@ -1,5 +1,4 @@
 import { ListObjectsV2Command, S3Client } from '@aws-sdk/client-s3';
-import { countRows } from '../support/db';
 import { storageSettings } from '@/lib/storage/object-store';
 
 /** mulberry32: a small deterministic PRNG, uniform on [0, 1). */
@@ -88,13 +87,4 @@ export async function bucketKeys(): Promise<string[]> {
   });
   const out = await client.send(new ListObjectsV2Command({ Bucket: s.bucket }));
   return (out.Contents ?? []).map((o) => o.Key!).sort();
-}
-
-/** What an upload could have stored: test rows, audit rows, bucket objects. */
-export async function storedState() {
-  return {
-    tests: await countRows('compression_tests'),
-    audit: await countRows('audit_log'),
-    objects: await bucketKeys(),
-  };
 }

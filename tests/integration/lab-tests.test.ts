@@ -1,55 +1,37 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { signInAs } from '../support/session';
-import { freshDatabase, userId } from '../support/db';
-import { startTestBucket } from '../support/bucket';
-import { ACCOUNTS } from '../support/accounts';
-import type { Role } from '@/lib/auth/roles';
+import { beforeAll, describe, expect, it } from 'vitest';
+// First: the session stand-in must be in place before any module that reads the session loads.
+import '../support/session';
+import { userId } from '../support/db';
 import { db } from '@/lib/db';
 import * as uploads from '@/app/api/cultivars/[slug]/lab-tests/route';
 import * as one from '@/app/api/lab-tests/[id]/route';
 import * as draft from '@/app/api/lab-tests/[id]/draft/route';
 import { BAD_FIELDS, BAD_FILES } from './lab-tests-cases';
-import { CURVE, hertzCsv, storedState, uploadRequest } from './lab-tests-support';
+import { CURVE, hertzCsv } from './lab-tests-support';
+import {
+  as,
+  ids,
+  ORIGIN,
+  params,
+  prepareUploadTests,
+  SLUG,
+  uploadCalls,
+  type Who,
+} from './upload-calls';
 
-const SLUG = 'apple-jonathan';
-const ORIGIN = { origin: 'http://tenderline.test' };
-const params = <T>(p: T) => ({ params: Promise.resolve(p) });
 const FIELDS = { diameterMm: '70', poisson: '0.35' };
 const GOOD = hertzCsv({ ...CURVE, seed: 1 });
 
-type Who = Role | 'signed-out';
-const ids: Partial<Record<Role, number>> = {};
-const as = (who: Who) => signInAs(who === 'signed-out' ? null : ids[who]!);
-
-async function upload(
-  file: BlobPart | null,
-  fields: Record<string, string> = FIELDS,
-  headers = ORIGIN,
-  slug = SLUG,
-) {
-  const response = await uploads.POST(uploadRequest(file, fields, headers), params({ slug }));
-  return { status: response.status, body: await response.json() };
-}
-
-const startDraft = (id: number, headers: Record<string, string> = ORIGIN) =>
-  draft.POST(
-    new Request('http://tenderline.test/api', {
-      method: 'POST',
-      headers: { 'content-type': 'application/json', ...headers },
-      body: '{}',
-    }),
-    params({ id: String(id) }),
-  );
+const { upload, startDraft, storedState } = uploadCalls({
+  upload: uploads.POST,
+  draft: draft.POST,
+  table: 'compression_tests',
+  fields: FIELDS,
+  fileName: 'test.csv',
+});
 
 describe('lab-test uploads', () => {
-  let bucket: Awaited<ReturnType<typeof startTestBucket>>;
-  beforeAll(async () => {
-    await freshDatabase();
-    bucket = await startTestBucket();
-    for (const role of ['admin', 'editor', 'engineer', 'buyer'] as const)
-      ids[role] = await userId(ACCOUNTS[role]);
-  });
-  afterAll(() => bucket.close());
+  prepareUploadTests();
 
   it('fits the apparent modulus of a noisy Hertz curve within 2 %, for several seeds', async () => {
     // The curve is made from the input E by the Hertz relation; the fit must give E back. The

@@ -1,10 +1,8 @@
 import fs from 'node:fs';
 // First: the session stand-in must be in place before any module that reads the session loads.
 import '../support/session';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { freshDatabase, userId } from '../support/db';
-import { startTestBucket } from '../support/bucket';
-import { ACCOUNTS } from '../support/accounts';
+import { beforeAll, describe, expect, it } from 'vitest';
+import { userId } from '../support/db';
 import { PELEG, pelegCsv } from '../support/peleg-curve';
 import { db } from '@/lib/db';
 import * as uploads from '@/app/api/cultivars/[slug]/relaxation-tests/route';
@@ -17,6 +15,7 @@ import {
   ids,
   ORIGIN,
   params,
+  prepareUploadTests,
   SLUG,
   startDraft,
   storedState,
@@ -52,14 +51,7 @@ const publishedCount = async () =>
   );
 
 describe('relaxation tests: reading one, roles, drafts', () => {
-  let bucket: Awaited<ReturnType<typeof startTestBucket>>;
-  beforeAll(async () => {
-    await freshDatabase();
-    bucket = await startTestBucket();
-    for (const role of ['admin', 'editor', 'engineer', 'buyer'] as const)
-      ids[role] = await userId(ACCOUNTS[role]);
-  });
-  afterAll(() => bucket.close());
+  prepareUploadTests();
 
   it('GET gives the figures, every reading, the fitted curve and the force kept', async () => {
     as('editor');

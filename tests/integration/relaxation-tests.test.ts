@@ -1,27 +1,25 @@
 import fs from 'node:fs';
 // First: the session stand-in must be in place before any module that reads the session loads.
 import '../support/session';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { freshDatabase, userId } from '../support/db';
-import { startTestBucket } from '../support/bucket';
-import { ACCOUNTS } from '../support/accounts';
+import { describe, expect, it } from 'vitest';
 import { PELEG, pelegCsv } from '../support/peleg-curve';
 import { BAD_RELAXATION_FILES } from '../lib/lab-tests/relaxation-cases';
 import { db } from '@/lib/db';
-import { as, FIELDS, ids, SLUG, storedState, upload } from './relaxation-tests-support';
+import {
+  as,
+  FIELDS,
+  ids,
+  prepareUploadTests,
+  SLUG,
+  storedState,
+  upload,
+} from './relaxation-tests-support';
 
 const GOOD = pelegCsv({ ...PELEG, noise: 0.05, seed: 1 });
 const DEMO = fs.readFileSync('public/samples/relaxation-demo.csv');
 
 describe('relaxation-test uploads', () => {
-  let bucket: Awaited<ReturnType<typeof startTestBucket>>;
-  beforeAll(async () => {
-    await freshDatabase();
-    bucket = await startTestBucket();
-    for (const role of ['admin', 'editor', 'engineer', 'buyer'] as const)
-      ids[role] = await userId(ACCOUNTS[role]);
-  });
-  afterAll(() => bucket.close());
+  prepareUploadTests();
 
   it("answers Peleg's k₁ and k₂ of a noisy generated curve within 5 % and 1 %", async () => {
     // The curve is made from k₁ = 8 s, k₂ = 1.6, F₀ = 30 N with ±0.05 N noise; the tolerances are
