@@ -1,5 +1,5 @@
 import 'server-only';
-import { assertCan, type Actor } from '@/lib/auth/actor';
+import type { Actor } from '@/lib/auth/actor';
 import { labTestSource, valuesWithLabTest, type LabTestFacts } from '@/lib/lab-tests/draft-value';
 import { COMPRESSION_TESTS, getLabTest, type LabTestWithData } from './lab-tests';
 import { startDraftFromTest, uploadedFacts } from './test-draft-steps';
@@ -23,16 +23,20 @@ function factsOf(test: LabTestWithData): LabTestFacts {
  * modulus (replacing one from the same test), citing a source for the test. An editable draft
  * already made from the test by the same editor is reused.
  */
-export async function createDraftFromLabTest(actor: Actor, testId: number) {
-  assertCan(actor, 'lab-tests:upload');
-  assertCan(actor, 'revisions:edit');
-  const test = await getLabTest(actor, testId);
-  const facts = factsOf(test);
-  return startDraftFromTest(actor, COMPRESSION_TESTS, test, {
-    source: labTestSource(facts),
-    sourceDetail: { compressionTest: facts.id },
-    summary: `Apparent modulus from in-house compression test #${test.id}`,
-    values: (published) => valuesWithLabTest(published, facts),
-    discardReason: 'starting it from a lab test failed',
-  });
+export function createDraftFromLabTest(actor: Actor, testId: number) {
+  return startDraftFromTest(
+    actor,
+    COMPRESSION_TESTS,
+    () => getLabTest(actor, testId),
+    (test) => {
+      const facts = factsOf(test);
+      return {
+        source: labTestSource(facts),
+        sourceDetail: { compressionTest: facts.id },
+        summary: `Apparent modulus from in-house compression test #${test.id}`,
+        values: (published) => valuesWithLabTest(published, facts),
+        discardReason: 'starting it from a lab test failed',
+      };
+    },
+  );
 }

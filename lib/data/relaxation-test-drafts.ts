@@ -1,5 +1,5 @@
 import 'server-only';
-import { assertCan, type Actor } from '@/lib/auth/actor';
+import type { Actor } from '@/lib/auth/actor';
 import {
   relaxationTestSource,
   valuesWithRelaxationTest,
@@ -33,16 +33,20 @@ function factsOf(test: RelaxationTestWithData): RelaxationTestFacts {
  * k₂ (replacing a pair from the same test), both citing the test's one source. An editable draft
  * already made from the test by the same editor is reused.
  */
-export async function createDraftFromRelaxationTest(actor: Actor, testId: number) {
-  assertCan(actor, 'lab-tests:upload');
-  assertCan(actor, 'revisions:edit');
-  const test = await getRelaxationTest(actor, testId);
-  const facts = factsOf(test);
-  return startDraftFromTest(actor, RELAXATION_TESTS, test, {
-    source: relaxationTestSource(facts),
-    sourceDetail: { relaxationTest: facts.id },
-    summary: `Relaxation constants from in-house relaxation test #${test.id}`,
-    values: (published) => valuesWithRelaxationTest(published, facts),
-    discardReason: 'starting it from a relaxation test failed',
-  });
+export function createDraftFromRelaxationTest(actor: Actor, testId: number) {
+  return startDraftFromTest(
+    actor,
+    RELAXATION_TESTS,
+    () => getRelaxationTest(actor, testId),
+    (test) => {
+      const facts = factsOf(test);
+      return {
+        source: relaxationTestSource(facts),
+        sourceDetail: { relaxationTest: facts.id },
+        summary: `Relaxation constants from in-house relaxation test #${test.id}`,
+        values: (published) => valuesWithRelaxationTest(published, facts),
+        discardReason: 'starting it from a relaxation test failed',
+      };
+    },
+  );
 }

@@ -1,7 +1,7 @@
 import 'server-only';
 import { db } from '@/lib/db';
 import { typed } from '@/lib/db-kysely';
-import type { Actor } from '@/lib/auth/actor';
+import { assertCan, type Actor } from '@/lib/auth/actor';
 import type { TestSource, UploadedTestFacts } from '@/lib/lab-tests/test-source';
 import type { RevisionValue } from '@/lib/properties/records';
 import type { RevisionValueInput } from '@/lib/validation/revisions';
@@ -85,18 +85,22 @@ export interface TestDraft {
 }
 
 /**
- * Start a draft revision of the test's cultivar holding `draft.values`, citing the test's source,
- * and record it on the test. An editable draft already made from the test by the same actor is
- * reused (created: false). The caller has checked the actor may read tests and edit revisions.
+ * Start a draft revision of the test's cultivar holding the kind's values from it, citing the
+ * test's source, and record it on the test. An editable draft already made from the test by the
+ * same actor is reused (created: false).
  */
-export async function startDraftFromTest(
+export async function startDraftFromTest<T extends UploadedTestRecord>(
   actor: Actor,
   kind: TestKind,
-  test: UploadedTestRecord,
-  draft: TestDraft,
+  load: () => Promise<T>,
+  plan: (test: T) => TestDraft,
 ): Promise<{ revisionId: number; created: boolean }> {
+  assertCan(actor, 'lab-tests:upload');
+  assertCan(actor, 'revisions:edit');
+  const test = await load();
   const open = await openDraftOf(actor, test.draftRevisionId);
   if (open !== null) return { revisionId: open, created: false };
+  const draft = plan(test);
   await ensureTestSource(actor, draft.source, draft.sourceDetail);
   const revision = await createDraft(actor, test.cultivar.slug, draft.summary);
   try {
