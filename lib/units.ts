@@ -23,7 +23,9 @@ const US: Record<string, { unit: string; factor: number }> = {
   'kg/m³': { unit: 'lb/ft³', factor: LB_KG / (12 * IN_M) ** 3 },
   J: { unit: 'ft·lbf', factor: LBF_N * 12 * IN_M },
   'm/s': { unit: 'ft/s', factor: 12 * IN_M },
+  'm/s²': { unit: 'ft/s²', factor: 12 * IN_M },
   'N·m': { unit: 'lbf·in', factor: LBF_N * IN_M },
+  'mm²': { unit: 'in²', factor: (IN_M * 1000) ** 2 },
   'mm³': { unit: 'in³', factor: (IN_M * 1000) ** 3 },
   // 1 in³ per ft·lbf = 16 387.064 mm³ ÷ 1.3558179 J.
   'mm³/J': { unit: 'in³/(ft·lbf)', factor: (IN_M * 1000) ** 3 / (LBF_N * 12 * IN_M) },
@@ -53,4 +55,18 @@ export function formatMeasure(value: number, siUnit: string, system: UnitSystem)
   const unit = displayUnit(siUnit, system);
   const shown = Number(toDisplay(value, siUnit, system).toPrecision(4));
   return unit === '–' ? String(shown) : `${shown} ${unit}`;
+}
+
+/**
+ * A starting figure (a form's default, given in SI) as a round number in the reader's units. Rule:
+ * two significant figures, or one where that stays within 2.5 % of the exact conversion — so
+ * 20 mm reads 0.8 in (not 0.7874) and 1200 mm reads 47 in (50 would be 5.8 % off). A default in
+ * the unit it was chosen in (SI, or a unit without a US counterpart) is shown exactly as given.
+ * Only defaults are rounded: a figure the user typed is never changed.
+ */
+export function niceDefault(value: number, siUnit: string, system: UnitSystem): number {
+  const shown = toDisplay(value, siUnit, system);
+  if (shown === value || !Number.isFinite(shown) || shown === 0) return value;
+  const one = Number(shown.toPrecision(1));
+  return Math.abs(one / shown - 1) <= 0.025 ? one : Number(shown.toPrecision(2));
 }
