@@ -1,10 +1,12 @@
 import { NextResponse } from 'next/server';
 import { requireActor } from '@/lib/auth/session';
 import { getAssessment } from '@/lib/data/assessments';
+import { getUnitSystem } from '@/lib/data/users';
 import { inputsCsv } from '@/lib/checks/inputs-csv';
 import { CHECKS } from '@/lib/checks/registry';
 import { pinnedSchema } from '@/lib/checks/used-value';
 import { handle } from '@/lib/http/handler';
+import { reportIn } from '@/lib/reports/report-units';
 import { parseId } from '@/lib/validation/id';
 
 type Context = { params: Promise<{ id: string }> };
@@ -13,7 +15,7 @@ type Context = { params: Promise<{ id: string }> };
 export const GET = handle(async (_request, context: Context) => {
   const actor = await requireActor('assessments:manage-own');
   const a = await getAssessment(actor, parseId((await context.params).id));
-  const report = CHECKS[a.check].show(a.results);
+  const report = reportIn(CHECKS[a.check].show(a.results), await getUnitSystem(actor));
   const csv = inputsCsv(
     report,
     pinnedSchema.parse(a.results.pinned ?? null),
