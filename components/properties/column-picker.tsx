@@ -3,7 +3,7 @@
 import type { Dispatch, SetStateAction } from 'react';
 import { QUANTITIES, QUANTITY_KEYS, type Quantity } from '@/lib/properties/quantities';
 import type { TableQuery } from '@/lib/properties/table-query';
-import { unitLabel } from '@/lib/properties/view-csv';
+import { UnitLabel } from './unit-label';
 
 type Props = { view: TableQuery; onChange: Dispatch<SetStateAction<TableQuery>> };
 
@@ -33,7 +33,10 @@ export function ColumnPicker({ view, onChange }: Props) {
               className="mt-0.5 accent-leaf-700"
             />
             <span>
-              {QUANTITIES[q].label} <span className="text-stone-500">({unitLabel(q)})</span>
+              {QUANTITIES[q].label}{' '}
+              <span className="text-stone-500">
+                (<UnitLabel q={q} />)
+              </span>
             </span>
           </label>
         ))}

@@ -6,6 +6,7 @@ import { isQuantity } from '@/lib/properties/quantities';
 import { parseTableQuery } from '@/lib/properties/table-query';
 import type { TableRow } from '@/lib/properties/table-rows';
 import { viewCsv } from '@/lib/properties/view-csv';
+import { useUnits } from '@/components/units/units-provider';
 import { ColumnPicker } from './column-picker';
 import { TableFilters } from './table-filters';
 import { TableGrid } from './table-grid';
@@ -33,6 +34,7 @@ export function PropertiesTable({ rows }: { rows: TableRow[] }) {
   // Read from the address itself (not the server's first answer), so going Back to the page
   // restores the view as it was last left.
   const params = useSearchParams();
+  const { system } = useUnits();
   const [view, setView] = useState(() => parseTableQuery(params));
   const table = usePropertiesTable(rows, view, setView);
   useViewInAddress(view);
@@ -51,6 +53,7 @@ export function PropertiesTable({ rows }: { rows: TableRow[] }) {
       viewCsv(
         matching.map((r) => r.original),
         shownColumns,
+        system,
       ),
     );
 

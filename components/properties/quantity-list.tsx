@@ -1,6 +1,6 @@
 import type { RevisionValue } from '@/lib/properties/records';
 import { QUANTITIES, QUANTITY_KEYS, type Quantity } from '@/lib/properties/quantities';
-import { unitLabel } from '@/lib/properties/view-csv';
+import { UnitLabel } from './unit-label';
 import { ValueCard } from './value-card';
 
 function Heading({ q }: { q: Quantity }) {
@@ -9,7 +9,7 @@ function Heading({ q }: { q: Quantity }) {
     <h3 id={`q-${q}`} className="flex flex-wrap items-baseline gap-x-2 font-semibold">
       {label}
       <span className="text-sm font-normal text-stone-500">
-        {unitLabel(q)}
+        <UnitLabel q={q} />
         {hint ? ` · ${hint}` : ''}
       </span>
     </h3>
@@ -46,7 +46,8 @@ export function QuantityList({ values }: { values: RevisionValue[] }) {
             {missing.map((q) => (
               <li key={q} data-testid={`quantity-${q}`} className="text-stone-600">
                 <span className="font-medium text-stone-800">{QUANTITIES[q].label}</span> (
-                {unitLabel(q)}): no published value
+                <UnitLabel q={q} />
+                ): no published value
               </li>
             ))}
           </ul>

@@ -1,5 +1,6 @@
 import type { TableValue } from '@/lib/properties/table-rows';
 import { ValueText } from '@/components/units/value-text';
+import { ConditionText } from './condition-text';
 
 /** A full stop after a text, unless it already ends in one (or in ? or !). */
 const stop = (text: string) => (/[.!?]$/.test(text.trim()) ? '' : '.');
@@ -11,7 +12,13 @@ export function SourceSummary({ label, value }: { label: string; value: TableVal
     <>
       <span className="block font-medium text-stone-900">
         {label}
-        {value.variant ? ` (${value.variant})` : ''}:{' '}
+        {value.variant ? (
+          <>
+            {' ('}
+            <ConditionText text={value.variant} />)
+          </>
+        ) : null}
+        :{' '}
         <span className="num">
           <ValueText value={value} />
         </span>
@@ -37,7 +44,7 @@ export function SourceSummary({ label, value }: { label: string; value: TableVal
         <span className="mt-1 block text-stone-600">
           {value.conditions.map(([k, v]) => (
             <span key={k} className="block">
-              {k}: {v}
+              {k}: <ConditionText text={v} />
               {stop(v)}
             </span>
           ))}

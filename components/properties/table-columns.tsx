@@ -2,7 +2,7 @@ import Link from 'next/link';
 import { createColumnHelper, type FilterFn } from '@tanstack/react-table';
 import { QUANTITIES, QUANTITY_KEYS } from '@/lib/properties/quantities';
 import { headlineOf, type TableRow } from '@/lib/properties/table-rows';
-import { unitLabel } from '@/lib/properties/view-csv';
+import { UnitLabel } from './unit-label';
 import { ValueCell } from './value-cell';
 
 const column = createColumnHelper<TableRow>();
@@ -49,7 +49,10 @@ export const COLUMNS = [
       id: q,
       header: () => (
         <>
-          {QUANTITIES[q].label} <span className="font-normal text-stone-500">({unitLabel(q)})</span>
+          {QUANTITIES[q].label}{' '}
+          <span className="font-normal text-stone-500">
+            (<UnitLabel q={q} />)
+          </span>
         </>
       ),
       sortDescFirst: false,

@@ -1,5 +1,6 @@
 import type { RevisionValue } from '@/lib/properties/records';
 import { conditionsOf } from '@/lib/properties/table-rows';
+import { ConditionText } from './condition-text';
 import { SourceCitation } from './source-citation';
 import { ValueText } from '@/components/units/value-text';
 
@@ -14,7 +15,7 @@ export function ValueCard({ value }: { value: RevisionValue }) {
         </span>
         {value.variant ? (
           <span className="rounded bg-stone-100 px-1.5 text-xs text-stone-700">
-            {value.variant}
+            <ConditionText text={value.variant} />
           </span>
         ) : null}
         {value.sd !== null && value.low === null ? (
@@ -31,7 +32,9 @@ export function ValueCard({ value }: { value: RevisionValue }) {
           {conditions.map(([k, v]) => (
             <div key={k} className="contents">
               <dt className="text-stone-500">{k}</dt>
-              <dd className="text-stone-800">{v}</dd>
+              <dd className="text-stone-800">
+                <ConditionText text={v} />
+              </dd>
             </div>
           ))}
         </dl>

@@ -1,9 +1,15 @@
 import type { CultivarRecord } from './records';
 import { toCsv } from '@/lib/csv';
+import { displayUnit, toDisplay, type UnitSystem } from '@/lib/units';
 import { QUANTITIES, type Quantity } from './quantities';
 
-/** One row per published value, with unit, spread, conditions and source in their own columns. */
-export function cultivarsCsv(cultivars: CultivarRecord[]): string {
+/**
+ * One row per published value, with unit, spread, conditions and source in their own columns;
+ * value, spread and unit in the reader's system.
+ */
+export function cultivarsCsv(cultivars: CultivarRecord[], system: UnitSystem = 'si'): string {
+  const shown = (x: number | null, unit: string) =>
+    x === null ? null : toDisplay(x, unit, system);
   const header = [
     'commodity',
     'cultivar',
@@ -31,11 +37,11 @@ export function cultivarsCsv(cultivars: CultivarRecord[]): string {
       c.published?.number ?? null,
       QUANTITIES[v.quantity as Quantity].label,
       v.variant,
-      v.value,
-      v.unit,
-      v.low,
-      v.high,
-      v.sd,
+      shown(v.value, v.unit),
+      displayUnit(v.unit, system),
+      shown(v.low, v.unit),
+      shown(v.high, v.unit),
+      shown(v.sd, v.unit),
       v.samples,
       v.method,
       v.ripeness,

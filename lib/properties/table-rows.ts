@@ -1,3 +1,4 @@
+import { displayUnit, toDisplay, type UnitSystem } from '@/lib/units';
 import type { RevisionValue, SourceRef } from './records';
 import { formatValue } from './diff';
 import { QUANTITY_KEYS, type Quantity } from './quantities';
@@ -99,10 +100,17 @@ export function shortCitation(s: SourceRef | null): string {
   return [s.authors ?? s.title, s.year].filter(Boolean).join(' ');
 }
 
-/** The range of several values of one quantity (one canonical unit), e.g. `1.9–3.1 MPa`. */
-export function rangeAcross(values: Pick<TableValue, 'value' | 'unit'>[]): string {
-  const numbers = values.map((v) => v.value);
+/**
+ * The range of several values of one quantity (one canonical unit) in the reader's units, e.g.
+ * `1.9–3.1 MPa`, or `275.6–449.6 psi` in US units.
+ */
+export function rangeAcross(
+  values: Pick<TableValue, 'value' | 'unit'>[],
+  system: UnitSystem = 'si',
+): string {
+  const si = values[0]?.unit ?? '–';
+  const numbers = values.map((v) => toDisplay(v.value, si, system));
   const n = (x: number) => String(Number(x.toPrecision(4)));
-  const unit = !values.length || values[0].unit === '–' ? '' : ` ${values[0].unit}`;
+  const unit = !values.length || si === '–' ? '' : ` ${displayUnit(si, system)}`;
   return `${n(Math.min(...numbers))}–${n(Math.max(...numbers))}${unit}`;
 }

@@ -1,6 +1,7 @@
 import { NextResponse } from 'next/server';
 import { requireActor } from '@/lib/auth/session';
 import { listPublishedCultivars } from '@/lib/data/cultivars';
+import { getUnitSystem } from '@/lib/data/users';
 import { handle } from '@/lib/http/handler';
 import { cultivarJson } from '@/lib/properties/api-shape';
 import { cultivarsCsv } from '@/lib/properties/csv-export';
@@ -16,7 +17,7 @@ export const GET = handle(async (request) => {
   );
   const cultivars = await listPublishedCultivars(actor, query);
   if (query.format === 'csv') {
-    return new NextResponse(cultivarsCsv(cultivars), {
+    return new NextResponse(cultivarsCsv(cultivars, await getUnitSystem(actor)), {
       headers: {
         'Content-Type': 'text/csv; charset=utf-8',
         'Content-Disposition': 'attachment; filename="tenderline-properties.csv"',
