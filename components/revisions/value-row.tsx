@@ -2,6 +2,7 @@
 
 import { Field } from '@/components/ui/field';
 import type { FieldErrors } from '@/lib/errors';
+import { FROM_MEMORY } from '@/lib/properties/citation';
 import {
   isQuantity,
   OBSERVATION_LABELS,
@@ -152,9 +153,7 @@ export function ValueRow({ index, fields, errors, sources, onChange, onRemove }:
             <option value="">Choose…</option>
             {TYPICAL_BASES.map((b) => (
               <option key={b} value={b}>
-                {b === 'common practice'
-                  ? 'common practice, no single source'
-                  : 'from memory, not yet checked'}
+                {b === 'common practice' ? 'common practice, no single source' : FROM_MEMORY}
               </option>
             ))}
           </SelectField>

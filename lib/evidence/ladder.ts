@@ -1,4 +1,5 @@
 import type { RevisionValue, SourceRef } from '@/lib/properties/records';
+import { FROM_MEMORY } from '@/lib/properties/citation';
 import {
   STAGE_LABELS,
   type Quantity,
@@ -36,7 +37,7 @@ export interface Need {
 export function citationOf(source: SourceRef | null): string | null {
   if (!source) return null;
   const who = source.authors?.split(/[;,]/)[0]?.trim() || source.title;
-  const memory = source.kind === 'memory' ? ' (from memory, not yet checked)' : '';
+  const memory = source.kind === 'memory' ? ` (${FROM_MEMORY})` : '';
   return `${who}${source.year ? ` ${source.year}` : ''}${memory}`;
 }
 
@@ -99,9 +100,7 @@ const MIN_ACROSS = 3;
 const TYPICAL_BAND = 0.3;
 
 function basisWords(basis: TypicalBasis | null): string {
-  return basis === 'from memory'
-    ? 'from memory, not yet checked against a source'
-    : 'common practice, no single source';
+  return basis === 'from memory' ? FROM_MEMORY : 'common practice, no single source';
 }
 
 function fromRecord(

@@ -1,5 +1,12 @@
 import type { SourceKind } from './quantities';
 
+/**
+ * The one wording for a value that rests on memory (a source recalled but not re-read, or a
+ * typical value recalled): citations, source notes, the draft form and the data gaps page say it
+ * alike.
+ */
+export const FROM_MEMORY = 'from memory, not yet checked';
+
 /** What kind of source a value rests on, in words a reader can weigh. */
 export const SOURCE_KIND_LABELS: Record<SourceKind, string> = {
   paper: 'Peer-reviewed paper',
@@ -8,7 +15,7 @@ export const SOURCE_KIND_LABELS: Record<SourceKind, string> = {
   handbook: 'Handbook',
   report: 'Report',
   secondary: 'Secondary source (quoted from another work)',
-  memory: 'Recalled, not yet checked against the original',
+  memory: FROM_MEMORY[0].toUpperCase() + FROM_MEMORY.slice(1),
   demo: 'Demo value (invented, for trying the product)',
 };
 

@@ -73,7 +73,7 @@ export const OTHER_SOURCES: SeedSource[] = [
     title: "Poisson's ratio and Young's modulus for apple flesh under compressive loading",
     venue: 'Transactions of the ASAE 11(5)',
     pages: '608–610',
-    note: 'From memory; not re-read — check before relying on it. The citation was seen in reference lists, the value was not.',
+    note: 'Not re-read. The citation was seen in reference lists, the value was not.',
   },
   {
     key: 'finney-hall-1967',
@@ -83,7 +83,7 @@ export const OTHER_SOURCES: SeedSource[] = [
     title: 'Elastic properties of potatoes',
     venue: 'Transactions of the ASAE 10(1)',
     pages: '4–8',
-    note: 'From memory; not re-read — check before relying on it. The citation was seen in reference lists, the values were not.',
+    note: 'Not re-read. The citation was seen in reference lists, the values were not.',
   },
   {
     key: 'mohsenin-1986',
@@ -92,7 +92,7 @@ export const OTHER_SOURCES: SeedSource[] = [
     year: 1986,
     title: 'Physical properties of plant and animal materials',
     venue: '2nd edition, Gordon and Breach, New York',
-    note: 'From memory; not re-read — check before relying on it.',
+    note: 'Not re-read.',
   },
   {
     key: 'asae-s368-4',

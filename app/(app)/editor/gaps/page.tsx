@@ -1,5 +1,6 @@
 import Link from 'next/link';
 import { z } from 'zod';
+import { FromMemoryList } from '@/components/gaps/from-memory-list';
 import { GapFilters } from '@/components/gaps/gap-filters';
 import { GapMatrix } from '@/components/gaps/gap-matrix';
 import { GapSummary } from '@/components/gaps/gap-summary';
@@ -11,6 +12,8 @@ import { requirePageActor } from '@/lib/auth/session';
 import { checkSummaries, dataGaps, GAP_RUNGS, mostWanted, selectRows } from '@/lib/checks/gaps';
 import { listPublishedCultivars } from '@/lib/data/cultivars';
 import { listEditorQueue } from '@/lib/data/editor-queue';
+import { getUnitSystem } from '@/lib/data/users';
+import { valuesFromMemory } from '@/lib/evidence/memory-values';
 import { titleFor } from '@/lib/page-title';
 
 export const generateMetadata = titleFor('editor:use', 'Data gaps');
@@ -46,9 +49,10 @@ export default async function DataGapsPage({
     commodity: raw.commodity || undefined,
     rung: raw.rung || undefined,
   });
-  const [records, queue] = await Promise.all([
+  const [records, queue, system] = await Promise.all([
     listPublishedCultivars(actor),
     listEditorQueue(actor),
+    getUnitSystem(actor),
   ]);
   const gaps = dataGaps(records);
   // The actor's newest open draft of each record (the queue lists the newest first).
@@ -87,6 +91,17 @@ export default async function DataGapsPage({
           for it.
         </p>
         <MostWanted wanted={mostWanted(gaps.rows, 15)} />
+      </section>
+      <section aria-labelledby="from-memory-heading" className="mb-8">
+        <h2 id="from-memory-heading" className="mb-1 font-semibold">
+          Values from memory, to check
+        </h2>
+        <p className="mb-3 max-w-3xl text-sm text-stone-600">
+          Published values that rest on a source recalled but not re-read, or on a typical value
+          recalled. Check each against the original and revise the record, or replace it with a
+          measured value.
+        </p>
+        <FromMemoryList values={valuesFromMemory(records)} system={system} />
       </section>
       <section aria-labelledby="matrix">
         <h2 id="matrix" className="mb-3 font-semibold">
