@@ -34,6 +34,8 @@ export interface UsersTable {
   created_at: Generated<Timestamp>;
   updated_at: Generated<Timestamp>;
   unit_system: Generated<string>;
+  /** migrations/20261206000200: e-mails of the revision workflow (on unless muted). */
+  workflow_mail: Generated<Bool>;
 }
 
 export interface SignInLimitsTable {
@@ -265,6 +267,19 @@ export interface GradeRulesTable {
   created_at: Generated<Timestamp>;
 }
 
+/** migrations/20261206000200: a value both a draft and a newer publication changed. */
+export interface RevisionConflictsTable {
+  id: Generated<number>;
+  revision_id: number;
+  value_key: string;
+  label: string;
+  base_value: string | null;
+  mine_value: string | null;
+  theirs_value: string | null;
+  theirs_revision_id: number | null;
+  created_at: Generated<Timestamp>;
+}
+
 export interface Database {
   users: UsersTable;
   sign_in_limits: SignInLimitsTable;
@@ -276,6 +291,7 @@ export interface Database {
   cultivars: CultivarsTable;
   property_revisions: PropertyRevisionsTable;
   revision_values: RevisionValuesTable;
+  revision_conflicts: RevisionConflictsTable;
   follows: FollowsTable;
   images: ImagesTable;
   compression_tests: CompressionTestsTable;

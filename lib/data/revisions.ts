@@ -11,6 +11,9 @@ import { parseInput } from '@/lib/validation/parse';
 import { draftUpdateSchema, reviewCommentSchema } from '@/lib/validation/revisions';
 import { recordAudit } from '@/lib/audit-trail';
 import { notifyFollowers } from './follows';
+import { countConflicts, mergeOntoPublished } from './revision-conflicts';
+import { mailPublished, mailReturned, mailSubmitted } from './revision-mail';
+import { otherOpenRevisions } from './revision-others';
 
 /**
  * The editors' workflow: draft → in review → published (or returned, then draft again). A
@@ -105,7 +108,7 @@ export async function createDraft(actor: Actor, slug: string, summary?: string |
       entityId: id,
       detail: { cultivar: slug, basedOn: base },
     });
-    return { id, cultivarSlug: slug };
+    return { id, cultivarSlug: slug, otherOpen: await otherOpenRevisions(trx, cultivar.id, id) };
   });
 }
 
@@ -167,7 +170,7 @@ export async function updateDraft(actor: Actor, id: number, input: unknown) {
 
 export async function submitDraft(actor: Actor, id: number) {
   assertCan(actor, 'revisions:edit');
-  return db.transaction(async (trx) => {
+  const result = await db.transaction(async (trx) => {
     const row = await loadRevision(trx, id);
     assertAuthor(actor, row);
     const { n } = await typed(trx)
@@ -176,6 +179,12 @@ export async function submitDraft(actor: Actor, id: number) {
       .where('revision_id', '=', id)
       .executeTakeFirstOrThrow();
     if (toCount(n) === 0) throw new ValidationError('Add at least one value before submitting.');
+    const open = await countConflicts(trx, id);
+    if (open > 0) {
+      throw new ValidationError(
+        `Decide the ${open === 1 ? 'conflict' : `${open} conflicts`} with the published revision first: keep yours or take the published value for each.`,
+      );
+    }
     await transition(
       trx,
       id,
@@ -191,6 +200,8 @@ export async function submitDraft(actor: Actor, id: number) {
     });
     return { id, status: 'in_review' as const };
   });
+  await mailSubmitted(id);
+  return result;
 }
 
 function assertNotAuthor(actor: Actor, row: { author_id: number }) {
@@ -205,7 +216,7 @@ function assertNotAuthor(actor: Actor, row: { author_id: number }) {
 export async function returnRevision(actor: Actor, id: number, input: unknown) {
   assertCan(actor, 'revisions:review');
   const { comment } = parseInput(reviewCommentSchema, input);
-  return db.transaction(async (trx) => {
+  const result = await db.transaction(async (trx) => {
     const row = await loadRevision(trx, id);
     assertNotAuthor(actor, row);
     await transition(
@@ -229,6 +240,8 @@ export async function returnRevision(actor: Actor, id: number, input: unknown) {
     });
     return { id, status: 'returned' as const };
   });
+  await mailReturned(id);
+  return result;
 }
 
 async function numberOf(trx: Knex.Transaction, id: number | null): Promise<string> {
@@ -238,7 +251,7 @@ async function numberOf(trx: Knex.Transaction, id: number | null): Promise<strin
     .select('number')
     .where('id', '=', id)
     .executeTakeFirst();
-  return `revision ${row?.number ?? id}`;
+  return row ? `revision ${row.number}` : 'another revision';
 }
 
 /** The 409 text: which revision was published meanwhile, and what to do. */
@@ -297,10 +310,15 @@ export async function publishRevision(actor: Actor, id: number) {
     return { id, cultivarId: row.cultivar_id, number: row.number, base };
   });
   await notifyFollowers(result);
+  await mailPublished(id);
   return { id, status: 'published' as const };
 }
 
-/** Move a draft onto the cultivar's current published revision (after a 409), keeping its values. */
+/**
+ * Move a draft onto the cultivar's current published revision by a three-way merge (base = the
+ * revision it started from): values only the newer revision changed are carried in, values both
+ * changed become conflicts the author decides before the draft can be submitted again.
+ */
 export async function rebaseDraft(actor: Actor, id: number) {
   assertCan(actor, 'revisions:edit');
   return db.transaction(async (trx) => {
@@ -308,20 +326,22 @@ export async function rebaseDraft(actor: Actor, id: number) {
     assertAuthor(actor, row);
     const cultivar = await cultivarWhere(trx, { id: row.cultivar_id });
     if (!cultivar) throw new NotFoundError('No such cultivar.');
+    const target = cultivar.published_revision_id;
     await transition(
       trx,
       id,
       ['draft', 'returned', 'in_review'],
-      { based_on_id: cultivar.published_revision_id, status: 'draft', submitted_at: null },
+      { based_on_id: target, status: 'draft', submitted_at: null },
       `Revision ${row.number} is ${stateName(row.status)}; it can no longer be rebased.`,
     );
+    const outcome = await mergeOntoPublished(trx, row, target);
     await recordAudit(trx, {
       actorId: actor.id,
       action: 'revision.rebase',
       entity: 'revision',
       entityId: id,
-      detail: { from: row.based_on_id, to: cultivar.published_revision_id },
+      detail: { from: row.based_on_id, to: target, ...outcome },
     });
-    return { id, basedOnId: cultivar.published_revision_id };
+    return { id, basedOnId: target, onto: await numberOf(trx, target), ...outcome };
   });
 }

@@ -16,6 +16,7 @@ import {
   submitDraft,
   updateDraft,
 } from '@/lib/data/revisions';
+import { listConflicts, resolveConflict } from '@/lib/data/revision-conflicts';
 
 const SLUG = 'apple-jonathan';
 let admin: Actor, editor: Actor, editor2: Actor, engineer: Actor, buyer: Actor;
@@ -157,7 +158,12 @@ describe('revision workflow', () => {
     const firstNumber = (await db('property_revisions').where({ id: first }).first()).number;
     expect(error.message).toContain(`revision ${firstNumber} has been published since`);
     expect(await statusOf(second)).toBe('in_review');
-    await rebaseDraft(editor2, second);
+    // Both replaced the same modulus: the rebase holds it as a conflict until editor2 decides.
+    expect(await rebaseDraft(editor2, second)).toMatchObject({ conflicts: 1 });
+    await expect(submitDraft(editor2, second)).rejects.toMatchObject({ status: 400 });
+    const [conflict] = await listConflicts(editor2, second);
+    expect([conflict.mine?.value, conflict.theirs?.value]).toEqual([2.9, 2.8]);
+    await resolveConflict(editor2, second, { conflictId: conflict.id, choice: 'mine' });
     await submitDraft(editor2, second);
     await publishRevision(editor, second);
     expect((await getCultivar(engineer, SLUG)).published!.id).toBe(second);
