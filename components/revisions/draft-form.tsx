@@ -11,7 +11,9 @@ import {
   type ValueField,
   type ValueFields,
 } from '@/lib/validation/revision-form';
+import type { DiffValue } from '@/lib/properties/diff';
 import { ErrorSummary } from './error-summary';
+import { LiveDiff } from './live-diff';
 import type { SourceChoice } from './source-select';
 import { ValueRow } from './value-row';
 
@@ -30,11 +32,14 @@ export function DraftForm({
   summary: initialSummary,
   values,
   sources,
+  published,
 }: {
   revisionId: number;
   summary: string;
   values: ValueFields[];
   sources: SourceChoice[];
+  /** The newest published revision, for the live comparison below the form. */
+  published: { label: string; values: DiffValue[] };
 }) {
   const [state, action, pending] = useActionState(updateDraftAction, initialActionState);
   const nextKey = useRef(values.length);
@@ -65,56 +70,65 @@ export function DraftForm({
   };
 
   return (
-    <form onSubmit={submit} className="space-y-4" data-testid="draft-form" noValidate>
-      <input type="hidden" name="revisionId" value={revisionId} />
-      <div className="space-y-1">
-        <label htmlFor="summary" className="block text-sm font-medium text-stone-800">
-          What this revision changes
-        </label>
-        <textarea
-          id="summary"
-          name="summary"
-          rows={2}
-          maxLength={500}
-          value={summary}
-          onChange={(e) => setSummary(e.target.value)}
-          aria-invalid={errors.summary ? true : undefined}
-          aria-describedby={errors.summary ? 'summary-error' : undefined}
-          className="block w-full rounded-md border border-stone-300 bg-white px-3 py-1.5 text-sm shadow-sm focus:border-leaf-600 focus:outline-none focus:ring-1 focus:ring-leaf-600"
+    <>
+      <form onSubmit={submit} className="space-y-4" data-testid="draft-form" noValidate>
+        <input type="hidden" name="revisionId" value={revisionId} />
+        <div className="space-y-1">
+          <label htmlFor="summary" className="block text-sm font-medium text-stone-800">
+            What this revision changes
+          </label>
+          <textarea
+            id="summary"
+            name="summary"
+            rows={2}
+            maxLength={500}
+            value={summary}
+            onChange={(e) => setSummary(e.target.value)}
+            aria-invalid={errors.summary ? true : undefined}
+            aria-describedby={errors.summary ? 'summary-error' : undefined}
+            className="block w-full rounded-md border border-stone-300 bg-white px-3 py-1.5 text-sm shadow-sm focus:border-leaf-600 focus:outline-none focus:ring-1 focus:ring-leaf-600"
+          />
+          <p id="summary-error" aria-live="polite" className="text-xs text-red-700">
+            {errors.summary?.join(' ')}
+          </p>
+        </div>
+        {rows.map((row, i) => (
+          <ValueRow
+            key={row.key}
+            index={i}
+            fields={row.fields}
+            errors={rowErrors}
+            sources={sources}
+            onChange={(field, value) => update(i, field, value)}
+            onRemove={() => remove(i)}
+          />
+        ))}
+        <div className="space-y-1">
+          <Button type="button" variant="secondary" onClick={add}>
+            Add a value
+          </Button>
+          <p aria-live="polite" className="text-xs text-red-700" data-testid="values-error">
+            {errors.values?.join(' ')}
+          </p>
+        </div>
+        <FormMessage tone={state.ok ? 'success' : 'error'} message={state.message} />
+        <ErrorSummary errors={rowErrors} />
+        <div className="flex flex-wrap gap-3">
+          <Button type="submit" name="intent" value="save" disabled={pending}>
+            {pending ? 'Saving…' : 'Save'}
+          </Button>
+          <Button type="submit" name="intent" value="submit" variant="secondary" disabled={pending}>
+            Save and submit for review
+          </Button>
+        </div>
+      </form>
+      <div className="mt-6">
+        <LiveDiff
+          rows={rows.map((r) => r.fields)}
+          published={published.values}
+          label={published.label}
         />
-        <p id="summary-error" aria-live="polite" className="text-xs text-red-700">
-          {errors.summary?.join(' ')}
-        </p>
       </div>
-      {rows.map((row, i) => (
-        <ValueRow
-          key={row.key}
-          index={i}
-          fields={row.fields}
-          errors={rowErrors}
-          sources={sources}
-          onChange={(field, value) => update(i, field, value)}
-          onRemove={() => remove(i)}
-        />
-      ))}
-      <div className="space-y-1">
-        <Button type="button" variant="secondary" onClick={add}>
-          Add a value
-        </Button>
-        <p aria-live="polite" className="text-xs text-red-700" data-testid="values-error">
-          {errors.values?.join(' ')}
-        </p>
-      </div>
-      <FormMessage tone={state.ok ? 'success' : 'error'} message={state.message} />
-      <ErrorSummary errors={rowErrors} />
-      <div className="flex flex-wrap gap-3">
-        <Button type="submit" name="intent" value="save" disabled={pending}>
-          {pending ? 'Saving…' : 'Save'}
-        </Button>
-        <Button type="submit" name="intent" value="submit" variant="secondary" disabled={pending}>
-          Save and submit for review
-        </Button>
-      </div>
-    </form>
+    </>
   );
 }

@@ -12,6 +12,8 @@ import {
   submitDraft,
   updateDraft,
 } from '@/lib/data/revisions';
+import { resolveConflict } from '@/lib/data/revision-conflicts';
+import { createSource } from '@/lib/data/revision-sources';
 import { ValidationError } from '@/lib/errors';
 import { slugSchema } from '@/lib/validation/cultivars';
 import { formObject } from '@/lib/validation/form';
@@ -80,15 +82,55 @@ export async function updateDraftAction(_prev: ActionState, form: FormData): Pro
   return state.ok ? state : { ...state, values: typedValues(fields) };
 }
 
-/** Move a draft onto the cultivar's current published revision, keeping its saved values. */
+/**
+ * Move a draft onto the cultivar's current published revision by a three-way merge: what only
+ * the published revision changed is carried in; what both changed waits as a conflict.
+ */
 export async function rebaseDraftAction(_prev: ActionState, form: FormData): Promise<ActionState> {
   return runAction(async () => {
     const actor = await requireActor('revisions:edit');
     const { revisionId } = parseInput(revisionIdSchema, formObject(form));
-    await rebaseDraft(actor, revisionId);
+    const outcome = await rebaseDraft(actor, revisionId);
     refresh(revisionId);
-    return 'Rebased on the published revision: check the values against it, then submit.';
+    const carried = outcome.carried.length
+      ? ` Carried in from it: ${outcome.carried.join(', ')}.`
+      : ' Nothing else changed in it.';
+    const conflicts = outcome.conflicts
+      ? ` ${outcome.conflicts === 1 ? 'One value' : `${outcome.conflicts} values`} changed on both sides: decide each below before submitting.`
+      : '';
+    return `Rebased on ${outcome.onto}.${carried}${conflicts}`;
   });
+}
+
+/** Decide one conflict of a rebased draft: `conflictId`, `choice` = mine | theirs. */
+export async function resolveConflictAction(
+  _prev: ActionState,
+  form: FormData,
+): Promise<ActionState> {
+  return runAction(async () => {
+    const actor = await requireActor('revisions:edit');
+    const fields = formObject(form);
+    const { revisionId } = parseInput(revisionIdSchema, fields);
+    const { left } = await resolveConflict(actor, revisionId, fields);
+    refresh(revisionId);
+    const rest = left
+      ? ` ${left} left to decide.`
+      : ' No conflict left: the draft can be submitted.';
+    return `${fields.choice === 'theirs' ? 'Took the published value.' : 'Kept yours.'}${rest}`;
+  });
+}
+
+/** Add a source from the draft page (`key`, `kind`, `title`, …); it is then in the source lists. */
+export async function createSourceAction(_prev: ActionState, form: FormData): Promise<ActionState> {
+  const fields = formObject(form);
+  const state = await runAction(async () => {
+    const actor = await requireActor('revisions:edit');
+    const { revisionId } = parseInput(revisionIdSchema, fields);
+    const { key } = await createSource(actor, fields);
+    refresh(revisionId);
+    return `Source "${key}" added: choose it in a value's Source list.`;
+  });
+  return state.ok ? state : { ...state, values: fields };
 }
 
 /** Publish another editor's revision in review; a stale base answers 409 naming the newer one. */

@@ -1,6 +1,9 @@
 import { ChangePasswordForm } from '@/components/account/change-password-form';
 import { SignOutEverywhere } from '@/components/account/sign-out-everywhere';
 import { UnitSystemForm } from '@/components/account/unit-system-form';
+import { WorkflowMailForm } from '@/components/account/workflow-mail-form';
+import { can } from '@/lib/auth/roles';
+import { getWorkflowMail } from '@/lib/data/revision-mail-setting';
 import { getUnitSystem } from '@/lib/data/users';
 import { PageTitle } from '@/components/ui/page-title';
 import { requirePageActor } from '@/lib/auth/session';
@@ -18,6 +21,12 @@ export default async function AccountPage() {
       <ChangePasswordForm />
       <h2 className="mb-3 mt-10 font-semibold">Display units</h2>
       <UnitSystemForm current={await getUnitSystem(actor)} />
+      {can(actor.role, 'revisions:edit') ? (
+        <>
+          <h2 className="mb-3 mt-10 font-semibold">Revision e-mails</h2>
+          <WorkflowMailForm current={await getWorkflowMail(actor)} />
+        </>
+      ) : null}
       <h2 className="mb-3 mt-10 font-semibold">Sessions</h2>
       <SignOutEverywhere />
     </section>

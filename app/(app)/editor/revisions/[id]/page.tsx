@@ -1,16 +1,21 @@
 import Link from 'next/link';
 import type { ReactNode } from 'react';
+import { AddSourceForm } from '@/components/revisions/add-source-form';
+import { ConflictPanel } from '@/components/revisions/conflict-panel';
 import { DraftForm } from '@/components/revisions/draft-form';
 import { ImportPanel } from '@/components/revisions/import-panel';
 import { baseText } from '@/components/revisions/format';
 import { ReviewPanel } from '@/components/revisions/review-panel';
 import { RevisionDiff } from '@/components/revisions/revision-diff';
+import { OpenRevisionsNotice } from '@/components/revisions/open-revisions-notice';
 import { RevisionMeta } from '@/components/revisions/revision-meta';
 import { StaleNotice } from '@/components/revisions/stale-notice';
 import { ValueList } from '@/components/revisions/value-list';
 import { PageTitle } from '@/components/ui/page-title';
 import { requirePageActor } from '@/lib/auth/session';
 import { listSources } from '@/lib/data/editor-queue';
+import { listConflicts } from '@/lib/data/revision-conflicts';
+import { listOtherOpenRevisions } from '@/lib/data/revision-others';
 import { toDiffValue } from '@/lib/data/follows';
 import { titleFor } from '@/lib/page-title';
 import { diffRevisions } from '@/lib/properties/diff';
@@ -46,7 +51,14 @@ export default async function RevisionPage({ params }: { params: Promise<{ id: s
   const { revision: r, cultivar, base, mode, stale } = view;
   const baseLabel = baseText(base?.number ?? null);
   const diff = diffRevisions((base?.values ?? []).map(toDiffValue), r.values.map(toDiffValue));
-  const sources = mode === 'edit' ? await listSources(actor) : [];
+  const editing = mode === 'edit';
+  const open = ['draft', 'returned', 'in_review'].includes(r.status);
+  const [sources, conflicts, others] = await Promise.all([
+    editing ? listSources(actor) : [],
+    editing ? listConflicts(actor, r.id) : [],
+    open ? listOtherOpenRevisions(actor, r) : [],
+  ]);
+  const newest = cultivar.published;
   return (
     <div>
       <p className="mb-2 text-sm">
@@ -58,6 +70,11 @@ export default async function RevisionPage({ params }: { params: Promise<{ id: s
         {NOTE[mode](view)}
       </PageTitle>
       <RevisionMeta revision={r} cultivarSlug={cultivar.slug} baseNumber={base?.number ?? null} />
+      {others.length ? (
+        <div className="mt-4">
+          <OpenRevisionsNotice cultivar={cultivar.name} others={others} />
+        </div>
+      ) : null}
       {stale ? (
         <div className="mt-4">
           <StaleNotice
@@ -70,6 +87,11 @@ export default async function RevisionPage({ params }: { params: Promise<{ id: s
       ) : null}
       {mode === 'edit' ? (
         <>
+          {conflicts.length ? (
+            <Block title="Conflicts to decide before submitting">
+              <ConflictPanel revisionId={r.id} conflicts={conflicts} />
+            </Block>
+          ) : null}
           <Block title="Values">
             <DraftForm
               // A new key after an import, so the form starts again from the stored values.
@@ -83,7 +105,14 @@ export default async function RevisionPage({ params }: { params: Promise<{ id: s
                 year,
                 title,
               }))}
+              published={{
+                label: baseText(newest?.number ?? null),
+                values: cultivar.values.map(toDiffValue),
+              }}
             />
+          </Block>
+          <Block title="Sources">
+            <AddSourceForm revisionId={r.id} />
           </Block>
           <Block title="Import values from CSV">
             <ImportPanel revisionId={r.id} />
