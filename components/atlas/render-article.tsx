@@ -1,14 +1,16 @@
 import 'server-only';
 import type { MDXComponents } from 'mdx/types';
 import { compileMDX } from 'next-mdx-remote/rsc';
-import { createElement, type ComponentType, type ReactElement } from 'react';
+import { createElement, type ComponentType, type ReactElement, type ReactNode } from 'react';
 import rehypeKatex from 'rehype-katex';
 import remarkGfm from 'remark-gfm';
 import remarkMath from 'remark-math';
 import { atlasComponents } from '@/mdx-components';
+import { CheckLink } from '@/components/atlas/check-link';
 import { PropertyCard } from '@/components/atlas/property-card';
 import { SourceRefLink } from '@/components/atlas/source-ref';
 import type { Actor } from '@/lib/auth/actor';
+import { can } from '@/lib/auth/roles';
 import type { SourceRef } from '@/lib/properties/records';
 import type { Article } from '@/lib/atlas/articles';
 import { getSourcesByKeys, UnknownSourceError } from '@/lib/atlas/sources';
@@ -50,6 +52,12 @@ function boundComponents(actor: Actor, sources: SourceRef[]): MDXComponents {
       if (!source) throw new UnknownSourceError([String(id)]);
       return <SourceRefLink source={source} />;
     },
+    // Only a reader who may run checks gets links to them (a buyer reads the words alone).
+    CheckLink: ({ check, children }: { check: string; children?: ReactNode }) => (
+      <CheckLink check={check} mayRun={can(actor.role, 'checks:run')}>
+        {children}
+      </CheckLink>
+    ),
     PropertyCard: ({ cultivar }: { cultivar: string }) => (
       <PropertyCard actor={actor} cultivar={cultivar} citedKeys={cited} />
     ),
