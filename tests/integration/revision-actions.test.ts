@@ -8,12 +8,21 @@ import type { Actor } from '@/lib/auth/actor';
 import type { Role } from '@/lib/auth/roles';
 import { getActiveActor } from '@/lib/data/users';
 import { getRevision } from '@/lib/data/cultivars';
-import { createDraft, submitDraft, updateDraft } from '@/lib/data/revisions';
+import {
+  createDraft,
+  publishRevision,
+  rebaseDraft,
+  submitDraft,
+  updateDraft,
+} from '@/lib/data/revisions';
+import { listConflicts } from '@/lib/data/revision-conflicts';
 import { initialActionState } from '@/lib/actions/initial-state';
 import {
   createDraftAction,
+  createSourceAction,
   publishRevisionAction,
   rebaseDraftAction,
+  resolveConflictAction,
   returnRevisionAction,
   updateDraftAction,
 } from '@/lib/actions/revisions';
@@ -68,6 +77,35 @@ async function draftFor(who: Who) {
   const author = who === 'admin' || who === 'editor' ? actors[who] : actors.editor;
   return (await createDraft(author, SLUG)).id;
 }
+
+/**
+ * A draft of the actor's (editor@'s for roles that may not draft) holding one conflict: it
+ * changes the modulus, and editor2's different change (a new figure each time, so it differs
+ * from the base too) is published before it is rebased.
+ */
+let published = 0;
+async function conflictFor(who: Who) {
+  const author = who === 'admin' || who === 'editor' ? actors[who] : actors.editor;
+  const { id } = await createDraft(author, SLUG);
+  await updateDraft(author, id, { values: [modulus(4.1)] });
+  await publishRevision(
+    actors.admin.id === author.id ? actors.editor : actors.admin,
+    await othersInReview(4.2 + ++published / 100),
+  );
+  await rebaseDraft(author, id);
+  const [conflict] = await listConflicts(author, id);
+  return { revisionId: String(id), conflictId: String(conflict.id) };
+}
+
+let sourceCount = 0;
+/** A new source's form fields, with a key not used before. */
+const sourceFields = () => ({
+  key: `packhouse-trial-notes-${++sourceCount}`,
+  kind: 'report',
+  title: 'Packhouse bruise trial notes',
+  authors: 'Quality lab',
+  year: '2026',
+});
 
 interface Row {
   name: string;
@@ -141,9 +179,37 @@ const ACTIONS: Row[] = [
         ),
       ),
   },
+  {
+    name: 'resolveConflictAction',
+    expect: { 'signed-out': 401, buyer: 403, engineer: 403, editor: 200, admin: 200 },
+    call: async (who) =>
+      statusOf(
+        resolveConflictAction(
+          initialActionState,
+          form({ ...(await conflictFor(who)), choice: 'theirs' }),
+        ),
+      ),
+  },
+  {
+    name: 'createSourceAction',
+    expect: { 'signed-out': 401, buyer: 403, engineer: 403, editor: 200, admin: 200 },
+    call: async (who) =>
+      statusOf(
+        createSourceAction(
+          initialActionState,
+          form({ revisionId: String(await draftFor(who)), ...sourceFields() }),
+        ),
+      ),
+  },
 ];
 
-const WRITTEN = ['property_revisions', 'revision_values', 'audit_log'];
+const WRITTEN = [
+  'property_revisions',
+  'revision_values',
+  'revision_conflicts',
+  'sources',
+  'audit_log',
+];
 const snapshot = () => Promise.all(WRITTEN.map((t) => countRows(t)));
 const storedValues = async (id: number) =>
   (await getRevision(actors.editor, id)).values.map((v) => ({
@@ -203,6 +269,12 @@ describe('revision server actions', () => {
         'returnRevisionAction',
         () => returnRevisionAction(initialActionState, review({ comment: 'From elsewhere.' })),
       ],
+      [
+        'resolveConflictAction',
+        () =>
+          resolveConflictAction(initialActionState, draft({ conflictId: '1', choice: 'theirs' })),
+      ],
+      ['createSourceAction', () => createSourceAction(initialActionState, draft(sourceFields()))],
     ];
     it('covers every action of the role table', () => {
       expect(FOREIGN.map(([name]) => name)).toEqual(ACTIONS.map((r) => r.name));
