@@ -1,3 +1,4 @@
+import { formatDateTime } from '@/lib/dates';
 import type { AuditRow } from '@/lib/data/audit-reader';
 
 const COLUMNS = 'md:grid-cols-[9.5rem_minmax(0,1.3fr)_minmax(0,1fr)_minmax(0,0.8fr)_minmax(0,2fr)]';
@@ -34,7 +35,7 @@ export function AuditList({ entries }: { entries: AuditRow[] }) {
             className={`grid gap-1 border-t border-stone-200 px-3 py-2 text-sm first:border-t-0 md:gap-3 md:first:border-t ${COLUMNS}`}
             data-testid="audit-entry"
           >
-            <span className="num text-xs">{e.createdAt.replace('T', ' ').slice(0, 19)} UTC</span>
+            <span className="num text-xs">{formatDateTime(e.createdAt)}</span>
             <span className="wrap-anywhere">
               <span className={LABEL}>Who: </span>
               {e.actor ?? '—'}

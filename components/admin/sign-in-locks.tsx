@@ -1,5 +1,6 @@
 'use client';
 
+import { formatDateTime } from '@/lib/dates';
 import { useActionState } from 'react';
 import { clearSignInLockAction } from '@/lib/actions/users';
 import { initialActionState } from '@/lib/actions/initial-state';
@@ -57,7 +58,7 @@ export function SignInLocks({ locks }: { locks: LockRow[] }) {
               {l.scope === 'account'
                 ? 'Locked from every address (account-wide ceiling)'
                 : `Locked from ${l.address}`}{' '}
-              until <time dateTime={l.untilIso}>{new Date(l.untilIso).toUTCString()}</time>
+              until <time dateTime={l.untilIso}>{formatDateTime(l.untilIso)}</time>
             </div>
           </div>
           <ClearLock userId={l.userId} email={l.email} />

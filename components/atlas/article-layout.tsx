@@ -1,3 +1,4 @@
+import { formatDate } from '@/lib/dates';
 import Link from 'next/link';
 import type { ReactNode } from 'react';
 import type { Article } from '@/lib/atlas/articles';
@@ -38,7 +39,7 @@ export function ArticleLayout({
         </h1>
         <p className="mt-2 max-w-3xl text-stone-700">{fm.summary}</p>
         <p className="mt-3 text-xs text-stone-500">
-          {AUDIENCE[fm.audience]} · updated {fm.updated} · reviewed by{' '}
+          {AUDIENCE[fm.audience]} · updated {formatDate(fm.updated)} · reviewed by{' '}
           {/^[aeiou]/.test(fm.reviewedBy) ? 'an' : 'a'} {fm.reviewedBy} · most bruise-prone stage:{' '}
           {LINE_STAGES[fm.mostProneStage]}
         </p>

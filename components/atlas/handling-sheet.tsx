@@ -1,3 +1,4 @@
+import { formatDate } from '@/lib/dates';
 import { MACHINERY_CAUTION, STANDING_CAUTION } from '@/lib/cautions';
 import { shortCitation } from '@/lib/atlas/citations';
 import { LINE_STAGES } from '@/lib/atlas/frontmatter';
@@ -46,7 +47,7 @@ export function HandlingSheet({ sheet }: { sheet: Sheet }) {
         <h1 className="text-2xl font-semibold text-stone-900">{sheet.commodity.name}</h1>
         <p className="mt-1 text-sm text-stone-700">{fm.summary}</p>
         <p className="mt-2 text-xs text-stone-500">
-          Updated {fm.updated} · most bruise-prone stage:{' '}
+          Updated {formatDate(fm.updated)} · most bruise-prone stage:{' '}
           <strong className="text-clay-700">{LINE_STAGES[fm.mostProneStage]}</strong>
         </p>
       </div>

@@ -1,3 +1,4 @@
+import { formatDate } from '@/lib/dates';
 import Link from 'next/link';
 import type { Actor } from '@/lib/auth/actor';
 import { cardRows, type CardRow } from '@/lib/atlas/card-rows';
@@ -44,7 +45,7 @@ export async function PropertyCard({
       </p>
       <p className="text-xs text-stone-500">
         {published
-          ? `Revision ${published.number}, published ${published.publishedAt?.slice(0, 10) ?? ''}`
+          ? `Revision ${published.number}, published ${formatDate(published.publishedAt)}`
           : 'Nothing published yet'}
         {published?.isDemo ? ' · demo values' : ''}
       </p>

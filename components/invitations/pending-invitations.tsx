@@ -1,7 +1,6 @@
+import { formatDateTime } from '@/lib/dates';
 import type { OpenInvitation } from '@/lib/data/invitation-admin';
 import { InvitationActions } from './invitation-actions';
-
-const utc = (iso: string) => `${iso.replace('T', ' ').slice(0, 16)} UTC`;
 
 /**
  * Rows are keyed by address, not id: a resend replaces the row's invitation with a new one, and
@@ -52,7 +51,7 @@ export function PendingInvitations({ invitations }: { invitations: OpenInvitatio
               <span className="text-xs text-stone-500 md:hidden">
                 {inv.expired ? 'Expired ' : 'Link works until '}
               </span>
-              <span className="num text-xs">{utc(inv.expiresAt)}</span>
+              <span className="num text-xs">{formatDateTime(inv.expiresAt)}</span>
               {inv.expired ? <span className="hidden text-xs md:inline"> (expired)</span> : null}
             </span>
             <div className="mt-1 md:mt-0 md:w-40">

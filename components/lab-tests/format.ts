@@ -1,3 +1,4 @@
+import { formatDate } from '@/lib/dates';
 import type { SampleGeometry } from '@/lib/lab-tests/fit';
 
 /** A measured figure to n significant digits, without trailing zeros. */
@@ -11,4 +12,4 @@ export function geometryText(g: SampleGeometry): string {
     : `radii ${sig(g.radiiMm[0])} mm and ${sig(g.radiiMm[1])} mm`;
 }
 
-export const dateText = (iso: string) => iso.slice(0, 10);
+export const dateText = (iso: string) => formatDate(iso);

@@ -1,3 +1,4 @@
+import { formatDateTime } from '@/lib/dates';
 import type { SourceRef } from '@/lib/properties/records';
 import type { RevisionStatus } from '@/lib/properties/quantities';
 
@@ -11,7 +12,7 @@ export const STATUS_LABEL: Record<RevisionStatus, string> = {
 
 /** An ISO time as `2026-12-02 14:05 UTC`, or a dash. */
 export function when(iso: string | null): string {
-  return iso ? `${iso.slice(0, 10)} ${iso.slice(11, 16)} UTC` : '—';
+  return formatDateTime(iso);
 }
 
 /** A source as one line: authors (year) title. */

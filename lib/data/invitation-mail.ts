@@ -1,6 +1,7 @@
 import 'server-only';
 import { createHash, randomBytes } from 'node:crypto';
 import type { Role } from '@/lib/auth/roles';
+import { formatDateTime } from '@/lib/dates';
 import { AppError } from '@/lib/errors';
 import { appUrl, sendMail } from '@/lib/mail/send';
 
@@ -32,7 +33,7 @@ export async function mailInvitation(mail: InvitationMail, failure: string): Pro
       text: [
         `${mail.inviterName} has invited you to Tenderline as ${article}.`,
         '',
-        `Open this link to choose your name and password (it works once, until ${mail.expiresAt.toUTCString()}):`,
+        `Open this link to choose your name and password (it works once, until ${formatDateTime(mail.expiresAt)}):`,
         `${appUrl()}/invite/${mail.token}`,
         '',
         'If you did not expect this message, you can ignore it.',

@@ -1,3 +1,4 @@
+import { formatDateTime } from '@/lib/dates';
 import type { SourceKind } from './quantities';
 
 /**
@@ -33,5 +34,5 @@ export function doiHref(doi: string | null): string | null {
 
 /** Short date as shown in histories: `2026-12-02 14:05 UTC`, or a dash. */
 export function shortDate(iso: string | null): string {
-  return iso ? `${iso.slice(0, 10)} ${iso.slice(11, 16)} UTC` : '—';
+  return formatDateTime(iso);
 }

@@ -1,3 +1,4 @@
+import { formatDateTime } from '@/lib/dates';
 import Link from 'next/link';
 import { PageTitle } from '@/components/ui/page-title';
 import { can } from '@/lib/auth/roles';
@@ -146,7 +147,7 @@ export default async function AssessmentsPage({ searchParams }: { searchParams: 
                 <div className="num text-right">
                   {a.margin === null ? '—' : `margin ${a.margin.toFixed(2)}`}
                   <span className="block text-xs text-stone-500">
-                    {new Date(a.createdAt).toUTCString()}
+                    {formatDateTime(a.createdAt)}
                   </span>
                 </div>
               </li>

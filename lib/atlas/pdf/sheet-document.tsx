@@ -1,3 +1,4 @@
+import { formatDate } from '@/lib/dates';
 import { Document, Page, StyleSheet, Text, View } from '@react-pdf/renderer';
 import { MACHINERY_CAUTION, STANDING_CAUTION } from '@/lib/cautions';
 import { shortCitation } from '@/lib/atlas/citations';
@@ -95,7 +96,7 @@ export function SheetDocument({ sheet }: { sheet: HandlingSheet }) {
           <Text style={s.title}>{t(sheet.commodity.name)}</Text>
           <Text style={s.summary}>{t(fm.summary)}</Text>
           <Text style={s.meta}>
-            {`Updated ${fm.updated} · most bruise-prone stage: ${LINE_STAGES[fm.mostProneStage]}`}
+            {`Updated ${formatDate(fm.updated)} · most bruise-prone stage: ${LINE_STAGES[fm.mostProneStage]}`}
           </Text>
         </View>
         <Text style={s.h2}>Handling rules along the line</Text>

@@ -21,7 +21,7 @@ describe('audit list', () => {
       createdAt: '2026-12-02T10:00:00.000Z',
     };
     const html = renderToStaticMarkup(createElement(AuditList, { entries: [entry] }));
-    expect(html).toContain('2026-12-02 10:00:00 UTC');
+    expect(html).toContain('2026-12-02 10:00 UTC');
     expect(html).toMatch(/Who: <\/span>admin@kestrelvale.example/);
   });
 });

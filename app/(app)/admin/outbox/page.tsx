@@ -1,3 +1,4 @@
+import { formatDateTime } from '@/lib/dates';
 import { AdminTabs } from '@/components/admin/admin-tabs';
 import { MailBody } from '@/components/admin/mail-body';
 import { PageTitle } from '@/components/ui/page-title';
@@ -27,9 +28,7 @@ export default async function OutboxPage() {
           >
             <div className="flex flex-wrap justify-between gap-2 text-sm">
               <span className="font-medium wrap-anywhere">{m.subject}</span>
-              <span className="num text-xs text-stone-500">
-                {m.receivedAt.replace('T', ' ').slice(0, 19)} UTC
-              </span>
+              <span className="num text-xs text-stone-500">{formatDateTime(m.receivedAt)}</span>
             </div>
             <p className="text-xs text-stone-500 wrap-anywhere">
               from {m.from} to {m.to}

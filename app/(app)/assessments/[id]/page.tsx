@@ -1,3 +1,4 @@
+import { formatDateTime } from '@/lib/dates';
 import Link from 'next/link';
 import { notFound } from 'next/navigation';
 import { ReportActions } from '@/components/assessments/report-actions';
@@ -34,8 +35,8 @@ export default async function AssessmentReport({ params }: { params: Promise<{ i
   return (
     <article className="space-y-6" data-testid="assessment-report">
       <PageTitle title={a.title}>
-        {check.title} · version {a.version} · saved {new Date(a.createdAt).toUTCString()} by{' '}
-        {a.ownerName} · model {a.modelVersion}
+        {check.title} · version {a.version} · saved {formatDateTime(a.createdAt)} by {a.ownerName} ·
+        model {a.modelVersion}
         {a.parentId ? (
           <>
             {' '}
