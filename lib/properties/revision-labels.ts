@@ -8,11 +8,20 @@ export const STATUS_LABELS: Record<RevisionStatus, string> = {
   superseded: 'Superseded',
 };
 
-/** The two revisions a comparison starts from: the one before the newest, and the newest. */
-export function defaultPair(numbers: number[]): { from: number; to: number } | null {
-  const sorted = [...numbers].sort((a, b) => b - a);
+/**
+ * The comparison's pair when the address names one end or neither: the newest as "after", and as
+ * "before" the revision just older than "after" (so `?to=3` compares 2 with 3, never 5 with 3);
+ * with only one revision, that one on both sides.
+ */
+export function pairAround(
+  numbers: number[],
+  chosen: { from?: number | null; to?: number | null } = {},
+): { from: number; to: number } | null {
+  const sorted = [...new Set(numbers)].sort((a, b) => b - a);
   if (!sorted.length) return null;
-  return { from: sorted[1] ?? sorted[0], to: sorted[0] };
+  const to = chosen.to ?? sorted[0];
+  const from = chosen.from ?? sorted.find((n) => n < to) ?? to;
+  return { from, to };
 }
 
 /**

@@ -7,7 +7,7 @@ import { getRevision, listRevisions } from '@/lib/data/cultivars';
 import { toDiffValue } from '@/lib/data/follows';
 import type { SourceRef } from '@/lib/properties/records';
 import { diffRevisions } from '@/lib/properties/diff';
-import { chosenRevision, defaultPair } from '@/lib/properties/revision-labels';
+import { chosenRevision, pairAround } from '@/lib/properties/revision-labels';
 import { titleFor } from '@/lib/page-title';
 import { getCultivarOr404 } from '../lookup';
 
@@ -27,9 +27,12 @@ export default async function ComparePage({ params, searchParams }: Props) {
   const revisions = await listRevisions(actor, cultivar.slug);
   const query = await searchParams;
   const numbers = revisions.map((r) => r.number);
-  const pair = defaultPair(numbers);
-  const from = chosenRevision(query.from, numbers, pair?.from ?? null);
-  const to = chosenRevision(query.to, numbers, pair?.to ?? null);
+  const to = chosenRevision(query.to, numbers, pairAround(numbers)?.to ?? null);
+  const from = chosenRevision(
+    query.from,
+    numbers,
+    pairAround(numbers, { to: to.number })?.from ?? null,
+  );
   const a = revisions.find((r) => r.number === from.number);
   const b = revisions.find((r) => r.number === to.number);
   const [before, after] = await Promise.all(
