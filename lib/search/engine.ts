@@ -1,4 +1,3 @@
-import Fuse from 'fuse.js';
 import { snippetOf, usefulRanges } from './snippet';
 import {
   KIND_LABELS,
@@ -8,35 +7,55 @@ import {
   type SearchRecord,
   type SearchResponse,
 } from './types';
+import { createWordMatcher, foldWord, type WordMatch } from './word-match';
 
 /**
- * Fuzzy search over one role class's records. Each query word is matched on its own, so words in
- * any order, misspelt ("Jonathn") or cut short ("kiwi") still find their record; a record is
- * found when every word of the query matches somewhere in it.
+ * Search over one role class's records. Each query word is matched on its own (word-match.ts:
+ * exactly, as the beginning of a word, or misspelt), so words in any order, misspelt
+ * ("Jonathn") or cut short ("kiwi") still find their record; a record is found when every word
+ * of the query matches somewhere in it.
  *
- * The fuzzy matching is fuse.js's (Bitap, threshold 0.3, anywhere in a word, at least two
- * characters), run over the index's vocabulary — each distinct word once — rather than over
- * every record's full text: a query word is compared with a few thousand short words instead of
- * the 150 000 characters of the articles, and the records holding the words it matched come from
- * an inverted index. Scores follow fuse.js's token search: per field, the mean of the query
- * words' match quality weighted by their inverse document frequency; fields combined as the
- * product of score^weight (title 3, keywords 1.5, subtitle and text 1; field length ignored, so a
- * long section body does not always rank below a short title with the same match).
+ * Words are matched against the index's vocabulary — each distinct word once — and the records
+ * holding the words a query word matched come from an inverted index.
+ *
+ * Ranking: names first. A record whose title is the query ("Kent", "Apple", or misspelt,
+ * "avacado") leads; then titles that begin with it ("Apple (commodity record)"); then titles
+ * holding every query word; then records whose names (title, subtitle, keywords: a cultivar's
+ * commodity, a paper's title, its authors) hold every word ("pear cold chain" → the pear
+ * article's "Cold chain and transport"); then the rest. Within a rank, records holding query
+ * words side by side come first ("bruise threshold" as a phrase, not two words a paragraph
+ * apart), then those whose names hold more of the words, then the score, which follows fuse.js's
+ * token search: per field, the mean of the query words' match quality weighted by their inverse
+ * document frequency; fields combined as the product of score^weight (title 3, keywords 1.5,
+ * subtitle and text 1; field length ignored, so a long section body does not always rank below a
+ * short title with the same match).
  */
 const FIELDS = ['title', 'keywords', 'subtitle', 'text'] as const;
 const WEIGHTS = [3, 1.5, 1, 1];
 const TOTAL_WEIGHT = WEIGHTS.reduce((a, b) => a + b, 0);
+const TITLE = 0;
+const KEYWORDS = 1;
+const TEXT = 3;
+/** Two word ids as one number (room for two million words). */
+const pairKey = (a: number, b: number) => a * 2 ** 21 + b;
+/** What may stand between two words of one phrase: spaces, a hyphen, an apostrophe (not "|", "."). */
+const PHRASE_GAP = /^[\s\-'’]*$/u;
+/** Pairs of query words whose matches make more pairs than this are not checked side by side. */
+const MAX_PAIRS = 4096;
 const PER_GROUP = 6;
+
+/** Ranks, best first: the title is the query, begins with it, holds it; names hold it; the rest. */
+const Rank = { Title: 0, TitleStart: 1, TitleWords: 2, NameWords: 3, Other: 4 } as const;
+type Rank = (typeof Rank)[keyof typeof Rank];
 
 /** Letters, marks, digits and underscores, as fuse.js tokenises. */
 const WORD = /[\p{L}\p{M}\p{N}_]+/gu;
-const fold = (word: string) => word.normalize('NFD').replace(/\p{M}/gu, '');
 
 /** The words of a text with their offsets: lower case, diacritics folded for matching. */
 function wordsOf(text: string): { word: string; start: number; length: number }[] {
   const out: { word: string; start: number; length: number }[] = [];
   for (const m of text.toLowerCase().matchAll(WORD)) {
-    out.push({ word: fold(m[0]), start: m.index, length: m[0].length });
+    out.push({ word: foldWord(m[0]), start: m.index, length: m[0].length });
   }
   return out;
 }
@@ -48,12 +67,6 @@ export interface SearchIndex {
   search(query: string): SearchResponse;
 }
 
-/** A vocabulary word a query word matched: its score (0 exact … 1) and the matched characters. */
-interface WordMatch {
-  score: number;
-  ranges: Range[];
-}
-
 export function createSearchIndex(records: SearchRecord[]): SearchIndex {
   const vocabulary: string[] = [];
   const idOf = new Map<string, number>();
@@ -61,44 +74,81 @@ export function createSearchIndex(records: SearchRecord[]): SearchIndex {
   const postings: number[][] = [];
   /** fields holding each word (fuse.js's document frequency, over fields) */
   const fieldFrequency = new Map<string, number>();
+  /** words of some title or keyword list: names, preferred when correcting a misspelling */
+  const nameWords = new Set<number>();
+  /** per record, each pair of words side by side in one of its fields (see pairKey) */
+  const adjacent: Set<number>[] = [];
   let fieldCount = 0;
   records.forEach((record, r) => {
+    const pairs = new Set<number>();
+    adjacent.push(pairs);
     FIELDS.forEach((field, f) => {
-      const words = new Set(wordsOf(record[field]).map((w) => w.word));
-      if (!words.size) return;
-      fieldCount++;
-      for (const word of words) {
+      const text = record[field];
+      const words = wordsOf(text);
+      const ids = words.map(({ word }) => {
         let id = idOf.get(word);
         if (id === undefined) {
           id = vocabulary.push(word) - 1;
           idOf.set(word, id);
           postings.push([]);
         }
+        return id;
+      });
+      if (!ids.length) return;
+      fieldCount++;
+      for (let i = 1; i < ids.length; i++) {
+        const gap = text.slice(words[i - 1].start + words[i - 1].length, words[i].start);
+        if (PHRASE_GAP.test(gap)) pairs.add(pairKey(ids[i - 1], ids[i]));
+      }
+      for (const id of new Set(ids)) {
         postings[id].push(r * 4 + f);
+        const word = vocabulary[id];
         fieldFrequency.set(word, (fieldFrequency.get(word) ?? 0) + 1);
+        if (f === TITLE || f === KEYWORDS) nameWords.add(id);
       }
     });
   });
-  const fuse = new Fuse(vocabulary, {
-    includeMatches: true,
-    includeScore: true,
-    ignoreLocation: true,
-    ignoreDiacritics: true,
-    threshold: 0.3,
-    minMatchCharLength: 2,
-    shouldSort: false,
-  });
+  const matchWord = createWordMatcher(
+    vocabulary,
+    vocabulary.map((w) => fieldFrequency.get(w) ?? 0),
+    fieldCount,
+    vocabulary.map((_, id) => nameWords.has(id)),
+  );
+  /** Each record's title as word ids, in order (for "the title is / begins with the query"). */
+  const titleWords = records.map((r) => wordsOf(r.title).map((w) => idOf.get(w.word)!));
 
-  /** Vocabulary words matching one query word. */
-  function matchWord(term: string): Map<number, WordMatch> {
-    const found = new Map<number, WordMatch>();
-    for (const m of fuse.search(term)) {
-      found.set(m.refIndex, {
-        score: m.score ?? 0,
-        ranges: (m.matches?.[0]?.indices ?? []).map(([s, e]) => [s, e] as Range),
-      });
+  /** How a record's names hold the query words (see Rank). */
+  function rankOf(
+    r: number,
+    terms: string[],
+    matched: Map<number, WordMatch>[],
+    inTitle: Uint8Array,
+    inNames: Uint8Array,
+  ): Rank {
+    if (!inNames.every((c) => c === 1)) return Rank.Other;
+    if (!inTitle.every((c) => c === 1)) return Rank.NameWords;
+    const title = titleWords[r];
+    if (title.length < terms.length || !terms.every((_, t) => matched[t].has(title[t]))) {
+      return Rank.TitleWords;
     }
-    return found;
+    return title.length === terms.length ? Rank.Title : Rank.TitleStart;
+  }
+
+  /** For each two neighbouring query words, the word pairs they match (null: too many to check). */
+  function queryPairs(matched: Map<number, WordMatch>[]): (number[] | null)[] {
+    return matched.slice(1).map((next, t) => {
+      const prev = matched[t];
+      if (prev.size * next.size > MAX_PAIRS) return null;
+      const keys: number[] = [];
+      for (const a of prev.keys()) for (const b of next.keys()) keys.push(pairKey(a, b));
+      return keys;
+    });
+  }
+
+  /** How many neighbouring query words stand side by side in one of the record's fields. */
+  function sideBySide(r: number, pairs: (number[] | null)[]): number {
+    const held = adjacent[r];
+    return pairs.filter((keys) => keys?.some((k) => held.has(k))).length;
   }
 
   /** Ranges of `text` covered by matched words, in its own offsets. */
@@ -164,26 +214,55 @@ export function createSearchIndex(records: SearchRecord[]): SearchIndex {
           }
         }
       });
-      // Per record: every query word matched in some field, and the combined score.
-      const perRecord = new Map<number, { covered: Uint8Array; score: number }>();
+      // Per record: which query words each kind of field holds, and the combined score.
+      const perRecord = new Map<
+        number,
+        { covered: Uint8Array; inTitle: Uint8Array; inNames: Uint8Array; score: number }
+      >();
       for (const [code, scores] of best) {
         const r = Math.floor(code / 4);
         const f = code % 4;
         let entry = perRecord.get(r);
-        if (!entry) perRecord.set(r, (entry = { covered: new Uint8Array(terms.length), score: 1 }));
+        if (!entry) {
+          const n = terms.length;
+          entry = {
+            covered: new Uint8Array(n),
+            inTitle: new Uint8Array(n),
+            inNames: new Uint8Array(n),
+            score: 1,
+          };
+          perRecord.set(r, entry);
+        }
         let weighted = 0;
         scores.forEach((s, t) => {
           if (s > 1) return;
           entry.covered[t] = 1;
+          if (f === TITLE) entry.inTitle[t] = 1;
+          if (f !== TEXT) entry.inNames[t] = 1;
           weighted += idf[t] * (1 - s);
         });
         const fieldScore = Math.max(0.001, idfTotal > 0 ? 1 - weighted / idfTotal : 0);
         entry.score *= fieldScore ** (WEIGHTS[f] / TOTAL_WEIGHT);
       }
+      const pairs = queryPairs(matched);
       const results = [...perRecord]
         .filter(([, e]) => e.covered.every((c) => c === 1))
-        .map(([r, e]) => ({ record: records[r], score: e.score, order: r }))
-        .sort((a, b) => a.score - b.score || a.order - b.order);
+        .map(([r, e]) => ({
+          record: records[r],
+          rank: rankOf(r, terms, matched, e.inTitle, e.inNames),
+          phrase: sideBySide(r, pairs),
+          named: e.inNames.reduce((a, b) => a + b, 0),
+          score: e.score,
+          order: r,
+        }))
+        .sort(
+          (a, b) =>
+            a.rank - b.rank ||
+            b.phrase - a.phrase ||
+            b.named - a.named ||
+            a.score - b.score ||
+            a.order - b.order,
+        );
       // Groups come in the order of their best hit, so "Wang" shows sources before near-misses.
       const first = (kind: string) => results.findIndex((res) => res.record.kind === kind);
       const groups = SEARCH_KINDS.filter((kind) => first(kind) >= 0)
