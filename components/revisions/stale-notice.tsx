@@ -30,8 +30,9 @@ export function StaleNotice({
       {canRebase ? (
         <>
           <p className="mt-1">
-            Rebasing keeps this revision&apos;s saved values (save your changes first) and makes it
-            a draft again; check the values against {newer}, then submit.
+            Rebasing brings {newer} into this revision: values only {newer} changed are carried in,
+            yours stay, and any value you both changed is shown side by side for you to decide
+            before submitting. Save your changes first; the revision becomes a draft again.
           </p>
           <RebaseForm revisionId={revisionId} target={newer} />
         </>

@@ -94,8 +94,9 @@ export default async function RevisionPage({ params }: { params: Promise<{ id: s
           ) : null}
           <Block title="Values">
             <DraftForm
-              // A new key after an import, so the form starts again from the stored values.
-              key={`${r.id}:${r.values.length}`}
+              // A new key when the stored values changed under the form (an import, a rebase, a
+              // decided conflict), so it starts again from them; a plain save keeps its state.
+              key={`${r.id}:${r.basedOnId}:${r.values.length}:${conflicts.length}`}
               revisionId={r.id}
               summary={r.summary ?? ''}
               values={r.values.map(valueFieldsOf)}
