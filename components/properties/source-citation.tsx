@@ -45,7 +45,12 @@ export function SourceCitation({ source }: { source: SourceRef | null }) {
       </p>
       <p className="text-xs text-stone-500">
         {SOURCE_KIND_LABELS[source.kind]}
-        {source.note ? ` · How it was read: ${source.note}` : ''}
+        {source.note ? (
+          <>
+            {' · How it was read: '}
+            <span data-prose="">{source.note}</span>
+          </>
+        ) : null}
       </p>
     </div>
   );

@@ -35,7 +35,7 @@ export function SourceSummary({ label, value }: { label: string; value: TableVal
           {s.year ? ` (${s.year})` : ''}. <cite className="not-italic">{s.title}</cite>
           {stop(s.title)}
           {s.venue ? ` ${s.venue}${stop(s.venue)}` : ''}
-          {s.note ? ` ${s.note}` : ''}
+          {s.note ? <span data-prose=""> {s.note}</span> : null}
         </span>
       ) : (
         <span className="mt-1 block">Source: none given.</span>
@@ -44,7 +44,7 @@ export function SourceSummary({ label, value }: { label: string; value: TableVal
         <span className="mt-1 block text-stone-600">
           {value.conditions.map(([k, v]) => (
             <span key={k} className="block">
-              {k}: <ConditionText text={v} />
+              {k}: <ConditionText text={v} label={k} />
               {stop(v)}
             </span>
           ))}

@@ -33,7 +33,7 @@ export function ValueCard({ value }: { value: RevisionValue }) {
             <div key={k} className="contents">
               <dt className="text-stone-500">{k}</dt>
               <dd className="text-stone-800">
-                <ConditionText text={v} />
+                <ConditionText text={v} label={k} />
               </dd>
             </div>
           ))}

@@ -14,6 +14,13 @@ function converted(value: number, unit: string, system: UnitSystem): string {
 }
 
 /**
+ * The conditions that state one measure (a probe, a rate, a temperature) and are shown in the
+ * reader's units. Method, ripeness, storage and notes are prose, quoted as written: a note may
+ * carry its own arithmetic ("14 in × 25.4 = 355.6 mm") that a conversion would garble.
+ */
+export const MEASURED_CONDITIONS: readonly string[] = ['Temperature', 'Loading rate', 'Probe'];
+
+/**
  * A condition as the source words it, with each measure in it shown in the reader's units
  * ("62 mm/min" → "2.44 in/min", "20 °C" → "68 °F"); a text that already gives °F keeps its °C.
  * SI readers get the text unchanged.

@@ -1,5 +1,6 @@
 import type { CultivarRecord } from './records';
 import { toCsv } from '@/lib/csv';
+import { conditionIn } from './condition-units';
 import { displayUnit, toDisplay, type UnitSystem } from '@/lib/units';
 import { QUANTITIES, type Quantity } from './quantities';
 
@@ -36,7 +37,7 @@ export function cultivarsCsv(cultivars: CultivarRecord[], system: UnitSystem = '
       c.name,
       c.published?.number ?? null,
       QUANTITIES[v.quantity as Quantity].label,
-      v.variant,
+      conditionIn(v.variant, system),
       shown(v.value, v.unit),
       displayUnit(v.unit, system),
       shown(v.low, v.unit),

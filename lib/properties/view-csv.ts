@@ -1,6 +1,7 @@
 import { toCsv, type CsvCell } from '@/lib/csv';
 import { displayUnit, toDisplay, type UnitSystem } from '@/lib/units';
 import { keyOf } from './api-shape';
+import { conditionIn } from './condition-units';
 import { formatValueIn } from './format-units';
 import { QUANTITIES, variantsOf, type Quantity } from './quantities';
 import { shortCitation, type TableRow, type TableValue } from './table-rows';
@@ -31,7 +32,7 @@ function headerOf(q: Quantity, system: UnitSystem): string[] {
 }
 
 const described = (v: TableValue, system: UnitSystem) =>
-  `${formatValueIn(v, system)}${v.variant ? ` ${v.variant}` : ''}, ${shortCitation(v.source)}`;
+  `${formatValueIn(v, system)}${v.variant ? ` ${conditionIn(v.variant, system)}` : ''}, ${shortCitation(v.source)}`;
 
 function cellsOf(row: TableRow, q: Quantity, system: UnitSystem): CsvCell[] {
   const [first, ...more] = row.values[q];
@@ -39,7 +40,7 @@ function cellsOf(row: TableRow, q: Quantity, system: UnitSystem): CsvCell[] {
     x == null || !first ? x : toDisplay(x, first.unit, system);
   return [
     shown(first?.value),
-    ...(hasKinds(q) ? [first?.variant || null] : []),
+    ...(hasKinds(q) ? [first?.variant ? conditionIn(first.variant, system) : null] : []),
     shown(first?.low),
     shown(first?.high),
     shown(first?.sd),

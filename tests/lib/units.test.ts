@@ -63,3 +63,32 @@ describe('values with their spread in the reader units', () => {
     );
   });
 });
+
+describe('acceleration and round defaults', () => {
+  it('shows m/s² as ft/s² (1 ft = 0.3048 m exactly, NIST SP 811 B.8)', async () => {
+    const { displayUnit, toDisplay } = await import('@/lib/units');
+    expect(displayUnit('m/s²', 'us')).toBe('ft/s²');
+    // Standard gravity 9.80665 m/s² = 32.174 05 ft/s² (9.80665 ÷ 0.3048); relative 1e-9.
+    expect(Math.abs(toDisplay(9.80665, 'm/s²', 'us') / 32.17404856 - 1)).toBeLessThan(1e-9);
+  });
+
+  it('rounds a converted default to 2 significant figures, or 1 within 2.5 %', async () => {
+    const { niceDefault } = await import('@/lib/units');
+    // 20 mm = 0.7874 in: one figure (0.8) is 1.6 % off, within 2.5 %.
+    expect(niceDefault(20, 'mm', 'us')).toBe(0.8);
+    // 1200 mm = 47.24 in: one figure (50) is 5.8 % off, so two: 47.
+    expect(niceDefault(1200, 'mm', 'us')).toBe(47);
+    // 180 g = 6.349 oz: 6 is 5.5 % off, so 6.3.
+    expect(niceDefault(180, 'g', 'us')).toBe(6.3);
+    // 100 kPa = 14.50 psi: 10 is 31 % off, so 15 (two figures).
+    expect(niceDefault(100, 'kPa', 'us')).toBe(15);
+  });
+
+  it('leaves SI defaults and unitless ones exactly as given', async () => {
+    const { niceDefault } = await import('@/lib/units');
+    expect(niceDefault(1.25, 'mm', 'si')).toBe(1.25);
+    expect(niceDefault(0.35, '–', 'us')).toBe(0.35);
+    expect(niceDefault(6.5, 'ms', 'us')).toBe(6.5);
+    expect(niceDefault(0, 'mm', 'us')).toBe(0);
+  });
+});
