@@ -4,7 +4,51 @@ import { useUnits } from '@/components/units/units-provider';
 import type { ReactNode } from 'react';
 import { CultivarSelect, MeasureField, publishedHint, type CultivarOption } from './check-fields';
 import { FIELD_UNITS, type CheckField } from '@/lib/checks/field-units';
-import type { FormText } from './initial-text';
+import { parseNumberText, readerDecimalMark } from '@/lib/number-text';
+import { niceDefault, toDisplay, type UnitSystem } from '@/lib/units';
+import { formEntries, initialText, type FormText } from './initial-text';
+
+/**
+ * A form's starting text: its defaults (SI) as round numbers in the reader's units (niceDefault:
+ * two significant figures, or one within 2.5 %, so a 20 mm pad reads 0.8 in), and figures from
+ * the page's address (SI, typed by someone before) converted without that rounding.
+ */
+export function startingText(defaults: FormText, fromAddress: FormText, system: UnitSystem) {
+  const nice = Object.fromEntries(
+    formEntries(defaults).map(([key, value]) => [
+      key,
+      value.trim() === '' ? '' : String(niceDefault(Number(value), FIELD_UNITS[key], system)),
+    ]),
+  );
+  const typed = formEntries(fromAddress);
+  const kept = initialText(
+    Object.fromEntries(typed.filter(([, v]) => v.trim() !== '')),
+    (v, unit) => toDisplay(v, unit, system),
+  );
+  // A field someone emptied stays empty.
+  const emptied = Object.fromEntries(typed.filter(([, v]) => v.trim() === ''));
+  return { ...nice, ...kept, ...emptied } as FormText;
+}
+
+/**
+ * The typed figures with every readable number written plainly ("20,5" → "20.5"); a text that
+ * is not one number is left as typed, so the route names its field (and the field says why).
+ */
+export function typedText(text: FormText): FormText {
+  const mark = readerDecimalMark();
+  return Object.fromEntries(
+    formEntries(text).map(([key, value]) => {
+      const n = parseNumberText(value, mark);
+      return [key, n.ok && n.value !== null ? String(n.value) : value];
+    }),
+  );
+}
+
+/** Why a typed figure cannot be read, or undefined (see parseNumberText). */
+function typingProblem(text: string): string[] | undefined {
+  const n = parseNumberText(text, readerDecimalMark());
+  return n.ok ? undefined : [n.message];
+}
 
 /** A field of a check form: its key in the route's input, its label, an optional hint. */
 export type FieldSpec = readonly [key: CheckField, label: string, hint?: string];
@@ -39,7 +83,7 @@ export function MeasureFields({
         hint={hint || undefined}
         value={state.text[key] ?? ''}
         onChange={state.set(key)}
-        errors={state.fieldErrors[key]}
+        errors={typingProblem(state.text[key] ?? '') ?? state.fieldErrors[key]}
         placeholder={publishedHint(option, key, (v) => units.toDisplay(v, unit))}
       />
     );
