@@ -86,8 +86,8 @@ test('US customary units apply to what is typed and shown; SI stays stored', asy
     await expect(figures).toContainText('lbf');
     await page.screenshot({ path: 'tests/artifacts/check-drop-us-units.png', fullPage: true });
     // Stack chart: the "this fill" marker sits at the typed fill depth. The default 600 mm shows
-    // as 23.62 in; the depth axis runs to 1.5 × that or more, so the marker lies at a third to
-    // two thirds of the plot's width. (It was converted twice and sat at 1/25.4 of its place,
+    // as 24 in (23.62 rounded to a default's round figure); the depth axis runs to 1.5 × that or
+    // more, so the marker lies at a third to two thirds of the plot's width. (It was converted twice and sat at 1/25.4 of its place,
     // by the left edge.)
     await page.goto('/checks/stack');
     await page.getByLabel('Cultivar').selectOption('');
@@ -96,7 +96,7 @@ test('US customary units apply to what is typed and shown; SI stays stored', asy
     await page.getByLabel('Diameter').fill('3.1496');
     await page.getByLabel('Mass').fill('7.0548');
     await page.getByLabel('Static bruise threshold').fill('14.504');
-    await expect(page.getByLabel('Fill depth')).toHaveValue('23.62');
+    await expect(page.getByLabel('Fill depth')).toHaveValue('24');
     const chart = page.getByTestId('chart-stack-pressure');
     const marker = chart.locator('.marker-this-fill line, line.marker-this-fill').first();
     await expect(marker).toBeAttached();
