@@ -87,8 +87,8 @@ test('US customary units apply to what is typed and shown; SI stays stored', asy
     await page.screenshot({ path: 'tests/artifacts/check-drop-us-units.png', fullPage: true });
     // Stack chart: the "this fill" marker sits at the typed fill depth. The default 600 mm shows
     // as 24 in (23.62 rounded to a default's round figure); the depth axis runs to 1.5 × that or
-    // more, so the marker lies at a third to two thirds of the plot's width. (It was converted twice and sat at 1/25.4 of its place,
-    // by the left edge.)
+    // more, so the marker lies at a third to two thirds of the plot's width. (It was converted
+    // twice and sat at 1/25.4 of its place, by the left edge.)
     await page.goto('/checks/stack');
     await page.getByLabel('Cultivar').selectOption('');
     await page.getByLabel("Young's modulus").fill('435.11');
