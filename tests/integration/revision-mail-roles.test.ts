@@ -27,6 +27,7 @@ const put = (body: unknown, origin = SAME_SITE.origin) =>
       headers: { 'content-type': 'application/json', origin },
       body: JSON.stringify(body),
     }),
+    {},
   );
 const form = (value: string) => {
   const f = new FormData();

@@ -27,6 +27,7 @@ const put = (body: unknown) =>
       headers: { 'content-type': 'application/json', origin: 'http://tenderline.test' },
       body: JSON.stringify(body),
     }),
+    {},
   );
 
 describe('an editor adds a source from the draft page', () => {
