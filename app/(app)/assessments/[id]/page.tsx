@@ -54,7 +54,7 @@ export default async function AssessmentReport({ params }: { params: Promise<{ i
             <Link href={`/properties/${a.cultivarSlug}`} className="underline">
               {a.cultivarName}
             </Link>
-            , property revision <span className="num">{a.revisionNumber}</span> (id {a.revisionId}).
+            , property revision <span className="num">{a.revisionNumber}</span>.
           </p>
         ) : (
           <p>Data: values entered by hand (no cultivar).</p>
