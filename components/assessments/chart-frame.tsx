@@ -12,6 +12,7 @@ import {
 } from 'recharts';
 import { useUnits } from '@/components/units/units-provider';
 import type { ChartSpec } from '@/lib/checks/report';
+import { niceTicks } from '@/lib/reports/nice-ticks';
 
 const COLOURS = ['#2f5f2c', '#8a4b16', '#1d4ed8', '#7c3aed', '#be123c', '#0f766e'];
 const tick = (v: number) => String(Number(v.toPrecision(3)));
@@ -24,6 +25,20 @@ export function ChartFrame({ spec, testId }: { spec: ChartSpec; testId?: string 
   const u = useUnits();
   const label = (a: ChartSpec['x']) =>
     a.unit === '–' ? a.label : `${a.label} (${u.unit(a.unit)})`;
+  // Round ticks in the reader's units (Heckbert's nice numbers, as the PDF): over the data and
+  // the markers, the y axis from zero.
+  const marks = spec.markers ?? [];
+  const xs = [
+    ...spec.series.flatMap((s) => s.points.map((p) => p[0])),
+    ...marks.flatMap((m) => (m.x !== undefined ? [m.x] : [])),
+  ].map((v) => u.toDisplay(v, spec.x.unit));
+  const ys = [
+    0,
+    ...spec.series.flatMap((s) => s.points.map((p) => p[1])),
+    ...marks.flatMap((m) => (m.y !== undefined ? [m.y] : [])),
+  ].map((v) => u.toDisplay(v, spec.y.unit));
+  const xAxis = niceTicks(Math.min(...xs), Math.max(...xs));
+  const yAxis = niceTicks(Math.min(...ys), Math.max(...ys));
   return (
     <figure
       className="rounded-lg border border-stone-200 bg-white p-2"
@@ -39,12 +54,18 @@ export function ChartFrame({ spec, testId }: { spec: ChartSpec; testId?: string 
             <XAxis
               dataKey="x"
               type="number"
-              domain={['dataMin', 'dataMax']}
+              domain={[xAxis.min, xAxis.max]}
+              ticks={xAxis.ticks}
               tickFormatter={tick}
               allowDuplicatedCategory={false}
               label={{ value: label(spec.x), position: 'insideBottom', offset: -10 }}
             />
-            <YAxis width={52} tickFormatter={tick} />
+            <YAxis
+              width={52}
+              domain={[yAxis.min, yAxis.max]}
+              ticks={yAxis.ticks}
+              tickFormatter={tick}
+            />
             <Tooltip formatter={(v) => tick(Number(v))} labelFormatter={(v) => tick(Number(v))} />
             {spec.series.map((s, i) => (
               <Line

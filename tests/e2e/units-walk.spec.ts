@@ -106,6 +106,18 @@ for (const system of ['si', 'us'] as const) {
       text = await shownText(page);
       expect(unitsOf(system, text).length).toBeGreaterThan(3);
       expect(unitsOf(other(system), text)).toEqual([]);
+      // Chart ticks at round values: evenly spaced by 1, 2 or 5 × a power of ten.
+      const ticks = (
+        await page
+          .getByTestId('chart-stack-pressure')
+          .locator('.recharts-xAxis .recharts-cartesian-axis-tick-value')
+          .allInnerTexts()
+      ).map(Number);
+      expect(ticks.length).toBeGreaterThan(2);
+      const step = ticks[1] - ticks[0];
+      const mantissa = step / 10 ** Math.floor(Math.log10(step));
+      expect([1, 2, 5]).toContain(Math.round(mantissa * 1e6) / 1e6);
+      ticks.forEach((t, i) => expect(Math.abs(t - ticks[0] - i * step)).toBeLessThan(step * 1e-6));
       const pdf = await page.request.get(`/api/assessments/${assessment.id}/report`);
       expect(pdf.headers()['content-type']).toBe('application/pdf');
       const inputs = await (
