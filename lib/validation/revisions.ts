@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { parseNumberText } from '@/lib/number-text';
 import {
   OBSERVATIONS,
   OBSERVED_QUANTITIES,
@@ -46,10 +47,22 @@ function boundsText(q: Quantity): string {
   return `${b.minOpen ? 'above' : 'from'} ${b.min} ${b.maxOpen ? 'and below' : 'up to'} ${b.max}${unit}`;
 }
 
+// Typed text is read by the shared parser: "20,5" is 20.5; "1,234,5" is refused with its reason.
 const number = (label: string) =>
-  z.coerce
-    .number({ error: `${label} must be a number.` })
-    .refine(Number.isFinite, `${label} must be a finite number.`);
+  z.preprocess(
+    (v, ctx) => {
+      if (typeof v !== 'string') return v;
+      const n = parseNumberText(v);
+      if (n.ok) return n.value ?? v;
+      // Words stay "must be a number"; a number whose marks have no one meaning says why.
+      if (!/^[\s\d.,+\-\u2212eE]+$/.test(v)) return v;
+      ctx.addIssue({ code: 'custom', message: `${label}: ${n.message}` });
+      return z.NEVER;
+    },
+    z.coerce
+      .number({ error: `${label} must be a number.` })
+      .refine(Number.isFinite, `${label} must be a finite number.`),
+  );
 const optionalNumber = (label: string) =>
   z.preprocess((v) => (v === '' || v === undefined ? null : v), number(label).nullable());
 const text = (max: number) =>
