@@ -1,13 +1,15 @@
 'use client';
 
+import { parseNumberText, readerDecimalMark } from '@/lib/number-text';
 import { diffRevisions, type DiffValue } from '@/lib/properties/diff';
 import { isQuantity, QUANTITIES } from '@/lib/properties/quantities';
 import type { ValueFields } from '@/lib/validation/revision-form';
 import { RevisionDiff } from './revision-diff';
 
+// Read as the server reads it ("20,5" = 20.5).
 const numberOrNull = (text: string) => {
-  const n = text.trim() === '' ? NaN : Number(text);
-  return Number.isFinite(n) ? n : null;
+  const n = parseNumberText(text, readerDecimalMark());
+  return n.ok ? n.value : null;
 };
 
 /** The form's rows as the diff compares them; a row without a quantity or a number is left out. */
