@@ -11,7 +11,7 @@ import { createWordMatcher, foldWord, type WordMatch } from './word-match';
 
 /**
  * Search over one role class's records. Each query word is matched on its own (word-match.ts:
- * exactly, as the beginning of a word, or misspelt), so words in any order, misspelt
+ * exactly, as the beginning of a word, or misspelt, by fuse.js), so words in any order, misspelt
  * ("Jonathn") or cut short ("kiwi") still find their record; a record is found when every word
  * of the query matches somewhere in it.
  *

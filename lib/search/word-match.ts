@@ -1,4 +1,4 @@
-import { prefixDistances } from './edit-distance';
+import Fuse, { type IFuseOptions } from 'fuse.js';
 import type { Range } from './types';
 
 /** A vocabulary word a query word matched: its score (0 exact … 1) and the matched characters. */
@@ -50,14 +50,58 @@ const PART_PENALTY = 0.1;
 const PROSE_PENALTY = 0.1;
 
 /**
+ * fuse.js (Bitap, after Wu and Manber, "Fast text searching allowing errors", Communications of
+ * the ACM 35(10), 1992) over the vocabulary, anchored at the start of each word: `location` 0
+ * with `distance` 1 adds one to the score of a match starting a letter or more into the word, so
+ * only matches at its beginning pass the threshold — a resemblance to a stretch inside a longer
+ * word ("jonatan" in "constant", which an unanchored search accepts) is never a match.
+ * `findAllMatches` lets Bitap read the whole word, not only as many letters as were typed, so a
+ * letter left out ("aple") is one edit. The score is then edits ÷ letters searched for. The
+ * vocabulary is lower case and folded already, and which letters matched is not asked for
+ * (`minMatchCharLength` 1, no `includeMatches`): the whole word, or the part typed, is marked.
+ * The threshold depends on the length typed (searcherFor).
+ */
+const FUSE_OPTIONS: IFuseOptions<string> = {
+  location: 0,
+  distance: 1,
+  ignoreLocation: false,
+  findAllMatches: true,
+  includeScore: true,
+  isCaseSensitive: true,
+  ignoreDiacritics: false,
+  ignoreFieldNorm: true,
+  minMatchCharLength: 1,
+  shouldSort: false,
+};
+
+/**
+ * Bitap lets a match end anywhere in the word. To see where a word ends, each word and the typed
+ * word are searched with END after them (no word holds it): fuse's edits are then those from the
+ * typed word to the whole word, or one more than to a beginning of it, whichever is fewer.
+ * "jonatan" is two edits from "constan" but three from "constant": over the two a seven-letter
+ * word may have.
+ */
+const END = '$';
+
+/**
+ * The same letters in another order. Bitap counts two neighbouring letters typed in the wrong
+ * order ("desnity") as two edits; Damerau ("A technique for computer detection and correction of
+ * spelling errors", Communications of the ACM 7(3), 1964) counts the swap as one typing error,
+ * and so do we when fuse's two edits are between words of the same letters.
+ */
+const swapped = (a: string, b: string) =>
+  a.length === b.length && [...a].sort().join('') === [...b].sort().join('');
+
+/**
  * Finds the vocabulary words one query word stands for, in three steps:
  * 1. the word itself, and words it begins ("kiwi" → "kiwifruit", "apple" → "apples");
- * 2. only when the query word is not itself a word of the index: misspellings, words within the
- *    allowed edit distance of the whole word, or of its beginning when the word is still being
- *    typed. A query word that the index holds is taken as meant — "Hass", "Luli", "Diamant" do
- *    not also find "mass", "Suli", "diamond" — and a resemblance to a stretch inside a longer
- *    word ("jonatan" in "constant", which fuse.js's Bitap search accepted) is never a match;
+ * 2. only when the query word is not itself a word of the index: misspellings, by fuse.js (see
+ *    FUSE_OPTIONS). A query word that the index holds is taken as meant — "Hass", "Luli",
+ *    "Diamant" do not also find "mass", "Suli", "diamond";
  * 3. numbers and words of up to three letters match exactly or as a beginning only.
+ *
+ * The vocabulary's fuse.js index is built here, once per search index; the searchers for each
+ * length of query word share it.
  */
 export function createWordMatcher(
   vocabulary: readonly string[],
@@ -70,6 +114,23 @@ export function createWordMatcher(
     vocabulary[a] < vocabulary[b] ? -1 : vocabulary[a] > vocabulary[b] ? 1 : 0,
   );
   const commonAt = Math.max(3, COMMON_SHARE * fieldCount);
+  const ended = vocabulary.map((word) => word + END);
+  const fuseIndex = Fuse.createIndex<string>([], ended);
+  const searchers = new Map<number, Fuse<string>>();
+  /**
+   * The threshold lets through one edit more than a word of this length may have (maxEdits), so
+   * that a swap, two edits to fuse, reaches the post-filter (see `swapped`).
+   */
+  function searcherFor(length: number): Fuse<string> {
+    let fuse = searchers.get(length);
+    if (!fuse) {
+      const threshold = (maxEdits(length) + 1) / (length + 1);
+      fuse = new Fuse(ended, { ...FUSE_OPTIONS, threshold }, fuseIndex);
+      searchers.set(length, fuse);
+    }
+    return fuse;
+  }
+
   /** Ids of the vocabulary words that begin with `term` (binary search in sorted order). */
   function beginningWith(term: string): number[] {
     let lo = 0;
@@ -86,35 +147,31 @@ export function createWordMatcher(
     return out;
   }
 
+  /**
+   * fuse's candidates, filtered by the rules fuse cannot state: fewer edits for common words, and
+   * a word longer than the typed one by more than its edits taken as still being typed ("kiwfru"
+   * for "kiwifruit"), which it may be with one edit fewer than a whole word.
+   */
   function misspelt(term: string, found: Map<number, WordMatch>) {
     const most = maxEdits(term.length);
-    for (let id = 0; id < vocabulary.length; id++) {
+    const candidates = searcherFor(term.length).search(term + END);
+    for (const { refIndex: id, score: fuseScore = 1 } of candidates) {
       if (found.has(id)) continue;
       const word = vocabulary[id];
       const allowed = most - (fieldFrequency[id] >= commonAt ? 1 : 0);
-      if (allowed < 1) continue;
-      const whole = Math.abs(word.length - term.length) <= allowed;
-      // A word still being typed: its beginning, one letter either side of the length typed.
-      const part = allowed >= 2 && word.length > term.length;
-      if (!whole && !part) continue;
-      const seen = whole ? word : word.slice(0, term.length + 1);
-      const d = prefixDistances(term, seen, allowed);
-      if (!d) continue;
+      // fuse's score is edits ÷ letters searched for (END included).
+      let edits = Math.round(fuseScore * (term.length + 1));
+      if (edits === 2 && swapped(term, word)) edits = 1;
+      if (edits > allowed) continue;
       const prose = isName[id] ? 0 : PROSE_PENALTY;
-      if (whole && d[word.length] <= allowed) {
-        const score = fuzzyScore(d[word.length], term.length) + prose;
+      if (word.length - term.length <= allowed) {
+        const score = fuzzyScore(edits, term.length) + prose;
         found.set(id, { score, ranges: [[0, word.length - 1]] });
-        continue;
-      }
-      if (!part) continue;
-      let best = allowed;
-      let typed = 0;
-      for (let n = term.length - 1; n <= Math.min(term.length + 1, word.length - 1); n++) {
-        if (d[n] < best) [best, typed] = [d[n], n];
-      }
-      if (typed > 0) {
-        const score = fuzzyScore(best, term.length) + PART_PENALTY + prose;
-        found.set(id, { score, ranges: [[0, typed - 1]] });
+      } else {
+        // Too long to be the whole word within `allowed`: the edits are one more than to the
+        // beginning typed.
+        const score = fuzzyScore(edits - 1, term.length) + PART_PENALTY + prose;
+        found.set(id, { score, ranges: [[0, term.length - 1]] });
       }
     }
   }

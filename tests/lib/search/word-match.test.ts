@@ -1,35 +1,24 @@
 import { describe, expect, it } from 'vitest';
-import { editDistance, prefixDistances } from '@/lib/search/edit-distance';
 import { createWordMatcher, foldWord } from '@/lib/search/word-match';
 
-describe('editDistance (optimal string alignment)', () => {
-  it('gives the published values', () => {
-    // kitten → sitting: 3 (two substitutions, one insertion), the usual worked example of
-    // Wagner and Fischer's programme.
-    expect(editDistance('kitten', 'sitting', 5)).toBe(3);
-    // A swap of neighbours costs one (Damerau 1964): "desnity" is one edit from "density".
-    expect(editDistance('desnity', 'density', 3)).toBe(1);
-    // "ca" → "abc" is 3 by optimal string alignment (2 only if a swapped pair could be edited
-    // again, which this variant forbids).
-    expect(editDistance('ca', 'abc', 5)).toBe(3);
-    // Over the limit: limit + 1, however far.
-    expect(editDistance('jonatan', 'constant', 2)).toBe(3);
-  });
-
-  it('gives the distance to every beginning of the second word', () => {
-    // "kiwfr" against "", k, ki, kiw: 5, 4, 3, 2 (deletions); kiwi and kiwif: 2 ("fr" against
-    // "i" or "if", two edits either way); kiwifr: 1 (the missing i).
-    expect([...prefixDistances('kiwfr', 'kiwifr', 5)!]).toEqual([5, 4, 3, 2, 2, 2, 1]);
-    expect(prefixDistances('zzzz', 'kiwi', 1)).toBeNull();
-  });
-});
-
 describe('word matching', () => {
-  // Vocabulary of an invented index of 600 fields: "mass" in 40 (common: a sixtieth is 10),
-  // the rest in a few.
-  const vocabulary = ['mass', 'hass', 'kinnow', 'know', 'jonathan', 'constant', 'kiwifruit'];
-  const frequency = [40, 1, 1, 2, 1, 2, 3];
-  const names = [false, true, true, false, true, false, true];
+  // Vocabulary of an invented index of 600 fields: "mass" and "density" in 40 each (common: a
+  // sixtieth is 10), the rest in a few.
+  const vocabulary = [
+    'mass',
+    'hass',
+    'kinnow',
+    'know',
+    'jonathan',
+    'constant',
+    'kiwifruit',
+    'density',
+    'fuji',
+    'apple',
+    '2018',
+  ];
+  const frequency = [40, 1, 1, 2, 1, 2, 3, 40, 1, 2, 1];
+  const names = [false, true, true, false, true, false, true, false, true, true, false];
   const match = createWordMatcher(vocabulary, frequency, 600, names);
   const words = (term: string) =>
     [...match(term)].sort((a, b) => a[1].score - b[1].score).map(([id]) => vocabulary[id]);
@@ -45,11 +34,31 @@ describe('word matching', () => {
   });
 
   it('corrects names, finds beginnings, and never a stretch inside a longer word', () => {
+    // "jonatan" is two substitutions from "constan", the beginning of "constant", but three edits
+    // from the whole word: only "jonathan" (one letter left out) is meant.
     expect(words('jonatan')).toEqual(['jonathan']);
+    // "stant" is the end of "constant" letter for letter, but three edits from its beginning.
+    expect(words('stant')).toEqual([]);
+    expect(words('aple')).toEqual(['apple']);
     expect(words('kiwi')).toEqual(['kiwifruit']);
+    // Still being typed: "kiwfr" and one more letter are one edit from "kiwifr".
     expect(words('kiwfru')).toEqual(['kiwifruit']);
     // Both one edit away and both rare; the name comes first.
     expect(words('kinow')).toEqual(['kinnow', 'know']);
+  });
+
+  it('counts two neighbouring letters swapped as one edit', () => {
+    // "desnity": a swap, one edit, which a common seven-letter word may have (two less one).
+    expect(words('desnity')).toEqual(['density']);
+    expect(words('fjui')).toEqual(['fuji']);
+    // "dansoty": two substitutions (e → a, i → o), other letters: two edits, over the one a
+    // common word may have.
+    expect(words('dansoty')).toEqual([]);
+  });
+
+  it('matches numbers exactly or as a beginning only', () => {
+    expect(words('2017')).toEqual([]);
+    expect(words('201')).toEqual(['2018']);
   });
 
   it('folds letters that decomposition leaves whole', () => {
