@@ -42,7 +42,7 @@ const RULES = [
   },
   {
     slug: 'critical-bruise-100mm2',
-    name: 'Critical bruise: 100 mm² of surface (research definition)',
+    name: 'Critical bruise (research definition)',
     commodity: null,
     kind: 'research',
     measure: 'area',

@@ -4,6 +4,7 @@ import type { ReactNode } from 'react';
 import { ChartFrame } from '@/components/assessments/chart-frame';
 import { FigureGrid, FigureValue } from '@/components/assessments/report-results';
 import type { CheckDescriptor } from '@/lib/checks/report';
+import type { Text } from '@/lib/phrase';
 import type { CheckNameValue } from '@/lib/validation/check-names';
 import { BRUISE_HEADLINE, MarginPanel } from './margin-panel';
 import { SaveAssessment } from './save-assessment';
@@ -32,7 +33,7 @@ export function CheckWorkbench<R>({
   body: Record<string, unknown>;
   form: ReactNode;
   /** What the margin divides, in words. */
-  basis: (result: R | null) => string;
+  basis: (result: R | null) => Text;
   figuresTestId: string;
   /** Check-specific panels shown after the figures (a table, a picture). */
   extras?: (result: R) => ReactNode;

@@ -1,13 +1,15 @@
 'use client';
 
-import { useState } from 'react';
+import { TextInUnits } from '@/components/units/text-in-units';
+import { ph } from '@/lib/phrase';
+
 import type { DropCheckResult } from '@/lib/checks/drop/check';
 import { DROP_SURFACE_KEYS, DROP_SURFACES, type DropSurface } from '@/lib/checks/surfaces';
 import type { CultivarOption } from './check-fields';
 import { CheckForm, MeasureFields, type FieldSpec } from './measure-fields';
 import { dropDescriptor } from '@/lib/checks/drop/report';
 import { CheckWorkbench } from './check-workbench';
-import { useCheckForm } from './use-check-form';
+import { useAddressChoice, useCheckForm } from './use-check-form';
 import { useUnits } from '@/components/units/units-provider';
 
 const PAD_FIELDS: readonly FieldSpec[] = [
@@ -22,7 +24,11 @@ export function DropCheck({
   cultivars: CultivarOption[];
   initialCultivar: string;
 }) {
-  const [surface, setSurface] = useState<DropSurface>('steel');
+  const [surface, setSurface] = useAddressChoice<DropSurface>(
+    'surface',
+    DROP_SURFACE_KEYS,
+    'steel',
+  );
   const { cultivar, setCultivar, stage, setStage, grade, body, state, fields } =
     useCheckForm<DropCheckResult>({
       endpoint: '/api/checks/drop',
@@ -74,11 +80,11 @@ export function DropCheck({
       form={form}
       figuresTestId="drop-figures"
       basis={(r) =>
-        `${
+        ph`${
           r?.margin?.basis === 'dynamic'
-            ? `Published dynamic threshold: ${r.dynamic?.basis} (${r.dynamic?.source ?? 'no source'}) ÷ this drop.`
+            ? ph`Published dynamic threshold: ${r.dynamic?.basis ?? ''} (${r.dynamic?.source ?? 'no source'}) ÷ this drop.`
             : 'Static threshold ÷ elastic Hertz peak pressure — an estimate, tested below against this fruit’s published drop figures.'
-        }${r?.relation ? ` ${r.relation}` : ''}`
+        }${r?.relation ? ph` ${r.relation}` : ''}`
       }
       extras={(r) => <DropExtras result={r} />}
     />
@@ -102,7 +108,7 @@ function DropExtras({ result }: { result: DropCheckResult }) {
       ) : null}
       {result.relation ? (
         <p className="text-sm text-stone-700" data-testid="drop-relation">
-          {result.relation}
+          <TextInUnits text={result.relation} />
         </p>
       ) : null}
       <SafeHeights rows={result.safe_heights} />
@@ -137,7 +143,7 @@ function SafeHeights({ rows }: { rows: DropCheckResult['safe_heights'] }) {
                   <>
                     <span className="num">{show(r.dynamic_safe_height_mm, 'mm')}</span>
                     <span className="block text-xs text-stone-500">
-                      {r.dynamic_basis}
+                      {r.dynamic_basis === null ? null : <TextInUnits text={r.dynamic_basis} />}
                       {r.dynamic_source ? ` — ${r.dynamic_source}` : ''}
                     </span>
                   </>

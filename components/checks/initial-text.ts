@@ -14,7 +14,10 @@ export function initialText(
   return Object.fromEntries(
     formEntries(si).map(([key, value]) => [
       key,
-      String(Number(toDisplay(Number(value), FIELD_UNITS[key]).toPrecision(4))),
+      // A field left empty (an address can say so) stays empty.
+      value.trim() === ''
+        ? ''
+        : String(Number(toDisplay(Number(value), FIELD_UNITS[key]).toPrecision(4))),
     ]),
   );
 }

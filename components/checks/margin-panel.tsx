@@ -1,3 +1,5 @@
+import { TextInUnits } from '@/components/units/text-in-units';
+import type { Text } from '@/lib/phrase';
 import type { BruiseView } from '@/lib/checks/bruise';
 import { VERDICT_RULE, type Verdict } from '@/lib/checks/verdict';
 
@@ -29,7 +31,7 @@ export function MarginPanel({
   bruise,
 }: {
   margin: { value: number; verdict: Verdict } | null;
-  basis: string;
+  basis: Text;
   /** The weakest rung of evidence the verdict rests on, in words. */
   restsOn?: string | null;
   /** The predicted bruise against the grade rule: the verdict, with the onset margin beside it. */
@@ -50,7 +52,7 @@ export function MarginPanel({
             {BRUISE_HEADLINE[bruise.verdict]}
           </p>
           <p className="mt-1 text-sm" data-testid="bruise-words">
-            {bruise.words}
+            <TextInUnits text={bruise.words} />
           </p>
         </div>
       ) : null}
@@ -73,7 +75,9 @@ export function MarginPanel({
             : 'Waiting for complete inputs.'}
         </p>
       )}
-      <p className="mt-2 text-xs">{basis}</p>
+      <p className="mt-2 text-xs">
+        <TextInUnits text={basis} />
+      </p>
       {restsOn ? (
         <p className="mt-1 text-xs font-medium" data-testid="rests-on">
           {restsOn}

@@ -1,12 +1,11 @@
 'use client';
 
-import { useState } from 'react';
-import type { FacingPreset } from '@/lib/checks/facings';
+import { FACING_KEYS, type FacingPreset } from '@/lib/checks/facings';
 import type { SqueezeCheckResult } from '@/lib/checks/squeeze/check';
 import type { CultivarOption } from './check-fields';
 import { squeezeDescriptor } from '@/lib/checks/squeeze/report';
 import { CheckWorkbench } from './check-workbench';
-import { useCheckForm } from './use-check-form';
+import { useAddressChoice, useCheckForm } from './use-check-form';
 import { SlipMap } from './slip-map';
 import { SqueezeForm } from './squeeze-form';
 import { SqueezeProbability } from './squeeze-probability';
@@ -18,7 +17,7 @@ export function SqueezeCheck({
   cultivars: CultivarOption[];
   initialCultivar: string;
 }) {
-  const [facing, setFacing] = useState<FacingPreset>('rigid');
+  const [facing, setFacing] = useAddressChoice<FacingPreset>('facing', FACING_KEYS, 'rigid');
   const { cultivar, setCultivar, stage, setStage, grade, text, set, body, state } =
     useCheckForm<SqueezeCheckResult>({
       endpoint: '/api/checks/squeeze',
@@ -30,7 +29,6 @@ export function SqueezeCheck({
         accelerationMs2: '2',
         horizontalAccelerationMs2: '0',
         gripOffsetMm: '0',
-        maxTravelMm: '2',
         // A pick-and-place transfer takes a few seconds [common practice].
         holdSeconds: '3',
       },

@@ -1,10 +1,23 @@
 'use client';
 
-import { useState } from 'react';
+import { usePathname, useRouter, useSearchParams } from 'next/navigation';
+import { useEffect, useState } from 'react';
+import { checkQuery, figuresFromQuery } from '@/lib/checks/check-url';
 import { useUnits } from '@/components/units/units-provider';
-import { initialText, type FormText } from './initial-text';
-import type { FieldsState } from './measure-fields';
+import type { FormText } from './initial-text';
+import { startingText, typedText, type FieldsState } from './measure-fields';
 import { siFields, useCheck } from './use-check';
+
+/** A choice of a check form (surface, facing) as the page's address holds it, else the fallback. */
+export function useAddressChoice<T extends string>(
+  key: string,
+  allowed: readonly T[],
+  fallback: T,
+) {
+  const address = useSearchParams();
+  const v = address.get(key);
+  return useState<T>(allowed.includes(v as T) ? (v as T) : fallback);
+}
 
 /**
  * A check form's state: the cultivar, the figures as typed (starting from SI defaults shown in
@@ -29,19 +42,42 @@ export function useCheckForm<R>({
   delayMs?: number;
 }) {
   const units = useUnits();
+  const address = useSearchParams();
+  const router = useRouter();
+  const pathname = usePathname();
   const [cultivar, setCultivar] = useState(initialCultivar);
-  const [stage, setStage] = useState('');
-  const [gradeRule, setGradeRule] = useState('');
-  const [text, setText] = useState<FormText>(() => initialText(defaults, units.toDisplay));
+  const [stage, setStage] = useState(address.get('stage') ?? '');
+  const [gradeRule, setGradeRule] = useState(address.get('gradeRule') ?? '');
+  // The address's figures (SI) over the defaults, then shown in the reader's units.
+  const [text, setText] = useState<FormText>(() =>
+    startingText(defaults, figuresFromQuery(address), units.system),
+  );
   const set = (key: string) => (value: string) => setText((t) => ({ ...t, [key]: value }));
   const body: Record<string, unknown> = {
     ...choices,
     ...(cultivar && { cultivar }),
     ...(cultivar && stage && { stage }),
     ...(cultivar && gradeRule && { gradeRule }),
-    ...siFields(text, units.fromDisplay, keep),
+    ...siFields(typedText(text), units.fromDisplay, keep),
   };
   const state = useCheck<R>(endpoint, body, delayMs);
+  // The inputs follow into the address (replaced, not pushed: back leaves the check, and returning
+  // or reloading finds the same figures). An emptied field is kept as empty.
+  const query = checkQuery({
+    ...body,
+    ...Object.fromEntries(
+      Object.entries(text)
+        .filter(([, v]) => v.trim() === '')
+        .map(([k]) => [k, '']),
+    ),
+  });
+  useEffect(() => {
+    const timer = setTimeout(() => {
+      if (window.location.search.replace(/^\?/, '') !== query)
+        router.replace(`${pathname}?${query}`, { scroll: false });
+    }, 400);
+    return () => clearTimeout(timer);
+  }, [query, pathname, router]);
   const fields: FieldsState = { text, set, fieldErrors: state.fieldErrors };
   return {
     cultivar,

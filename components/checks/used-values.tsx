@@ -1,3 +1,5 @@
+import { TextInUnits } from '@/components/units/text-in-units';
+import type { Text } from '@/lib/phrase';
 import { Measure } from '@/components/units/measure';
 import { RUNG_LABELS, type Rung } from '@/lib/evidence/rungs';
 
@@ -82,15 +84,17 @@ export function UsedValues({ rows }: { rows: [string, UsedValueView | null | und
 }
 
 /** Warnings the model returned, in plain words beside the result. */
-export function CheckWarnings({ warnings }: { warnings: string[] }) {
+export function CheckWarnings({ warnings }: { warnings: Text[] }) {
   if (!warnings.length) return null;
   return (
     <ul
       className="space-y-1 rounded-md border border-amber-400 bg-amber-50 px-4 py-3 text-sm text-amber-900"
       data-testid="check-warnings"
     >
-      {warnings.map((w) => (
-        <li key={w}>{w}</li>
+      {warnings.map((w, i) => (
+        <li key={i}>
+          <TextInUnits text={w} />
+        </li>
       ))}
     </ul>
   );

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { m, ph, textSchema } from '@/lib/phrase';
 
 /** What a bruise is judged by, and the answer in the trade's words. */
 export const BRUISE_VERDICTS = ['no bruise', 'within tolerance', 'beyond tolerance'] as const;
@@ -24,8 +25,8 @@ export const bruiseSchema = z.object({
   depth_mm: z.number().nullable(),
   verdict: z.enum(BRUISE_VERDICTS),
   rule: gradeRuleViewSchema.nullable(),
-  /** One sentence: the bruise, the rule, and the verdict. */
-  words: z.string(),
+  /** One sentence: the bruise, the rule, and the verdict (measures in the reader's units). */
+  words: textSchema,
 });
 
 export type BruiseView = z.infer<typeof bruiseSchema>;
@@ -76,19 +77,19 @@ export function judgeBruise(radiusM: number, rule: GradeRuleView | null): Bruise
           : 'beyond tolerance';
   const limit = rule
     ? rule.measure === 'diameter'
-      ? `${r3(rule.limit)} mm across`
-      : `${r3(rule.limit)} mm²`
+      ? ph`${m(r3(rule.limit), 'mm')} across`
+      : ph`${m(r3(rule.limit), 'mm²')}`
     : null;
-  const size = `a bruise about ${diameter} mm across (${area} mm²)`;
+  const size = ph`a bruise about ${m(diameter, 'mm')} across (${m(area, 'mm²')})`;
   const ruleWords = rule
-    ? `${rule.name} (${rule.source ?? 'site rule'}) tolerates up to ${limit}${rule.borrowed ? '; a rule defined on another commodity, used for want of one of its own' : ''}`
-    : 'no grade rule applies';
+    ? ph`${rule.name} (${rule.source ?? 'site rule'}) tolerates up to ${limit!}${rule.borrowed ? '; a rule defined on another commodity, used for want of one of its own' : ''}`
+    : ph`no grade rule applies`;
   const words =
     verdict === 'no bruise'
-      ? `No bruise: the contact pressure stays below the threshold.`
+      ? ph`No bruise: the contact pressure stays below the threshold.`
       : verdict === 'within tolerance'
-        ? `Bruise within the grade's tolerance: ${size}; ${ruleWords}.`
-        : `Bruise beyond tolerance: ${size}; ${ruleWords}.`;
+        ? ph`Bruise within the grade's tolerance: ${size}; ${ruleWords}.`
+        : ph`Bruise beyond tolerance: ${size}; ${ruleWords}.`;
   return { diameter_mm: diameter, area_mm2: area, depth_mm: null, verdict, rule, words };
 }
 

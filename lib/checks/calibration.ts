@@ -1,4 +1,5 @@
 import 'server-only';
+import type { Phrase } from '@/lib/phrase';
 import { runSqueeze } from '@/fem';
 import type { Actor } from '@/lib/auth/actor';
 import { listPublishedCultivars } from '@/lib/data/cultivars';
@@ -16,7 +17,7 @@ import { judgeDrop, judgeFactor, judgeRange, type Judgement } from './calibratio
  * Disagreements are kept and shown, not tuned away.
  */
 /** Words and measures: a measure is shown in the reader's units. */
-export type Phrase = (string | { value: number; unit: string })[];
+export type { Phrase };
 
 export interface CalibrationRow extends Judgement {
   check: 'drop' | 'stack' | 'squeeze';
@@ -106,7 +107,7 @@ async function stackRows(actor: Actor): Promise<CalibrationRow[]> {
     case: 'Apple in a 1200 × 1000 mm bin filled 600 mm deep',
     source: 'common practice (bulk bins of this depth are filled and the fruit sold)',
     published: ['standard practice: no grade loss from the bin'],
-    predicted: [words],
+    predicted: typeof words === 'string' ? [words] : words,
     ratio: null,
     agrees: apple.bruise != null && apple.bruise.verdict !== 'beyond tolerance',
     rule: 'the predicted bottom bruise within the strictest grade’s tolerance',

@@ -26,6 +26,7 @@ import type { Stage } from '@/lib/properties/quantities';
 import { ValidationError } from '@/lib/errors';
 import type { PinnedCultivar } from './cultivar-inputs';
 import type { UsedValue } from './used-value';
+import { m, ph, type Text } from '@/lib/phrase';
 
 export interface FruitEntry {
   cultivar?: string;
@@ -50,7 +51,7 @@ export interface ResolvedFruit {
   densityKgM3: UsedValue;
   staticThresholdKpa: UsedValue | null;
   /** Plain words about the evidence: a stage that differs, records that disagree. */
-  warnings: string[];
+  warnings: Text[];
 }
 
 export const NO_EVIDENCE: EvidenceSet = {
@@ -101,7 +102,8 @@ function axialOf(entry: FruitEntry, set: EvidenceSet, diameter: UsedValue): Used
         axialByShape(stored.used.value, recordSize.used.value, diameter.value),
         'mm',
         { axial: stored.used, equatorial: recordSize.used, size: diameter },
-        `${stored.used.value} mm × ${diameter.value} ÷ ${recordSize.used.value} mm`,
+        // The figures are each in their own row of the inputs used (and in the reader's units).
+        'the published axial diameter × this diameter ÷ the published diameter',
       );
   }
   if (stored) return stored.used;
@@ -122,17 +124,15 @@ function massAndDensity(
   set: EvidenceSet,
   d: UsedValue,
   a: UsedValue,
-  warnings: string[],
+  warnings: Text[],
 ): { massG: UsedValue; densityKgM3: UsedValue } {
-  const size = `${sig(d.value)} × ${sig(a.value)} mm`;
-  const volumeWords = (x: number, unit: string) => `${x} ${unit} and a ${size} fruit`;
   const massFrom = (density: UsedValue) =>
     derivedValue(
       MASS_FROM_SIZE,
       massFromSize(density.value, d.value, a.value),
       'g',
       { density, equatorial: d, axial: a },
-      volumeWords(density.value, 'kg/m³'),
+      'the density and the fruit’s equatorial and axial diameters',
     );
   const densityFrom = (mass: UsedValue) =>
     derivedValue(
@@ -140,10 +140,11 @@ function massAndDensity(
       densityFromMass(mass.value, d.value, a.value),
       'kg/m³',
       { mass, equatorial: d, axial: a },
-      volumeWords(mass.value, 'g'),
+      'the mass and the fruit’s equatorial and axial diameters',
     );
   if (entry.massG !== undefined && entry.densityKgM3 !== undefined) {
     const implied = massFromSize(entry.densityKgM3, d.value, a.value);
+    const size = `${sig(d.value)} × ${sig(a.value)} mm`;
     if (pct(entry.massG, implied) > 0.1) {
       const message = `The mass (${entry.massG} g) and the density (${entry.densityKgM3} kg/m³) disagree by ${Math.round(pct(entry.massG, implied) * 100)} % for a ${size} fruit, which at that density weighs ${sig(implied)} g. Enter one of them (the other follows from the size), or correct the size.`;
       throw new ValidationError('Mass and density disagree.', {
@@ -179,7 +180,7 @@ function massAndDensity(
     const massG = massFrom(density);
     if (mass && !sizeTyped && pct(mass.value, massG.value) > 0.1)
       warnings.push(
-        `The stored mass (${mass.value} g, ${mass.source ?? mass.rung}) and the mass from the density and size (${massG.value} g) differ by ${Math.round(pct(mass.value, massG.value) * 100)} %: the check takes the density, the stronger or equal evidence, and the mass that follows from it.`,
+        ph`The stored mass (${m(mass.value, 'g')}, ${mass.source ?? mass.rung}) and the mass from the density and size (${m(massG.value, 'g')}) differ by ${Math.round(pct(mass.value, massG.value) * 100)} %: the check takes the density, the stronger or equal evidence, and the mass that follows from it.`,
       );
     return { massG, densityKgM3: density };
   }
@@ -192,7 +193,7 @@ function massAndDensity(
         massScaled(mass.value, at.value, d.value),
         'g',
         { mass, size: d },
-        `${mass.value} g at ${at.value} mm scaled to ${d.value} mm`,
+        'the published mass, scaled from the size it was published at to this diameter',
       );
       return { massG, densityKgM3: densityFrom(massG) };
     }
@@ -201,7 +202,7 @@ function massAndDensity(
     const densityKgM3 = densityFrom(mass);
     if (density && pct(density.value, densityKgM3.value) > 0.1)
       warnings.push(
-        `The stored density (${density.value} kg/m³) and the density from the mass and size (${densityKgM3.value} kg/m³) differ by ${Math.round(pct(density.value, densityKgM3.value) * 100)} %: the check takes the mass, the stronger evidence, and the density that follows from it.`,
+        ph`The stored density (${m(density.value, 'kg/m³')}) and the density from the mass and size (${m(densityKgM3.value, 'kg/m³')}) differ by ${Math.round(pct(density.value, densityKgM3.value) * 100)} %: the check takes the mass, the stronger evidence, and the density that follows from it.`,
       );
     return { massG: mass, densityKgM3 };
   }
@@ -236,7 +237,7 @@ function thresholdOf(entry: FruitEntry, set: EvidenceSet): UsedValue | null {
             thresholdFromBioyield(by.value),
             'kPa',
             { bioyield: by },
-            `bioyield stress ${by.value} kPa (${by.source ?? 'published'})`,
+            `the bioyield stress (${by.source ?? 'published'})`,
           );
         },
         fallback: typicalBioyield,
@@ -251,7 +252,7 @@ export function fruitFromEvidence(
   set: EvidenceSet,
   entry: FruitEntry,
 ): ResolvedFruit {
-  const warnings: string[] = [];
+  const warnings: Text[] = [];
   const modulusMpa = required(
     climb(
       set,

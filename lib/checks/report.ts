@@ -1,3 +1,4 @@
+import { ph, type Text } from '@/lib/phrase';
 /**
  * What a saved check shows, described as plain data: the report page, the PDF, the curves CSV
  * and the comparison all render this, so none of them branches on the check's name. A check
@@ -56,11 +57,11 @@ export interface CheckReport {
   /** The predicted bruise judged against a grade rule, where the check sizes one. */
   bruise?: BruiseView | null;
   /** Which figure the verdict rests on when two could, and how they relate (drops). */
-  relation?: string | null;
+  relation?: Text | null;
   charts: ChartSpec[];
   /** The curves as columns (each named with its unit) and rows. */
   curves: { columns: string[]; rows: (number | null)[][] };
-  warnings: string[];
+  warnings: Text[];
 }
 
 /** One check's contract with every place that shows a saved result. */
@@ -98,12 +99,12 @@ export function pointsOf<T>(rows: readonly T[], x: (r: T) => number, y: (r: T) =
 }
 
 /** What the margin divides, in words, from its basis. */
-export function marginBasis(report: CheckReport): string {
+export function marginBasis(report: CheckReport): Text {
   const basis =
     report.margin?.basis === 'dynamic'
       ? 'Published dynamic threshold ÷ this drop.'
       : 'Static bruise threshold ÷ contact pressure.';
-  return report.relation ? `${basis} ${report.relation}` : basis;
+  return report.relation ? ph`${basis} ${report.relation}` : basis;
 }
 
 /**

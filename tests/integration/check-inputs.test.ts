@@ -1,4 +1,5 @@
 import { beforeAll, describe, expect, it } from 'vitest';
+import { siText } from '@/lib/phrase';
 import { signInAs } from '../support/session';
 import { freshDatabase, userId } from '../support/db';
 import { ACCOUNTS } from '../support/accounts';
@@ -97,7 +98,8 @@ describe('where a check’s figures come from: the evidence ladder', () => {
     // Sphere of 80 mm at 800 kg/m³: (π/6)·0.08³·800 kg = 214.47 g; 3 figures kept (0.3 %).
     expect(Math.abs(mass.value - 214.466) / 214.466).toBeLessThan(3e-3);
     expect(mass.rung).toBe('derived');
-    expect(mass.note).toMatch(/800 kg\/m³/);
+    // The note names the relation and its inputs in words; their figures are their own rows.
+    expect(mass.note).toMatch(/the density and the fruit’s equatorial and axial diameters/);
     expect(json.result.inputs_used.density_kg_m3).toMatchObject({ value: 800, rung: 'own' });
   });
 
@@ -179,7 +181,7 @@ describe('where a check’s figures come from: the evidence ladder', () => {
       verdict: 'tight',
       upper_bound: true,
     });
-    expect(below.warnings.join(' ')).toMatch(/upper bound/);
+    expect(below.warnings.map(siText).join(' ')).toMatch(/upper bound/);
     const above = (
       await (
         await post(drop, { cultivar: 'test-density-only', heightMm: 400, surface: 'steel' })
@@ -199,7 +201,7 @@ describe('where a check’s figures come from: the evidence ladder', () => {
     const json = await res.json();
     expect(res.status, JSON.stringify(json)).toBe(200);
     expect(json.result.inputs_used.modulus_mpa).toMatchObject({ value: 5, rung: 'own' });
-    expect(json.result.warnings.join(' ')).toMatch(
+    expect(json.result.warnings.map(siText).join(' ')).toMatch(
       /firm \(harvest\) fruit, not on ripe \(eating\)/,
     );
     expect(json.result.pinned.stage).toBe('ripe');

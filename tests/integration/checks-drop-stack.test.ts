@@ -1,4 +1,5 @@
 import { beforeAll, describe, expect, it } from 'vitest';
+import { siText } from '@/lib/phrase';
 import { signInAs } from '../support/session';
 import { freshDatabase, userId } from '../support/db';
 import { ACCOUNTS } from '../support/accounts';
@@ -114,7 +115,7 @@ describe('drop check', () => {
       surface: 'belt rubber',
     });
     expect(rubber.margin.basis).toBe('static');
-    expect(rubber.warnings.join(' ')).toMatch(/No published dynamic bruise threshold/);
+    expect(rubber.warnings.map(siText).join(' ')).toMatch(/No published dynamic bruise threshold/);
   });
 
   it('warns when the padding is thin beside the contact', async () => {
@@ -125,7 +126,7 @@ describe('drop check', () => {
       padModulusMpa: 0.5,
       padThicknessMm: 2,
     });
-    expect(r.warnings.join(' ')).toMatch(/padding \(2 mm\) is thin/);
+    expect(r.warnings.map(siText).join(' ')).toMatch(/padding \(2 mm\) is thin/);
   });
 });
 
@@ -202,7 +203,7 @@ describe('stack check', () => {
       staticThresholdKpa: 100,
     });
     expect(r.inputs_used.lateral_pressure_ratio.rung).toBe('typical');
-    expect(r.warnings.join(' ')).toMatch(/Lateral pressure ratio is a typical value/);
+    expect(r.warnings.map(siText).join(' ')).toMatch(/Lateral pressure ratio is a typical value/);
     expect(r.evidence.weakest_rung).toBe('typical');
     expect(r.evidence.rests_on).toMatch(/typical value of the trade for .*lateral pressure ratio/);
   });
@@ -343,7 +344,7 @@ describe('stack check: the bruise against the grade', () => {
     expect(r.bruise.verdict).toBe(
       r.bruise.diameter_mm <= 15.875 ? 'within tolerance' : 'beyond tolerance',
     );
-    expect(r.bruise.words).toMatch(/U\.S\. Extra Fancy/);
+    expect(siText(r.bruise.words)).toMatch(/U\.S\. Extra Fancy/);
     console.log(
       `apple bin 600 mm: onset margin ${r.margin?.value}; bruise ${r.bruise.diameter_mm} mm (${r.bruise.area_mm2} mm²) → ${r.bruise.verdict}; deepest no-bruise fill ${r.deepest_safe_fill_mm} mm, within tolerance ${r.deepest_fill_within_tolerance_mm} mm (${JSON.stringify(r.layers)})`,
     );
@@ -378,7 +379,7 @@ describe('stack check: the bruise against the grade', () => {
       limit: 100,
       borrowed: true,
     });
-    expect(r.bruise.words).toMatch(/defined on another commodity/);
+    expect(siText(r.bruise.words)).toMatch(/defined on another commodity/);
   });
 
   it('a grade rule that does not exist is a field error', async () => {
@@ -483,7 +484,7 @@ describe('drop check: the bruise and the two heights', () => {
     const b = a * Math.sqrt(1 - (100 / p0) ** 2);
     expect(rel(r.bruise.diameter_mm, 2 * b)).toBeLessThan(0.005);
     expect(r.margin.basis).toBe('static');
-    expect(r.relation).toMatch(
+    expect(siText(r.relation!)).toMatch(
       /^No published drop figure for steel: the verdict rests on the bruise/,
     );
     // At the tallest drop within the rule, the bruise is the rule's limit (100 mm², the research
@@ -505,11 +506,11 @@ describe('drop check: the bruise and the two heights', () => {
   it('with a drop figure for the surface the verdict rests on it, and says how the estimate differs', async () => {
     const r = await result(drop, { cultivar: 'apple-type', heightMm: 100, surface: 'steel' });
     expect(r.margin.basis).toBe('dynamic');
-    expect(r.relation).toMatch(/^The verdict rests on the drop figure for steel/);
-    expect(r.relation).toMatch(/brief impact better than the held load/);
+    expect(siText(r.relation!)).toMatch(/^The verdict rests on the drop figure for steel/);
+    expect(siText(r.relation!)).toMatch(/brief impact better than the held load/);
     expect(r.bruise.rule.slug).toBe('us-extra-fancy-apple');
     console.log(
-      `apple drop onto steel: published ${r.dynamic.basis} (${r.dynamic.observation}); Hertz: no bruise up to ${r.safe_heights[0].static_safe_height_mm} mm, within U.S. Extra Fancy up to ${r.within_tolerance_height_mm} mm; at 100 mm a bruise ${r.bruise.diameter_mm} mm across`,
+      `apple drop onto steel: published ${siText(r.dynamic.basis)} (${r.dynamic.observation}); Hertz: no bruise up to ${r.safe_heights[0].static_safe_height_mm} mm, within U.S. Extra Fancy up to ${r.within_tolerance_height_mm} mm; at 100 mm a bruise ${r.bruise.diameter_mm} mm across`,
     );
   });
 });

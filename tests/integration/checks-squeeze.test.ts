@@ -1,4 +1,5 @@
 import { beforeAll, describe, expect, it } from 'vitest';
+import { siText } from '@/lib/phrase';
 import { signInAs } from '../support/session';
 import { freshDatabase, userId } from '../support/db';
 import { ACCOUNTS } from '../support/accounts';
@@ -217,7 +218,9 @@ describe('squeeze bad input: 400 with a field message', () => {
     expect(json.result.inputs_used.max_travel_mm).toBe(0.53);
     expect(json.result.inputs_used.max_travel_auto).toBe(true);
     expect(json.result.model.liftability.grip).not.toBeNull();
-    expect(json.result.warnings.join(' ')).not.toMatch(/of the fruit's radius along the squeeze/);
+    expect(json.result.warnings.map(siText).join(' ')).not.toMatch(
+      /of the fruit's radius along the squeeze/,
+    );
   });
   it('a cultivar with only a draft is refused', async () => {
     const [commodity] = await db('commodities').select('id').limit(1);

@@ -29,25 +29,26 @@ function relationOf(
   withinM: number | null,
   heightM: number,
   surface: string,
-): string {
+): Text {
   const within =
     withinM === null || !bruise?.rule
       ? ''
-      : ` The Hertz estimate from the static threshold keeps the bruise within ${bruise.rule.name} up to ${round(withinM * 1000, 3)} mm.`;
+      : ph` The Hertz estimate from the static threshold keeps the bruise within ${bruise.rule.name} up to ${m(round(withinM * 1000, 3), 'mm')}.`;
   if (limit) {
     const kind = limit.upperBound
       ? 'a height at which fruit bruised (an upper bound)'
       : 'a published no-bruise or recommended height';
-    return `The verdict rests on the drop figure for ${surface.toLowerCase()}, ${limit.basis} (${limit.source ?? 'no source'}), ${kind}: a drop test of the fruit itself, which outranks an estimate.${within} The two differ because flesh withstands a brief impact better than the held load its static threshold was measured under, and the elastic Hertz peak is an upper bound.`;
+    return ph`The verdict rests on the drop figure for ${surface.toLowerCase()}, ${limit.basis} (${limit.source ?? 'no source'}), ${kind}: a drop test of the fruit itself, which outranks an estimate.${within} The two differ because flesh withstands a brief impact better than the held load its static threshold was measured under, and the elastic Hertz peak is an upper bound.`;
   }
   if (bruise)
-    return `No published drop figure for ${surface.toLowerCase()}: the verdict rests on the bruise the elastic Hertz field predicts from the static threshold at ${round(heightM * 1000, 3)} mm, judged against the grade rule.${within}`;
+    return ph`No published drop figure for ${surface.toLowerCase()}: the verdict rests on the bruise the elastic Hertz field predicts from the static threshold at ${m(round(heightM * 1000, 3), 'mm')}, judged against the grade rule.${within}`;
   return 'No drop figure and no static threshold: no verdict can be given.';
 }
 import type { DropResult } from './result';
 import { dynamicLimits } from './limits';
 import { judgeDrop } from '../calibration-rules';
 import { susceptibilityOf, volumeBruiseJson } from './volume';
+import { m, ph, type Text } from '@/lib/phrase';
 
 const round = (x: number, digits = 4) => Number(x.toPrecision(digits));
 
@@ -116,7 +117,7 @@ function safeHeights(
  * fruit has a published drop figure (its own or its commodity's), judged as the calibration
  * table judges it — so a reader sees at once whether the estimate is to be trusted for this fruit.
  */
-function estimateCheck(heights: ReturnType<typeof safeHeights>, surface: DropSurface): string {
+function estimateCheck(heights: ReturnType<typeof safeHeights>, surface: DropSurface): Text {
   const tested = heights.filter(
     (h) =>
       h.surface !== surface &&
@@ -132,13 +133,14 @@ function estimateCheck(heights: ReturnType<typeof safeHeights>, surface: DropSur
     const ratio = round(h.static_safe_height_mm! / h.dynamic_safe_height_mm!, 2);
     return {
       agrees: judged.agrees,
-      text: `onto ${h.label.toLowerCase()} the estimate gives ${h.static_safe_height_mm} mm against the published ${h.dynamic_safe_height_mm} mm (${ratio}×; ${judged.agrees ? 'agrees' : 'disagrees'}: ${judged.rule})`,
+      text: ph`onto ${h.label.toLowerCase()} the estimate gives ${m(h.static_safe_height_mm!, 'mm')} against the published ${m(h.dynamic_safe_height_mm!, 'mm')} (${ratio}×; ${judged.agrees ? 'agrees' : 'disagrees'}: ${judged.rule})`,
     };
   });
   const verdict = words.every((w) => w.agrees)
     ? 'it agrees where it can be tested'
     : 'it disagrees with the published record for this fruit, so do not rely on it here — test drops of the fruit instead';
-  return ` Tested on this fruit's published drop figures: ${words.map((w) => w.text).join('; ')} — ${verdict}.`;
+  const tested_ = words.flatMap((w, i) => (i === 0 ? w.text : ['; ', ...w.text]));
+  return ph` Tested on this fruit's published drop figures: ${tested_} — ${verdict}.`;
 }
 
 /** The bruise from the fruit's published bruise susceptibility for this surface, if it has one. */
@@ -157,13 +159,13 @@ function volumeBruiseOf(
 }
 
 /** Which figures the verdict rests on when the bruise is sized from a published susceptibility. */
-function volumeRelation(v: ReturnType<typeof volumeBruiseJson>, limit: Limit | null): string {
-  const sized = `The bruise is sized from the published bruise susceptibility (${v.source ?? 'no source'}, ${v.susceptibility_mm3_j} mm³/J): ${v.impact_energy_j} J of impact energy leaves about ${v.volume_mm3} mm³, ${v.diameter_mm} mm across taken as ${v.shape}.`;
+function volumeRelation(v: ReturnType<typeof volumeBruiseJson>, limit: Limit | null): Text {
+  const sized = ph`The bruise is sized from the published bruise susceptibility (${v.source ?? 'no source'}, ${m(v.susceptibility_mm3_j, 'mm³/J')}): ${m(v.impact_energy_j, 'J')} of impact energy leaves about ${m(v.volume_mm3, 'mm³')}, ${m(v.diameter_mm, 'mm')} across taken as ${v.shape}.`;
   if (!limit)
-    return `${sized} No drop height is published for this surface, so the onset margin rests on the static threshold.`;
+    return ph`${sized} No drop height is published for this surface, so the onset margin rests on the static threshold.`;
   if (limit.rung === 'typical')
-    return `${sized} The onset margin rests on a typical drop figure, ${limit.basis} (${limit.source ?? 'typical'}), not a test of this fruit: the bruise size above is the stronger evidence.`;
-  return `${sized} The onset margin rests on the drop figure ${limit.basis} (${limit.source ?? 'no source'}); the two come from different drop tests of the fruit.`;
+    return ph`${sized} The onset margin rests on a typical drop figure, ${limit.basis} (${limit.source ?? 'typical'}), not a test of this fruit: the bruise size above is the stronger evidence.`;
+  return ph`${sized} The onset margin rests on the drop figure ${limit.basis} (${limit.source ?? 'no source'}); the two come from different drop tests of the fruit.`;
 }
 
 /** Peak pressure and impact energy over a range of heights, for the chart. */
@@ -217,15 +219,15 @@ export async function runDropCheck(actor: Actor, raw: unknown): Promise<DropResu
     : thresholdPa !== null && bruiseLimit !== null
       ? heightForBruise(fruit, surface, thresholdPa, bruiseLimit)
       : null;
-  const warnings: string[] = [...f.warnings];
+  const warnings: Text[] = [...f.warnings];
   const bound = limits[0]?.upperBound ? limits[0] : null;
   if (bound)
     warnings.push(
-      `The only published figure for a drop onto ${DROP_SURFACES[input.surface].label.toLowerCase()} is a height at which fruit bruised (${round(bound.heightM * 1000)} mm): an upper bound. The safe height lies somewhere below it, so a drop under it is at best "tight", never proven safe.`,
+      ph`The only published figure for a drop onto ${DROP_SURFACES[input.surface].label.toLowerCase()} is a height at which fruit bruised (${m(round(bound.heightM * 1000), 'mm')}): an upper bound. The safe height lies somewhere below it, so a drop under it is at best "tight", never proven safe.`,
     );
   if (surface.thickness !== undefined && surface.thickness < 3 * impact.contactRadius) {
     warnings.push(
-      `The padding (${input.padThicknessMm} mm) is thin beside the contact (radius ${round(impact.contactRadius * 1000, 3)} mm): the base under it stiffens it, so the real peak pressure is higher than shown.`,
+      ph`The padding (${m(input.padThicknessMm!, 'mm')}) is thin beside the contact (radius ${m(round(impact.contactRadius * 1000, 3), 'mm')}): the base under it stiffens it, so the real peak pressure is higher than shown.`,
     );
   }
   if (!limits.length) {
@@ -292,13 +294,7 @@ export async function runDropCheck(actor: Actor, raw: unknown): Promise<DropResu
     // Which figure the verdict rests on, and how the two relate, in one sentence.
     relation: volume
       ? volumeRelation(volume, limits[0] ?? null)
-      : relationOf(
-          limits[0] ?? null,
-          bruise,
-          withinM,
-          heightM,
-          DROP_SURFACES[input.surface].label,
-        ) + (limits[0] || !bruise ? '' : estimateCheck(heights, input.surface)),
+      : ph`${relationOf(limits[0] ?? null, bruise, withinM, heightM, DROP_SURFACES[input.surface].label)}${limits[0] || !bruise ? '' : estimateCheck(heights, input.surface)}`,
     series: series(fruit, surface, heightM),
     warnings,
     units: {

@@ -1,5 +1,6 @@
 import { citationOf } from '@/lib/evidence/ladder';
 import type { Rung } from '@/lib/evidence/rungs';
+import { m, ph, type Text } from '@/lib/phrase';
 import type { Observation } from '@/lib/properties/quantities';
 import type { RevisionValue } from '@/lib/properties/records';
 import type { ResolvedFruit } from '../fruit';
@@ -10,7 +11,7 @@ const round = (x: number, digits = 4) => Number(x.toPrecision(digits));
 
 export interface Limit {
   heightM: number;
-  basis: string;
+  basis: Text;
   source: string | null;
   note: string | null;
   rung: Rung;
@@ -41,9 +42,9 @@ export function dynamicLimits(f: ResolvedFruit, fruit: FruitSI, surface: DropSur
     const energy = v.quantity === 'impact_threshold_energy';
     return {
       heightM: energy ? heightForEnergy(fruit, v.value) : v.value / 1000,
-      basis: `${v.value} ${energy ? 'J' : 'mm drop'} onto ${v.variant}${
-        energy ? ` (a height for this ${round(f.massG.value, 3)} g fruit)` : ''
-      }`,
+      basis: energy
+        ? ph`${m(v.value, 'J')} onto ${v.variant} (a height for this ${m(round(f.massG.value, 3), 'g')} fruit)`
+        : ph`${m(v.value, 'mm')} drop onto ${v.variant}`,
       source: citationOf(v.source) ?? (v.isTypicalDefault ? 'typical value' : null),
       note: v.note,
       rung,

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { textSchema } from '@/lib/phrase';
 import { evidenceSummarySchema } from '../evidence-summary';
 import { RUNGS } from '@/lib/evidence/rungs';
 import { OBSERVATIONS } from '@/lib/properties/quantities';
@@ -40,7 +41,7 @@ export const dropResultSchema = z.object({
     .object({
       safe_height_mm: n,
       margin: n,
-      basis: z.string(),
+      basis: textSchema,
       source: z.string().nullable(),
       note: z.string().nullable(),
       rung: z.enum(RUNGS).optional(),
@@ -61,7 +62,7 @@ export const dropResultSchema = z.object({
       surface: z.string(),
       label: z.string(),
       dynamic_safe_height_mm: nn,
-      dynamic_basis: z.string().nullable(),
+      dynamic_basis: textSchema.nullable(),
       dynamic_source: z.string().nullable(),
       dynamic_note: z.string().nullable(),
       dynamic_rung: z.enum(RUNGS).nullable().optional(),
@@ -89,9 +90,10 @@ export const dropResultSchema = z.object({
   /** Tallest drop onto this surface whose predicted bruise stays within the rule, mm. */
   within_tolerance_height_mm: nn.optional(),
   /** Which figure the verdict rests on, and how the published and predicted heights relate. */
-  relation: z.string().optional(),
+  relation: textSchema.optional(),
   series: z.array(z.object({ height_mm: n, peak_pressure_kpa: n, impact_energy_j: n })),
-  warnings: z.array(z.string()),
+  /** Sentences, their measures shown in the reader's units (strings in older results). */
+  warnings: z.array(textSchema),
   /** The weakest rung of evidence the verdict rests on (absent in results saved before it). */
   evidence: evidenceSummarySchema.optional(),
   units: z.record(z.string(), z.string()),

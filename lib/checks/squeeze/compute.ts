@@ -14,6 +14,7 @@ import {
   type SqueezeInput,
   type Spreads,
 } from '@/fem';
+import type { Text } from '@/lib/phrase';
 import { verdictOf } from '../verdict';
 import type { SqueezeHead } from './head';
 import { holdJson, holdWarnings, type HoldInput } from './hold';
@@ -118,7 +119,7 @@ export interface SqueezeCheckTaskInput extends SqueezeTaskInput {
   /** the figures the main thread resolved (pinned revision, inputs used), placed first */
   head: SqueezeHead;
   /** warnings of the inputs, after the model's own */
-  inputWarnings: string[];
+  inputWarnings: Text[];
 }
 
 /**

@@ -19,6 +19,7 @@ import {
   type SqueezeInput,
 } from '@/fem';
 import { climb, type EvidenceSet } from '@/lib/evidence/ladder';
+import { m, ph, type Text } from '@/lib/phrase';
 import type { UsedValue } from '../used-value';
 
 const r4 = (v: number) => Number(v.toPrecision(4));
@@ -112,20 +113,20 @@ export function holdJson(input: SqueezeInput, hold: HoldInput, gripForceN: numbe
 const pct = (x: number) => `${Math.round(x * 100)} %`;
 
 /** Plain words for the hold, where it changes what the engineer should do. */
-export function holdWarnings(h: ReturnType<typeof holdJson>): string[] {
+export function holdWarnings(h: ReturnType<typeof holdJson>): Text[] {
   if (!h.relaxation)
     return [
-      `No relaxation data for this fruit on any rung: the grip force is taken as held for the whole ${h.seconds} s, which overstates the grip — fruit flesh relaxes under a held grip. Upload a relaxation test to the cultivar's draft.`,
+      ph`No relaxation data for this fruit on any rung: the grip force is taken as held for the whole ${m(h.seconds, 's')}, which overstates the grip — fruit flesh relaxes under a held grip. Upload a relaxation test to the cultivar's draft.`,
     ];
-  const out: string[] = [];
+  const out: Text[] = [];
   const slips = h.grip_slips_after_s;
   if (slips !== null && slips <= h.seconds)
     out.push(
-      `Held at the lift point, the flesh relaxes to ${pct(h.retained_at_end!)} of the grip force in ${h.seconds} s: the safety factor is used up after ${slips} s and the fruit slips.`,
+      ph`Held at the lift point, the flesh relaxes to ${pct(h.retained_at_end!)} of the grip force in ${m(h.seconds, 's')}: the safety factor is used up after ${m(slips, 's')} and the fruit slips.`,
     );
   if (h.held)
     out.push(
-      `To still lift with the safety factor after ${h.seconds} s, close to ${h.held.travel_per_pad_mm} mm per pad (${h.held.force_n} N at first, ${h.held.force_end_n} N at the end)${h.held.bruise_margin === null ? '' : `; the bruise margin there is ${h.held.bruise_margin}, judged at the first, highest pressure`}.`,
+      ph`To still lift with the safety factor after ${m(h.seconds, 's')}, close to ${m(h.held.travel_per_pad_mm, 'mm')} per pad (${m(h.held.force_n, 'N')} at first, ${m(h.held.force_end_n, 'N')} at the end)${h.held.bruise_margin === null ? '' : `; the bruise margin there is ${h.held.bruise_margin}, judged at the first, highest pressure`}.`,
     );
   else if (h.held_reason)
     out.push(`No travel holds the fruit to the end of the hold: ${h.held_reason}.`);

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { textSchema } from '@/lib/phrase';
 import { bruiseSchema } from '../bruise';
 import { evidenceSummarySchema } from '../evidence-summary';
 import { fruitUsedShape, pinnedSchema, usedValueSchema, verdictSchema } from '../used-value';
@@ -158,7 +159,8 @@ export const squeezeResultSchema = z.object({
     })
     .nullable()
     .optional(),
-  warnings: z.array(z.string()),
+  /** Sentences, their measures shown in the reader's units (strings in older results). */
+  warnings: z.array(textSchema),
   /** The weakest rung of evidence the verdict rests on (absent in results saved before it). */
   evidence: evidenceSummarySchema.optional(),
 });

@@ -16,6 +16,7 @@
  * safety factor.
  */
 import { STANDARD_GRAVITY } from '@/fem';
+import { m, ph, type Text } from '@/lib/phrase';
 
 const r4 = (v: number) => Number(v.toPrecision(4));
 
@@ -154,15 +155,15 @@ function holdingTravel(a: TwistArgs, load: number, torque: number, kappa: number
 }
 
 /** Plain words where the twist changes what the engineer should do. */
-export function twistWarnings(t: ReturnType<typeof twistJson>): string[] {
+export function twistWarnings(t: ReturnType<typeof twistJson>): Text[] {
   if (t.offset_mm === 0 || t.holds_at_grip) return [];
   const h = t.holding;
   const fix = h?.travel_per_pad_mm
-    ? ` Closing to ${h.travel_per_pad_mm} mm per pad holds both${h.bruise_margin === null ? '' : ` (bruise margin ${h.bruise_margin})`}; or grip nearer the centre of mass.`
+    ? ph` Closing to ${m(h.travel_per_pad_mm, 'mm')} per pad holds both${h.bruise_margin === null ? '' : ` (bruise margin ${h.bruise_margin})`}; or grip nearer the centre of mass.`
     : h?.reason
       ? ` ${h.reason[0].toUpperCase()}${h.reason.slice(1)}.`
       : '';
   return [
-    `Gripped ${t.offset_mm} mm off the centre of mass, the fruit turns about the pad axis: the twist uses ${Math.round((t.twist_utilisation ?? 0) * 100)} % of the pads' torsional friction with the safety factor, and with the lift load the grip holds only ${Math.round(100 / (t.combined_utilisation ?? Infinity))} % of what it must.${fix}`,
+    ph`Gripped ${m(t.offset_mm, 'mm')} off the centre of mass, the fruit turns about the pad axis: the twist uses ${Math.round((t.twist_utilisation ?? 0) * 100)} % of the pads' torsional friction with the safety factor, and with the lift load the grip holds only ${Math.round(100 / (t.combined_utilisation ?? Infinity))} % of what it must.${fix}`,
   ];
 }

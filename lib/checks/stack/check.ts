@@ -11,6 +11,7 @@ import { bruiseRadiusLimit, judgeBruise, ruleView } from '../bruise';
 import { bruiseAt, deepestFillWithin, deepestSafeFill, stackAt, type StackSI } from './model';
 import { verdictOf } from '../verdict';
 import { stackFigures } from './figures';
+import { m, ph, type Text } from '@/lib/phrase';
 
 const round = (x: number, digits = 4) => Number(x.toPrecision(digits));
 
@@ -56,7 +57,7 @@ export async function runStackCheck(actor: Actor, raw: unknown): Promise<StackRe
       margin: threshold === null ? null : round(threshold / at.peakPressure, 3),
     };
   });
-  const warnings: string[] = [...f.warnings];
+  const warnings: Text[] = [...f.warnings];
   if (threshold === null)
     warnings.push('No static bruise threshold: enter one to get a margin and a safe depth.');
   for (const [name, v] of [
@@ -66,7 +67,7 @@ export async function runStackCheck(actor: Actor, raw: unknown): Promise<StackRe
   ] as const) {
     if (v.rung === 'typical')
       warnings.push(
-        `${name} is a typical value (${v.value}), not a measured one: ${v.note ?? v.source}`,
+        ph`${name} is a typical value (${m(v.value, v.unit)}), not a measured one: ${v.note ?? v.source ?? ''}`,
       );
   }
   if (bruise)

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { textSchema } from '@/lib/phrase';
 import { bruiseSchema } from '../bruise';
 import { evidenceSummarySchema } from '../evidence-summary';
 import { fruitUsedShape, pinnedSchema, usedValueSchema, verdictSchema } from '../used-value';
@@ -47,7 +48,8 @@ export const stackResultSchema = z.object({
       margin: n.nullable(),
     }),
   ),
-  warnings: z.array(z.string()),
+  /** Sentences, their measures shown in the reader's units (strings in older results). */
+  warnings: z.array(textSchema),
   /** The weakest rung of evidence the verdict rests on (absent in results saved before it). */
   evidence: evidenceSummarySchema.optional(),
   units: z.record(z.string(), z.string()),

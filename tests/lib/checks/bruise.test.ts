@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { siText } from '@/lib/phrase';
 import { judgeBruise, radiusAbove, type GradeRuleView } from '@/lib/checks/bruise';
 
 // A Hertz pressure profile p(r) = p₀√(1 − r²/a²) (Johnson 1985, eq. 4.25) sampled at 201 points,
@@ -37,6 +38,6 @@ describe('the bruise from a pressure profile', () => {
     const area = { ...EXTRA_FANCY, measure: 'area' as const, limit: 100, borrowed: true };
     expect(judgeBruise(5.6e-3, area).verdict).toBe('within tolerance');
     expect(judgeBruise(5.7e-3, area).verdict).toBe('beyond tolerance');
-    expect(judgeBruise(5.7e-3, area).words).toMatch(/defined on another commodity/);
+    expect(siText(judgeBruise(5.7e-3, area).words)).toMatch(/defined on another commodity/);
   });
 });

@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { siText } from '@/lib/phrase';
 import { runSqueeze, type SqueezeInput } from '@/fem';
 import { holdJson, holdWarnings, relaxationOf } from '@/lib/checks/squeeze/hold';
 import type { EvidenceSet } from '@/lib/evidence/ladder';
@@ -29,7 +30,9 @@ describe('the held grip', () => {
     expect(held.retained_at_end).toBeCloseTo(0.4783, 4);
     expect(held.safety_at_end).toBeCloseTo(0.9565, 4);
     expect(held.grip_slips_after_s).toBeCloseTo(26.67, 2);
-    expect(holdWarnings(held).join(' ')).toMatch(/used up after 26\.67 s and the fruit slips/);
+    expect(holdWarnings(held).map(siText).join(' ')).toMatch(
+      /used up after 26\.67 s and the fruit slips/,
+    );
   });
 
   it('finds the travel that still lifts with the safety factor at the end of the hold', () => {
@@ -68,7 +71,7 @@ describe('the held grip', () => {
       held: null,
       retained_at_end: null,
     });
-    expect(holdWarnings(none)[0]).toMatch(/No relaxation data for this fruit on any rung/);
+    expect(siText(holdWarnings(none)[0])).toMatch(/No relaxation data for this fruit on any rung/);
   });
 });
 

@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { siText } from '@/lib/phrase';
 import { fruitMass, runSqueeze, type SqueezeInput } from '@/fem';
 import {
   resultantAccelG,
@@ -95,7 +96,7 @@ describe('an off-centre grip of a sphere', () => {
     expect(t.twist_utilisation!).toBeGreaterThan(1);
     expect(t.governs).toBe('twist');
     expect(t.holds_at_grip).toBe(false);
-    expect(twistWarnings(t)[0]).toMatch(/20 mm off the centre of mass/);
+    expect(siText(twistWarnings(t)[0])).toMatch(/20 mm off the centre of mass/);
     // The travel that holds both lies deeper than the grip, with a higher pressure.
     const h = t.holding!;
     expect(h.travel_per_pad_mm!).toBeGreaterThan(grip.travel * 1e3);
