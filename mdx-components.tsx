@@ -5,7 +5,7 @@ import { proseComponents } from '@/components/atlas/prose';
 
 /**
  * The one map of components an Atlas article may use, for the server render and any client
- * preview alike. Everything here is pure. `PropertyCard` and `SourceRef` read the database, so
+ * preview alike. Everything here is pure. `LiveValues` and `SourceRef` read the database, so
  * the caller supplies them bound to its data (components/atlas/render-article.tsx does so for
  * the server).
  */

@@ -13,7 +13,7 @@ interface Part {
 const AREA_PARTS: Record<string, Part[]> = {
   '/atlas': [
     {
-      text: 'One handling article per commodity: anatomy and bruise behaviour, harvest and ripeness, guidance per line stage, cautions and sources, beside the live property card of each cultivar.',
+      text: 'One handling article per commodity: anatomy and bruise behaviour, harvest and ripeness, guidance per line stage, cautions and sources, beside the live live values panel of each cultivar.',
     },
   ],
   '/properties': [

@@ -7,7 +7,7 @@ import remarkGfm from 'remark-gfm';
 import remarkMath from 'remark-math';
 import { atlasComponents } from '@/mdx-components';
 import { CheckLink } from '@/components/atlas/check-link';
-import { PropertyCard } from '@/components/atlas/property-card';
+import { LiveValues } from '@/components/atlas/live-values';
 import { SourceRefLink } from '@/components/atlas/source-ref';
 import type { Actor } from '@/lib/auth/actor';
 import { can } from '@/lib/auth/roles';
@@ -58,8 +58,8 @@ function boundComponents(actor: Actor, sources: SourceRef[]): MDXComponents {
         {children}
       </CheckLink>
     ),
-    PropertyCard: ({ cultivar }: { cultivar: string }) => (
-      <PropertyCard actor={actor} cultivar={cultivar} citedKeys={cited} />
+    LiveValues: ({ cultivar }: { cultivar: string }) => (
+      <LiveValues actor={actor} cultivar={cultivar} citedKeys={cited} />
     ),
   };
 }

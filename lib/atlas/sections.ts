@@ -75,9 +75,9 @@ export function inlineSourceKeys(body: string): string[] {
   return collect(body, attribute('SourceRef', 'id'));
 }
 
-/** Cultivar slugs named by `<PropertyCard cultivar="…" />`. */
+/** Cultivar slugs named by `<LiveValues cultivar="…" />`. */
 export function cardCultivars(body: string): string[] {
-  return collect(body, attribute('PropertyCard', 'cultivar'));
+  return collect(body, attribute('LiveValues', 'cultivar'));
 }
 
 /** The level-2 headings, in order. */

@@ -34,7 +34,7 @@ test('a buyer searches by keyboard, reads the apple article with live values and
 
   // The article: formulas typeset by KaTeX with its own fonts, the live Jonathan card.
   await expect(page.getByRole('heading', { level: 1 })).toContainText('Apple');
-  const card = page.getByTestId('property-card-apple-jonathan');
+  const card = page.getByTestId('live-values-apple-jonathan');
   await expect(card).toContainText('2.52 MPa (2.36–3.28)');
   await expect(card).toContainText('no published value');
   await expect(page.locator('.katex-display').first()).toBeVisible();

@@ -9,13 +9,12 @@ import { getActiveActor } from '@/lib/data/users';
 import { createDraft, publishRevision, submitDraft, updateDraft } from '@/lib/data/revisions';
 import { findArticle } from '@/lib/atlas/articles';
 import { renderArticle } from '@/components/atlas/render-article';
-import { PropertyCard } from '@/components/atlas/property-card';
+import { LiveValues } from '@/components/atlas/live-values';
 
 const SLUG = 'apple-jonathan';
 let buyer: Actor, editor: Actor, editor2: Actor;
 
-const card = (who: Actor) =>
-  renderHtml(createElement(PropertyCard, { actor: who, cultivar: SLUG }));
+const card = (who: Actor) => renderHtml(createElement(LiveValues, { actor: who, cultivar: SLUG }));
 /** The text of a rendered card, without tags, for reading it as a person would. */
 const text = (html: string) =>
   html
@@ -24,7 +23,7 @@ const text = (html: string) =>
     .replace(/&amp;/g, '&')
     .replace(/\s+/g, ' ');
 
-describe('PropertyCard', () => {
+describe('LiveValues', () => {
   beforeAll(async () => {
     await freshDatabase();
     const actor = async (email: string) => (await getActiveActor(await userId(email)))!;

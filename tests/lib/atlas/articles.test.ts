@@ -89,7 +89,7 @@ describe('Atlas articles', () => {
       expect(html).toMatch(/<table[^>]*>[\s\S]*<th[^>]*>Line stage<\/th>/);
       expect(html).toContain('id="along-the-line"');
       for (const slug of cardCultivars(article.body)) {
-        expect(html).toContain(`data-testid="property-card-${slug}"`);
+        expect(html).toContain(`data-testid="live-values-${slug}"`);
       }
       for (const key of inlineSourceKeys(article.body)) expect(html).toContain(`#source-${key}`);
       expect(sources.map((s) => s.key)).toEqual(article.sourceKeys);

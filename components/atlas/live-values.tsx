@@ -21,7 +21,7 @@ function Citation({ row, citedKeys }: { row: CardRow; citedKeys: ReadonlySet<str
  * A cultivar's current published values, read from the database on every render, so an article
  * shows the newest published revision as soon as it is published.
  */
-export async function PropertyCard({
+export async function LiveValues({
   actor,
   cultivar,
   citedKeys = new Set(),
@@ -36,7 +36,7 @@ export async function PropertyCard({
   return (
     <aside
       aria-label={`Published values: ${record.name}`}
-      data-testid={`property-card-${record.slug}`}
+      data-testid={`live-values-${record.slug}`}
       className="my-6 rounded-lg border border-leaf-100 bg-white p-4 text-sm shadow-sm break-inside-avoid lg:float-right lg:ml-6 lg:w-96"
     >
       <p className="text-xs font-medium tracking-wide text-leaf-700 uppercase">Live values</p>
