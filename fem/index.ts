@@ -9,6 +9,7 @@ export { FemConvergenceError, FemInputError } from './errors';
 export {
   BODY_MODELS,
   MESH_LEVELS,
+  RENAMED_MESH_LEVELS,
   type BodyModel,
   type CondensedBody,
   type EdgeBand,

@@ -1,7 +1,14 @@
 import type { Matrix } from 'ml-matrix';
 
 /** The mesh refinement levels of the squeeze model, coarsest first. */
-export const MESH_LEVELS = ['coarse', 'normal', 'fine'] as const;
+export const MESH_LEVELS = ['sparse', 'balanced', 'dense'] as const;
+
+/** The levels' former names, refused with the new name (results saved before keep them). */
+export const RENAMED_MESH_LEVELS: Readonly<Record<string, MeshLevel>> = {
+  coarse: 'sparse',
+  normal: 'balanced',
+  fine: 'dense',
+};
 
 /** Mesh refinement level of the squeeze model. */
 export type MeshLevel = (typeof MESH_LEVELS)[number];

@@ -1,4 +1,4 @@
-// Benchmarks the fem skyline LDLᵀ (RCM ordering) against mathjs's sparse LU on the normal mesh:
+// Benchmarks the fem skyline LDLᵀ (RCM ordering) against mathjs's sparse LU on the balanced mesh:
 // one full solve, and the static condensation onto the contact DOFs. Run: npx tsx scripts/bench-solvers.ts
 import * as math from 'mathjs';
 import { assembleStiffness } from '../fem/body/assembly';
@@ -17,7 +17,7 @@ function time<T>(fn: () => T): [T, number] {
   return [out, performance.now() - t0];
 }
 
-const mesh = quarterEllipseMesh(1, MESH_LEVEL_PARAMS.normal);
+const mesh = quarterEllipseMesh(1, MESH_LEVEL_PARAMS.balanced);
 const k = assembleStiffness(mesh, 'axisymmetric', 1, 0.35);
 const fixed = symmetryConstraints(mesh);
 const f = new Float64Array(k.n);
@@ -29,7 +29,7 @@ const keep = contact.map((v) => 2 * v + 1);
 const free = Array.from({ length: k.n }, (_, i) => i).filter((i) => !fixed[i]);
 const condensed = free.filter((i) => !keep.includes(i));
 console.log(
-  `normal mesh: ${mesh.nodeR.length} nodes, ${free.length} free DOFs, nnz ${k.rowPtr[k.n]}, ` +
+  `balanced mesh: ${mesh.nodeR.length} nodes, ${free.length} free DOFs, nnz ${k.rowPtr[k.n]}, ` +
     `${keep.length} contact DOFs`,
 );
 

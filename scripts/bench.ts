@@ -1,11 +1,11 @@
 /**
  * Benchmark of the squeeze core: `npm run bench` (builds dist/ first, then runs dist/bench.mjs).
  * First the whole-process time of the built CLI, dist/tenderline.mjs, spawned 5 times cold (one
- * 20-increment squeeze on the normal mesh). Then per mesh level, for the reference case: size
+ * 20-increment squeeze on the balanced mesh). Then per mesh level, for the reference case: size
  * of its graded body, the body build alone, the cold squeeze (empty cache: build + compliance +
  * stress influence + run), the warm 20-increment squeeze, the 20-diameter pad sweep cold (one
  * body per pad-edge band) and warm (medians of repeats), and peak memory.
- * Targets: CLI ≤ 600 ms; normal mesh cold ≤ 300 ms, warm squeeze ≤ 10 ms, warm sweep ≤ 200 ms.
+ * Targets: CLI ≤ 600 ms; balanced mesh cold ≤ 300 ms, warm squeeze ≤ 10 ms, warm sweep ≤ 200 ms.
  */
 import { spawnSync } from 'node:child_process';
 import { existsSync } from 'node:fs';
@@ -41,7 +41,7 @@ function cliTimes(): number[] {
 if (existsSync(cli)) {
   const ms = cliTimes().sort((a, b) => a - b);
   console.log(
-    `CLI, whole process (node dist/tenderline.mjs squeeze, normal mesh, 20 steps, 5 runs): ` +
+    `CLI, whole process (node dist/tenderline.mjs squeeze, balanced mesh, 20 steps, 5 runs): ` +
       `min ${ms[0].toFixed(0)} ms, median ${median(ms).toFixed(0)} ms, max ${ms[4].toFixed(0)} ms ` +
       `(target ≤ 600 ms)`,
   );
@@ -84,11 +84,11 @@ const sample = () => {
 };
 
 // One throwaway pass so that JIT warm-up is not charged to the first mesh level.
-runSqueeze({ ...base('coarse'), poisson: 0.3 });
-sweepPadDiameters({ ...base('coarse'), poisson: 0.3 }, diameters);
+runSqueeze({ ...base('sparse'), poisson: 0.3 });
+sweepPadDiameters({ ...base('sparse'), poisson: 0.3 }, diameters);
 
 const rows: string[][] = [];
-for (const level of ['coarse', 'normal', 'fine'] as const) {
+for (const level of ['sparse', 'balanced', 'dense'] as const) {
   const input = base(level);
   // Cold: the first squeeze on an empty cache (build the graded body, its compliance and stress
   // influence, then run), 3 times; the body build alone is timed on the last.
@@ -155,7 +155,7 @@ console.log(
 
 // The pad about the size of the contact (13 mm pad, 2 mm edge, 1 mm travel): the refined band
 // at the pad's edge makes this the largest body of the reference fruit.
-const padRows = (['coarse', 'normal', 'fine'] as const).map((level) => {
+const padRows = (['sparse', 'balanced', 'dense'] as const).map((level) => {
   const input = { ...base(level), padDiameter: 0.013, edgeRadius: 0.002 };
   clearCondensedBodyCache();
   const cold = time(() => runSqueeze(input));

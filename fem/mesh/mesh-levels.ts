@@ -42,9 +42,9 @@ export interface LevelGrading {
 
 /** Pole spacing 0.02 / 0.01 / 0.005, growing geometrically in rings out to r ≈ 0.66. */
 export const MESH_LEVEL_PARAMS: Record<MeshLevel, MeshLevelParams> = {
-  coarse: { half: 6, poleSpacing: 0.02, ringOuter: 0.7 },
-  normal: { half: 12, poleSpacing: 0.01, ringOuter: 0.7 },
-  fine: { half: 20, poleSpacing: 0.005, ringOuter: 0.7 },
+  sparse: { half: 6, poleSpacing: 0.02, ringOuter: 0.7 },
+  balanced: { half: 12, poleSpacing: 0.01, ringOuter: 0.7 },
+  dense: { half: 20, poleSpacing: 0.005, ringOuter: 0.7 },
 };
 
 /**
@@ -53,7 +53,7 @@ export const MESH_LEVEL_PARAMS: Record<MeshLevel, MeshLevelParams> = {
  * pressure peak of a contact that reaches a quarter of the edge radius past the flat.
  */
 export const LEVEL_GRADING: Record<MeshLevel, LevelGrading> = {
-  coarse: { nodesPerContact: 8, edgeDivisions: 12, bandRefinement: 2 },
-  normal: { nodesPerContact: 16, edgeDivisions: 24, bandRefinement: 3 },
-  fine: { nodesPerContact: 32, edgeDivisions: 48, bandRefinement: 5 },
+  sparse: { nodesPerContact: 8, edgeDivisions: 12, bandRefinement: 2 },
+  balanced: { nodesPerContact: 16, edgeDivisions: 24, bandRefinement: 3 },
+  dense: { nodesPerContact: 32, edgeDivisions: 48, bandRefinement: 5 },
 };

@@ -52,7 +52,7 @@ export function designSamples(
  * A sample is run on its band's body with E scaled so that E* = E/(1 − ν²) is its own: the
  * Hertz pressure at a given force depends on E* alone (Johnson, Contact Mechanics, 1985, ch. 4),
  * so only the weaker dependence of the finite body on ν itself is banded (≈ 5e-4 in the margin
- * for w = 0.02 up to ν = 0.45 on the normal mesh, against a run at the sample's own ν).
+ * for w = 0.02 up to ν = 0.45 on the balanced mesh, against a run at the sample's own ν).
  */
 export function bandCentre(nu: number, width: number): number {
   const j = Math.floor(nu / width);

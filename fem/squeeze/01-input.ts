@@ -1,6 +1,12 @@
 import { ASPECT_MAX, ASPECT_MIN } from '../body/cache';
 import { FemInputError } from '../errors';
-import { BODY_MODELS, MESH_LEVELS, type BodyModel, type MeshLevel } from '../types';
+import {
+  BODY_MODELS,
+  MESH_LEVELS,
+  RENAMED_MESH_LEVELS,
+  type BodyModel,
+  type MeshLevel,
+} from '../types';
 import {
   requireFinite,
   requireNonNegative,
@@ -29,7 +35,7 @@ export interface SqueezeInput {
   travel: number;
   /** load increments from zero to `travel`, integer 1..200 (default 20) */
   steps?: number;
-  /** mesh level (default 'normal') */
+  /** mesh level (default 'balanced') */
   mesh?: MeshLevel;
   /**
    * contact radius (m) the mesh is graded to; default the Hertz estimate √(R_p·travel) at the
@@ -116,7 +122,10 @@ export const MAX_TRAVEL_FRACTION = 0.15;
  */
 export function validateSqueezeInput(input: SqueezeInput): SqueezeCase {
   const model = requireOneOf('model', input.model ?? 'axisymmetric', BODY_MODELS);
-  const mesh = requireOneOf('mesh', input.mesh ?? 'normal', MESH_LEVELS);
+  const renamed = RENAMED_MESH_LEVELS[input.mesh as string];
+  if (renamed)
+    throw new FemInputError('mesh', `mesh level '${input.mesh}' is now called '${renamed}'`);
+  const mesh = requireOneOf('mesh', input.mesh ?? 'balanced', MESH_LEVELS);
   const equatorialRadius = requirePositive('equatorialRadius', input.equatorialRadius);
   const axialRadius =
     input.axialRadius === undefined

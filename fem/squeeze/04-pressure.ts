@@ -67,7 +67,7 @@ export function pressureAt(stage: PressureStage, travel: number, warm?: Uint8Arr
  * nodes k+1 and k+2 to zero. The result is held below min(r_{k+1}, reach) (`reach`: the pad's
  * outer radius) and above r_{k−1}, not r_k: when node k has only just touched and carries almost
  * no force the gap closes a little inside it, and clamping at r_k doubled the error against
- * Hertz on the normal mesh (2.5 % → 1.2 % worst over 0.2–2 mm travel of a 40 mm sphere).
+ * Hertz on the balanced mesh (2.5 % → 1.2 % worst over 0.2–2 mm travel of a 40 mm sphere).
  * Without two finite gaps outside (the pad ends first) it returns r_k, the smaller, safer radius.
  */
 export function contactRadius(

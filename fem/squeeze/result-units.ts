@@ -26,7 +26,7 @@ export function resultUnits(model: BodyModel): Record<string, string> {
     warnings: 'list of {code, message}: limits of the result, in plain words',
     code: 'text: stable warning code',
     message: 'text: the warning in plain words',
-    level: "text: mesh level, 'coarse', 'normal' or 'fine'",
+    level: "text: mesh level, 'sparse', 'balanced' or 'dense'",
     nodes: 'count: mesh nodes',
     dofs: 'count: degrees of freedom',
     contact_nodes: 'count: candidate contact nodes on the surface',

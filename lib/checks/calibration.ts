@@ -143,7 +143,7 @@ async function squeezeRows(actor: Actor): Promise<CalibrationRow[]> {
     modulus: fruit.modulusMpa.value * 1e6,
     poisson: fruit.poisson.value,
     travel: (Math.min(fruit.diameterMm.value, fruit.axialMm.value) * 0.07) / 1000,
-    mesh: 'normal',
+    mesh: 'balanced',
     steps: 40,
   });
   const at = (force: number) => {

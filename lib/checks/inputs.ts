@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { MESH_LEVELS, RENAMED_MESH_LEVELS } from '@/fem';
 import { FACING_KEYS } from './facings';
 import { DROP_SURFACE_KEYS } from './surfaces';
 import { slugSchema } from '@/lib/validation/cultivars';
@@ -115,7 +116,16 @@ export const squeezeCheckSchema = z
     maxTravelMm: measure('Maximum travel per pad', 'mm', 0, 100).optional(),
     /** How long the grip holds the fruit (the transfer); omitted: the grip at t = 0 only. */
     holdSeconds: measure('Hold time', 's', 0, 3600).optional(),
-    mesh: z.enum(['coarse', 'normal', 'fine']).default('normal'),
+    mesh: z
+      .enum(MESH_LEVELS, {
+        error: (issue) => {
+          const renamed = RENAMED_MESH_LEVELS[String(issue.input)];
+          return renamed
+            ? `Mesh level '${String(issue.input)}' is now called '${renamed}'.`
+            : `Mesh level must be one of ${MESH_LEVELS.join(', ')}.`;
+        },
+      })
+      .default('balanced'),
     /** The grade rule the bruise is judged by (its slug); the commodity's strictest by default. */
     gradeRule: slugSchema.optional(),
     sweep: z.boolean().default(true),

@@ -48,7 +48,7 @@ describe('squeeze check route', () => {
         modulus: 3e6,
         poisson: 0.35,
         travel: 0.001,
-        mesh: 'normal',
+        mesh: 'balanced',
         density: Number(density.toPrecision(4)),
         friction: 0.5,
         safetyFactor: 2,
@@ -71,7 +71,7 @@ describe('squeeze check route', () => {
     // Hertz, sphere on a flat (Johnson, Contact Mechanics, 1985, §4.2): at that force with
     // R = 40 mm, E* = E/(1 − ν²) = 3.419 MPa, a = (3FR/4E*)^⅓ = 3.252 mm (inside the pad's 8 mm
     // flat) and p0 = 3F/(2πa²) = 177.1 kPa, so the margin is 100/177.1 = 0.565 — below 1, which
-    // our bands call "bruise risk". 3 % covers the normal mesh's recovered nodal peak.
+    // our bands call "bruise risk". 3 % covers the balanced mesh's recovered nodal peak.
     expect(Math.abs(r.margin.value - 0.565) / 0.565).toBeLessThan(0.03);
     expect(r.margin.verdict).toBe('bruise risk');
     expect(r.sweep.points).toHaveLength(12);
@@ -127,7 +127,7 @@ describe('squeeze check: the bruise at the grip against the grade', () => {
     const a = Math.cbrt((3 * grip.force_n * 0.04) / (4 * eStar));
     const p0 = (3 * grip.force_n) / (2 * Math.PI * a * a);
     const b = p0 > 100e3 ? a * Math.sqrt(1 - (100e3 / p0) ** 2) : 0;
-    // Tolerance 3 %: the FE profile is interpolated between contact nodes and the normal mesh's
+    // Tolerance 3 %: the FE profile is interpolated between contact nodes and the balanced mesh's
     // contact radius differs from Hertz by about 1 % (0.4 % at this grip when written).
     expect(b).toBeGreaterThan(0);
     console.log(
@@ -187,6 +187,13 @@ describe('squeeze bad input: 400 with a field message', () => {
     expect(message).toMatch(/Maximum travel per pad/);
     expect(message).toMatch(/at most 6 mm for this fruit/);
   });
+  it('a mesh level by its former name is refused with its new name', async () => {
+    const res = await post(squeeze, { ...FRUIT, maxTravelMm: 1, mesh: 'normal' });
+    expect(res.status).toBe(400);
+    expect((await res.json()).fieldErrors.mesh[0]).toBe(
+      "Mesh level 'normal' is now called 'balanced'.",
+    );
+  });
   it('the seeded cherry tomato at the page’s default 2 mm travel: 400 on the travel, not 500', async () => {
     // Forme, 21.23 mm along its axis (Polat et al. 2007): 15 % of a 10.6 mm axial radius is
     // 1.59 mm < 2 mm. (Before its axial diameter was seeded, the fruit was taken as round.)
@@ -243,7 +250,7 @@ describe('who may run the squeeze check (written out)', () => {
     it(`POST /api/checks/squeeze as ${who} → ${status}`, async () => {
       signInAs(who === 'signed-out' ? null : await userId(ACCOUNTS[who as keyof typeof ACCOUNTS]));
       expect(
-        (await post(squeeze, { ...FRUIT, maxTravelMm: 0.5, sweep: false, mesh: 'coarse' })).status,
+        (await post(squeeze, { ...FRUIT, maxTravelMm: 0.5, sweep: false, mesh: 'sparse' })).status,
       ).toBe(status);
     });
   }

@@ -8,9 +8,9 @@ import { quarterEllipseMesh } from '../../../fem/mesh/quarter-ellipse';
 import type { BodyModel, UnitBodyKey } from '../../../fem/types';
 import { csrGet } from '../support/csr';
 
-const KEY: UnitBodyKey = { model: 'axisymmetric', aspect: 1.2, poisson: 0.35, level: 'coarse' };
+const KEY: UnitBodyKey = { model: 'axisymmetric', aspect: 1.2, poisson: 0.35, level: 'sparse' };
 
-/** Dense Guyan condensation of the KEY body (coarse mesh) with ml-matrix. */
+/** Dense Guyan condensation of the KEY body (sparse mesh) with ml-matrix. */
 function denseCondensation(model: BodyModel) {
   const mesh = quarterEllipseMesh(KEY.aspect, MESH_LEVEL_PARAMS[KEY.level]);
   const k = assembleStiffness(mesh, model, 1, KEY.poisson);

@@ -21,7 +21,7 @@ function centreRatios(level: MeshLevel, edges: number): { sx: number; sy: number
   const p = 2 * quarterLoad;
   const d = 2;
   // The centre is the mesh corner r = z = 0: read the element that owns it (its centroid is
-  // within 0.03 R of the centre at the normal level). By symmetry the stress gradient vanishes
+  // within 0.03 R of the centre at the balanced level). By symmetry the stress gradient vanishes
   // at the centre, and the diameter formulas of Timoshenko & Goodier [from memory] give a change of
   // under 0.2 % that close to it, well inside the tolerance.
   const origin = mesh.midplane[0];
@@ -44,10 +44,10 @@ describe('plane-strain Brazilian disc', () => {
   // Specimens, and in the ISRM suggested methods of 1978 [from memory]. In-plane stresses of this traction
   // problem do not depend on E or ν. Loading over a short arc (2α ≈ 0.08 rad) instead of a
   // point changes the centre values by O(α²) ≈ 0.2 %.
-  it('gives the centre stresses within 1 % (normal mesh)', () => {
-    const r = centreRatios('normal', 4);
+  it('gives the centre stresses within 1 % (balanced mesh)', () => {
+    const r = centreRatios('balanced', 4);
     expect(r.alpha).toBeLessThan(0.05);
-    // Observed on the normal mesh: σ_x 0.35 % and σ_y 0.23 % below the closed form, of which the
+    // Observed on the balanced mesh: σ_x 0.35 % and σ_y 0.23 % below the closed form, of which the
     // arc load's O(α²) accounts for about 0.2 %. Tolerance 1 %, about 3× the observed error:
     // a regression in the element, the loads or the assembly shows well above it.
     expect(Math.abs(r.sx - 1)).toBeLessThan(0.01);
@@ -56,8 +56,8 @@ describe('plane-strain Brazilian disc', () => {
 
   it('converges toward the closed form as the mesh is refined (same arc)', () => {
     // Same arc α ≈ 0.04 rad: 2, 4, 8 edges at pole spacing 0.02, 0.01, 0.005.
-    const coarse = centreRatios('coarse', 2);
-    const fine = centreRatios('fine', 8);
+    const coarse = centreRatios('sparse', 2);
+    const fine = centreRatios('dense', 8);
     expect(Math.abs(coarse.alpha - fine.alpha)).toBeLessThan(1e-3);
     // Refinement must not move the centre stress away from the closed form.
     expect(Math.abs(fine.sx - 1)).toBeLessThan(Math.abs(coarse.sx - 1));
@@ -77,7 +77,7 @@ describe('uniform external pressure', () => {
     it(`axisymmetric spheroid (aspect ${aspect}): σ_rr = σ_zz = σ_θθ = −p, τ_rz = 0`, () => {
       const { stresses } = solvePressureCase({
         model: 'axisymmetric',
-        level: 'coarse',
+        level: 'sparse',
         aspect,
         poisson: 0.3,
         pressure: p,
@@ -97,7 +97,7 @@ describe('uniform external pressure', () => {
     const nu = 0.3;
     const { stresses } = solvePressureCase({
       model: 'plane-strain',
-      level: 'coarse',
+      level: 'sparse',
       aspect: 1.6,
       poisson: nu,
       pressure: p,

@@ -11,9 +11,9 @@ import { meshQuality } from '../support/mesh-quality';
 import { quarterEllipseMesh } from '../../../fem/mesh/quarter-ellipse';
 import type { MeshLevel } from '../../../fem/types';
 
-const LEVELS: MeshLevel[] = ['coarse', 'normal', 'fine'];
+const LEVELS: MeshLevel[] = ['sparse', 'balanced', 'dense'];
 /** Surface node spacing at the pole per level, units of the equatorial radius (product spec). */
-const POLE_SPACING: Record<MeshLevel, number> = { coarse: 0.02, normal: 0.01, fine: 0.005 };
+const POLE_SPACING: Record<MeshLevel, number> = { sparse: 0.02, balanced: 0.01, dense: 0.005 };
 
 /** Shoelace area of a closed polygon through the given nodes. */
 function polygonArea(r: Float64Array, z: Float64Array, loop: number[]): number {
@@ -63,7 +63,7 @@ describe('quarter-ellipse mesh', () => {
 
   it('puts boundary nodes on the boundary, the surface ordered from the pole', () => {
     const aspect = 1.7;
-    const m = quarterEllipseMesh(aspect, MESH_LEVEL_PARAMS.normal);
+    const m = quarterEllipseMesh(aspect, MESH_LEVEL_PARAMS.balanced);
     for (const v of m.axis) expect(m.nodeR[v]).toBe(0);
     for (const v of m.midplane) expect(m.nodeZ[v]).toBe(0);
     expect(m.nodeZ[m.surface[0]]).toBeCloseTo(aspect, 14);
@@ -99,18 +99,18 @@ describe('quarter-ellipse mesh graded to a contact and a pad edge', () => {
   // Graded plans as the squeeze builds them: small contacts (a = 0.002–0.16 of the radius) and
   // refined bands at a pad's edge, tiny and large edge radii.
   const plans: [string, MeshLevel, number, EdgeTarget | null][] = [
-    ['tiny contact', 'normal', 0.002, null],
-    ['1 mm on 80 mm', 'normal', 0.158, null],
-    ['13 mm pad', 'normal', 0.158, { flat: 0.1125, outer: 0.1625, edge: 0.05, maxContact: 0.2 }],
+    ['tiny contact', 'balanced', 0.002, null],
+    ['1 mm on 80 mm', 'balanced', 0.158, null],
+    ['13 mm pad', 'balanced', 0.158, { flat: 0.1125, outer: 0.1625, edge: 0.05, maxContact: 0.2 }],
     [
       '3 mm pad, 0.1 mm edge',
-      'fine',
+      'dense',
       0.0375,
       { flat: 0.035, outer: 0.0375, edge: 0.0025, maxContact: 0.2 },
     ],
     [
       'pad inside the core',
-      'coarse',
+      'sparse',
       0.1,
       { flat: 0.005, outer: 0.01, edge: 0.005, maxContact: 0.12 },
     ],
@@ -131,7 +131,7 @@ describe('quarter-ellipse mesh graded to a contact and a pad edge', () => {
     }
     // Near the pole the surface spacing is at most the graded spacing a/N (N = 8, 16, 32 nodes
     // per contact radius, product mesh specification) with 40 % for the core's outer steps.
-    const perContact = { coarse: 8, normal: 16, fine: 32 }[level];
+    const perContact = { sparse: 8, balanced: 16, dense: 32 }[level];
     const r = Array.from(mesh.surface, (v) => mesh.nodeR[v]);
     const within = r.filter((x) => x <= 0.8 * contactScaleOf(contact));
     for (let i = 1; i < within.length; i++) {

@@ -18,7 +18,7 @@ const base: SqueezeInput = {
   poisson: 0.35,
   travel: 0.002,
   steps: 20,
-  mesh: 'coarse',
+  mesh: 'sparse',
   padDiameter: 0.03,
   density: 840,
   friction: 0.4,
@@ -64,7 +64,7 @@ describe('Monte Carlo runs', () => {
     expect(r.poissonBands.length).toBeLessThanOrEqual(8);
     // The Hertz pressure at a given force depends on E* = E/(1 − ν²) only (Johnson, Contact
     // Mechanics, 1985, ch. 4), so a band keeps each sample's E*; the finite body's own ν
-    // dependence is what remains: observed ≤ 7.5e-4 of the margin on the coarse mesh over
+    // dependence is what remains: observed ≤ 7.5e-4 of the margin on the sparse mesh over
     // ν = 0.2–0.5 with bands of 0.02, tolerance 1.5e-3.
     for (const nu of [0.301, 0.339, 0.36, 0.409]) {
       const own = gripMargin({ ...base, poisson: nu }).margin as number;

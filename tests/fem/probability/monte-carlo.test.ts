@@ -11,7 +11,7 @@ const base: SqueezeInput = {
   poisson: 0.35,
   travel: 0.002,
   steps: 20,
-  mesh: 'coarse',
+  mesh: 'sparse',
   padDiameter: 0.03,
   density: 840,
   friction: 0.4,
@@ -56,7 +56,7 @@ describe('Monte Carlo of the bruise margin', () => {
         seed: 11,
       });
       // The FE peak departs from E^{2/3} by δ at E_c (measured here; 0 at k = 1 by the anchor;
-      // −1.1 % at k = 1.15 on the coarse mesh), moving E_c by (1 + δ)^{−3/2}: that shift of P is
+      // −1.1 % at k = 1.15 on the sparse mesh), moving E_c by (1 + δ)^{−3/2}: that shift of P is
       // allowed on top of 3 binomial standard errors √(P(1 − P)/n) (±0.033 at P = 0.46).
       const delta = deterministic({ ...base, modulus: Ec }).peakPressure / threshold - 1;
       const shift = Math.abs(Phi(z) - Phi(z - (1.5 * Math.log(1 + delta)) / s));

@@ -45,7 +45,7 @@ describe('static condensation', () => {
       // Source: Cook et al. 2002, static condensation is exact for statics [from memory]. Reference:
       // the full system with u_c prescribed (moved to the right-hand side), solved by the full
       // skyline factorisation, itself checked against mathjs's sparse LU in solver.test.ts.
-      const mesh = quarterEllipseMesh(0.7, MESH_LEVEL_PARAMS.coarse);
+      const mesh = quarterEllipseMesh(0.7, MESH_LEVEL_PARAMS.sparse);
       const k = assembleStiffness(mesh, model, 1, 0.3);
       const fixed = symmetryConstraints(mesh);
       const contact = Array.from(mesh.surface).filter((v) => mesh.nodeR[v] <= 0.6);
@@ -77,7 +77,7 @@ describe('static condensation', () => {
       // Dimensional analysis: K ∝ ∫BᵀDB dV with B ∝ 1/R, D ∝ E, dV ∝ R³ (ring,
       // 2π r dA) or R² (per metre of thickness), so K_real = E·R·K_unit or E·K_unit.
       // Tolerance 1e-10 relative: the same arithmetic on scaled numbers.
-      const unit = quarterEllipseMesh(0.9, MESH_LEVEL_PARAMS.coarse);
+      const unit = quarterEllipseMesh(0.9, MESH_LEVEL_PARAMS.sparse);
       const radius = 0.04;
       const modulus = 3e6;
       const real = {

@@ -29,7 +29,7 @@ const valid = [
   '--steps',
   '5',
   '--mesh',
-  'coarse',
+  'sparse',
   '--pad-diameter-mm',
   '30',
   '--density',
@@ -57,7 +57,7 @@ describe('tenderline CLI (scripts/fem.ts, built to dist/tenderline.mjs)', () => 
     // 2 decimals (toBeCloseTo 2): both are printed to 3–4 significant figures.
     expect(grip.bruise_margin).toBeCloseTo(150 / grip.peak_pressure_kpa, 2);
     expect(out.hertz.at_travel.force_n).toBeGreaterThan(0);
-    expect(out.mesh).toMatchObject({ level: 'coarse' });
+    expect(out.mesh).toMatchObject({ level: 'sparse' });
     expect(out.profile[0]).toHaveProperty('r_mm');
     expect(out.units.travel_per_pad_mm).toMatch(/^mm: travel of each pad/);
   }, 30_000);
@@ -98,7 +98,9 @@ describe('tenderline CLI (scripts/fem.ts, built to dist/tenderline.mjs)', () => 
       '--facing-modulus-mpa is needed with --facing-thickness-mm',
     ],
     [['--diameter-mm', '80', '--friction', '0.4'], '--density is needed with --friction'],
-    [['--diameter-mm', '80', '--mesh', 'medium'], '--mesh must be coarse, normal or fine'],
+    [['--diameter-mm', '80', '--mesh', 'medium'], '--mesh must be sparse, balanced or dense'],
+    // The former names are refused with the new one.
+    [['--diameter-mm', '80', '--mesh', 'normal'], "is now called 'balanced'"],
   ])(
     'names the option the user typed, not the internal field (%j)',
     async (size, message) => {

@@ -15,7 +15,7 @@ const run = (mesh: MeshLevel) =>
 
 describe('mesh convergence of the squeeze model', () => {
   it('force and peak pressure settle from normal to fine', () => {
-    const [coarse, normal, fine] = (['coarse', 'normal', 'fine'] as const).map(run);
+    const [coarse, normal, fine] = (['sparse', 'balanced', 'dense'] as const).map(run);
     const rows = { coarse, normal, fine };
     for (const [level, r] of Object.entries(rows)) {
       console.log(

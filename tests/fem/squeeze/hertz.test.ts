@@ -12,7 +12,7 @@ const sphere = (travel: number, extra: Partial<SqueezeInput> = {}) =>
     modulus: E,
     poisson: nu,
     travel,
-    mesh: 'normal',
+    mesh: 'balanced',
     steps: 1,
     ...extra,
   });
@@ -31,7 +31,7 @@ describe('squeeze of a sphere against Hertz (Johnson, Contact Mechanics, 1985, c
     (d) => {
       const { final } = sphere(d);
       const h = hertzAtForce(final.force);
-      // 2 %: the normal mesh has ~0.4 mm nodes under the pad (8–16 in contact); the radius is
+      // 2 %: the balanced mesh has ~0.4 mm nodes under the pad (8–16 in contact); the radius is
       // interpolated between nodes and the pressure recovered from nodal forces.
       expect(Math.abs(final.contactRadius / h.a - 1)).toBeLessThan(0.02);
       expect(Math.abs(final.peakPressure / h.p0 - 1)).toBeLessThan(0.02);
@@ -52,7 +52,7 @@ describe('squeeze of a sphere against Hertz (Johnson, Contact Mechanics, 1985, c
     for (let i = 1; i < ratios.length; i++) expect(ratios[i]).toBeGreaterThan(ratios[i - 1]);
     expect(ratios[0]).toBeGreaterThan(1);
     // The excess is of order a/R ∝ √d (our estimate, not a published result): a straight-line fit of the
-    // ratio against √d meets d = 0 near 1. Tolerance 2 %: the normal mesh's own stiffening.
+    // ratio against √d meets d = 0 near 1. Tolerance 2 %: the balanced mesh's own stiffening.
     const x = travels.map(Math.sqrt);
     const n = x.length;
     const mx = x.reduce((s, v) => s + v, 0) / n;

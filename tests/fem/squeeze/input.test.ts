@@ -7,7 +7,7 @@ const base: SqueezeInput = {
   modulus: 3e6,
   poisson: 0.35,
   travel: 0.001,
-  mesh: 'coarse',
+  mesh: 'sparse',
 };
 
 function fieldOf(patch: Partial<SqueezeInput>): string {

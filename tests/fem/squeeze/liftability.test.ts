@@ -11,7 +11,7 @@ const base: SqueezeInput = {
   modulus: 3e6,
   poisson: 0.35,
   travel: 0.0015,
-  mesh: 'coarse',
+  mesh: 'sparse',
   padDiameter: 0.03,
   density: 840,
   friction: 0.4,

@@ -10,7 +10,7 @@ const base: SqueezeInput = {
   modulus: 3e6,
   poisson: 0.35,
   travel: 0.001,
-  mesh: 'normal',
+  mesh: 'balanced',
   steps: 4,
 };
 

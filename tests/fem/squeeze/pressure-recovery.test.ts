@@ -4,7 +4,7 @@ import { getCondensedBody } from '../../../fem/body/cache';
 import { recoverPressure, surfaceWeights } from '../../../fem/squeeze/pressure-recovery';
 import { addEdgePressure } from '../support/edge-load';
 
-const KEY = { aspect: 1.2, poisson: 0.35, level: 'coarse' } as const;
+const KEY = { aspect: 1.2, poisson: 0.35, level: 'sparse' } as const;
 
 /** −f_z of each contact node under a unit pressure on the surface segments between contact nodes. */
 function consistentLoads(model: 'axisymmetric' | 'plane-strain'): {

@@ -24,13 +24,13 @@ describe('resolution of small contacts', () => {
   });
 
   it('regrades for a grip whose contact has few nodes', () => {
-    // Coarse mesh graded to the full 1.5 mm travel; the grip comes at about a fifth of it.
+    // Sparse mesh graded to the full 1.5 mm travel; the grip comes at about a fifth of it.
     const res = runSqueeze({
       ...base,
       equatorialRadius: 0.035,
       travel: 0.0015,
       steps: 20,
-      mesh: 'coarse',
+      mesh: 'sparse',
       density: 840,
       friction: 0.4,
       safetyFactor: 2,

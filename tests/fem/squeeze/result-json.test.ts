@@ -9,7 +9,7 @@ const base: SqueezeInput = {
   poisson: 0.35,
   travel: 0.001,
   steps: 3,
-  mesh: 'coarse',
+  mesh: 'sparse',
   padDiameter: 0.02,
   facingModulus: 2e6,
   facingThickness: 0.002,

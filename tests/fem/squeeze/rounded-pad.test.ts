@@ -43,9 +43,9 @@ function compare(mesh: MeshLevel) {
 }
 
 describe('rounded flat pad on a large sphere against Sneddon (Int. J. Eng. Sci. 3, 1965, 47)', () => {
-  const normal = compare('normal');
+  const normal = compare('balanced');
 
-  it('peak pressure, contact radius and centre pressure on the normal mesh', () => {
+  it('peak pressure, contact radius and centre pressure on the balanced mesh', () => {
     // Observed: peak +0.95 %, a −0.20 %, centre −0.25 %, approach +0.47 %. Limits at 2.5–3× the
     // observed error: the peak sits on the rounding, where the refined band puts about 5 nodes
     // across the 0.44 mm between the flat's end and the contact's edge.
@@ -59,8 +59,8 @@ describe('rounded flat pad on a large sphere against Sneddon (Int. J. Eng. Sci. 
 
   it('the peak converges with refinement', () => {
     // Observed: coarse +6.9 %, normal +0.95 %, fine +0.52 %.
-    const coarse = compare('coarse');
-    const fine = compare('fine');
+    const coarse = compare('sparse');
+    const fine = compare('dense');
     expect(Math.abs(fine.peak)).toBeLessThan(Math.abs(normal.peak));
     expect(Math.abs(normal.peak)).toBeLessThan(Math.abs(coarse.peak));
     expect(Math.abs(fine.peak)).toBeLessThan(0.015);

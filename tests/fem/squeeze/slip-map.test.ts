@@ -21,7 +21,7 @@ const sphere = (extra: Partial<SqueezeInput> = {}): SqueezeInput => ({
   poisson: nu,
   travel: 0.001,
   steps: 1,
-  mesh: 'normal',
+  mesh: 'balanced',
   density: 840,
   friction: mu,
   ...extra,
@@ -52,13 +52,13 @@ describe('slip map on the finite-element pressure against Cattaneo–Mindlin', (
     const { worst, h } = stickErrors(sphere({ travel: d }), d, pointCM);
     // The FE contact radius is interpolated between nodes from the gaps (within ~0.3 % of Hertz
     // at T = 0 here); the stick radius is the contact radius of the smaller load. Observed
-    // ≤ 0.27 h over coarse, normal and fine meshes and both travels; tolerance 0.4 h.
+    // ≤ 0.27 h over coarse, normal and dense meshes and both travels; tolerance 0.4 h.
     expect(worst).toBeLessThan(0.4 * h);
   });
 
   it('the stick-radius error shrinks with the mesh', () => {
-    const coarse = stickErrors(sphere({ travel: 0.0003, mesh: 'coarse' }), 0.0003, pointCM);
-    const fine = stickErrors(sphere({ travel: 0.0003, mesh: 'fine' }), 0.0003, pointCM);
+    const coarse = stickErrors(sphere({ travel: 0.0003, mesh: 'sparse' }), 0.0003, pointCM);
+    const fine = stickErrors(sphere({ travel: 0.0003, mesh: 'dense' }), 0.0003, pointCM);
     // Observed 0.080 mm (coarse) and 0.020 mm (fine): the error follows the node spacing.
     expect(fine.worst).toBeLessThan(0.5 * coarse.worst);
   });
@@ -84,7 +84,7 @@ describe('slip map on the finite-element pressure against Cattaneo–Mindlin', (
         const err = Math.abs(node.traction - q) / (mu * p0);
         // The piecewise-linear recovered pressure cannot follow the square-root kinks of q at c
         // and a; its error rings out over about five node spacings. Beyond them: observed
-        // ≤ 0.0015 μp₀ on the normal mesh, tolerance 0.004; within: observed ≤ 0.06, tolerance 0.12.
+        // ≤ 0.0015 μp₀ on the balanced mesh, tolerance 0.004; within: observed ≤ 0.06, tolerance 0.12.
         const nearKink = Math.min(Math.abs(node.r - c), Math.abs(node.r - a)) < 5 * h;
         expect(err).toBeLessThan(nearKink ? 0.12 : 0.004);
       }

@@ -7,7 +7,7 @@ const base: SqueezeInput = {
   modulus: 3e6,
   poisson: 0.35,
   travel: 0.002,
-  mesh: 'coarse',
+  mesh: 'sparse',
   density: 840,
   friction: 0.4,
   safetyFactor: 2,

@@ -82,7 +82,7 @@ function resolved(set: EvidenceSet): ResolvedSqueeze {
     modulus: fruit.modulusMpa.value * 1e6,
     poisson: fruit.poisson.value,
     travel: 0.003,
-    mesh: 'coarse',
+    mesh: 'sparse',
     padDiameter: 0.02,
     edgeRadius: 0.002,
     density: fruit.densityKgM3.value,

@@ -11,7 +11,7 @@ const input: SqueezeInput = {
   modulus: 3e6,
   poisson: 0.35,
   travel: 0.004,
-  mesh: 'coarse',
+  mesh: 'sparse',
   density: 1000,
   friction: 0.5,
   safetyFactor: 2,

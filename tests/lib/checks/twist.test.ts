@@ -41,7 +41,7 @@ describe('an off-centre grip of a sphere', () => {
     modulus: 3e6,
     poisson: 0.35,
     travel: 0.005,
-    mesh: 'normal',
+    mesh: 'balanced',
     steps: 20,
     density: 1000,
     friction: 0.5,
@@ -81,7 +81,7 @@ describe('an off-centre grip of a sphere', () => {
     expect(t.governs).toBe('lift');
     expect(twistWarnings(t)).toEqual([]);
     // The model's grip pressure is close to Hertz's: its torque share κ near 3π/16 = 0.589,
-    // within 5 % (the recovered nodal pressures of the normal mesh at the contact edge).
+    // within 5 % (the recovered nodal pressures of the balanced mesh at the contact edge).
     expect(Math.abs(t.shape_factor / ((3 * Math.PI) / 16) - 1)).toBeLessThan(0.05);
   });
 
