@@ -130,7 +130,8 @@ export async function createSourceAction(_prev: ActionState, form: FormData): Pr
     refresh(revisionId);
     return `Source "${key}" added: choose it in a value's Source list.`;
   });
-  return state.ok ? state : { ...state, values: fields };
+  // A plain copy: the form's fields are a null-prototype object, which cannot reach the client.
+  return state.ok ? state : { ...state, values: { ...fields } };
 }
 
 /** Publish another editor's revision in review; a stale base answers 409 naming the newer one. */

@@ -40,7 +40,8 @@ test('draft → field error → save → submit; another editor publishes; page,
   const row = page.getByTestId('value-row').filter({ hasText: "Young's modulus (flesh)" });
   const value = row.getByLabel('Value (MPa)');
   await expect(value).toHaveValue('2.52'); // the seeded published value, copied into the draft
-  await value.fill('2,71');
+  // A decimal comma is read ("2,71" is 2.71); a value in words is not.
+  await value.fill('two point seven');
   await page.getByLabel('What this revision changes').fill('Flesh modulus re-read: 2.71 MPa');
   await page.getByRole('button', { name: 'Save', exact: true }).click();
   await expect(row.getByText('The value must be a number.')).toBeVisible();
@@ -48,13 +49,13 @@ test('draft → field error → save → submit; another editor publishes; page,
   await expect(page.getByTestId('error-summary')).toContainText(
     /Value \d+, value: The value must be a number\./,
   );
-  await expect(value).toHaveValue('2,71'); // what was typed is kept
+  await expect(value).toHaveValue('two point seven'); // what was typed is kept
   await expect(page.getByLabel('What this revision changes')).toHaveValue(
     'Flesh modulus re-read: 2.71 MPa',
   );
   await shootBoth(page, 'draft-field-error');
 
-  await value.fill('2.71');
+  await value.fill('2,71');
   await page.getByRole('button', { name: 'Save', exact: true }).click();
   await expect(page.getByTestId('form-success')).toHaveText('Draft saved.');
   await page.getByRole('button', { name: 'Save and submit for review' }).click();

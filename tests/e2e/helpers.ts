@@ -13,6 +13,6 @@ export async function signIn(page: Page, email: string, password = PASSWORD) {
 }
 
 export async function signOut(page: Page) {
-  await page.getByRole('button', { name: 'Sign out' }).click();
+  await page.getByRole('button', { name: 'Sign out', exact: true }).click();
   await expect(page).toHaveURL(/\/sign-in/);
 }

@@ -107,12 +107,12 @@ for (const system of ['si', 'us'] as const) {
       expect(unitsOf(system, text).length).toBeGreaterThan(3);
       expect(unitsOf(other(system), text)).toEqual([]);
       // Chart ticks at round values: evenly spaced by 1, 2 or 5 × a power of ten.
-      const ticks = (
-        await page
-          .getByTestId('chart-stack-pressure')
-          .locator('.recharts-xAxis .recharts-cartesian-axis-tick-value')
-          .allInnerTexts()
-      ).map(Number);
+      // The chart draws once its container has a size: wait for its first tick.
+      const tickTexts = page
+        .getByTestId('chart-stack-pressure')
+        .locator('.recharts-xAxis .recharts-cartesian-axis-tick-value');
+      await expect(tickTexts.first()).toBeAttached();
+      const ticks = (await tickTexts.allTextContents()).map(Number);
       expect(ticks.length).toBeGreaterThan(2);
       const step = ticks[1] - ticks[0];
       const mantissa = step / 10 ** Math.floor(Math.log10(step));
