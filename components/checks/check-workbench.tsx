@@ -52,15 +52,19 @@ export function CheckWorkbench<R>({
         aria-live="polite"
       >
         {pending ? <span className="text-stone-500">Working…</span> : null}
+        {/* The grade's verdict first where the check sizes a bruise; the onset margin beside it. */}
+        {report?.bruise ? (
+          <span className="font-semibold">{BRUISE_HEADLINE[report.bruise.verdict]}</span>
+        ) : null}
         {report?.margin ? (
           <span>
-            Margin <span className="num font-semibold">{report.margin.value}</span> ·{' '}
+            {report.bruise ? 'Margin at onset' : 'Margin'}{' '}
+            <span className="num font-semibold">{report.margin.value}</span> ·{' '}
             {report.margin.verdict}
           </span>
         ) : (
           <span className="text-stone-500">{result ? 'No margin' : 'No result yet'}</span>
         )}
-        {report?.bruise ? <span>{BRUISE_HEADLINE[report.bruise.verdict]}</span> : null}
         {lead ? (
           <span>
             {lead.label}:{' '}
