@@ -1,6 +1,6 @@
 'use client';
 
-import { usePathname, useRouter, useSearchParams } from 'next/navigation';
+import { usePathname, useSearchParams } from 'next/navigation';
 import { useEffect, useState } from 'react';
 import { checkQuery, figuresFromQuery } from '@/lib/checks/check-url';
 import { useUnits } from '@/components/units/units-provider';
@@ -43,7 +43,6 @@ export function useCheckForm<R>({
 }) {
   const units = useUnits();
   const address = useSearchParams();
-  const router = useRouter();
   const pathname = usePathname();
   const [cultivar, setCultivar] = useState(initialCultivar);
   const [stage, setStage] = useState(address.get('stage') ?? '');
@@ -71,13 +70,16 @@ export function useCheckForm<R>({
         .map(([k]) => [k, '']),
     ),
   });
+  // The browser's own history entry is replaced (the App Router keeps useSearchParams in step
+  // with it): no server round trip, and a link followed meanwhile is never pulled back here.
   useEffect(() => {
     const timer = setTimeout(() => {
+      if (window.location.pathname !== pathname) return;
       if (window.location.search.replace(/^\?/, '') !== query)
-        router.replace(`${pathname}?${query}`, { scroll: false });
+        window.history.replaceState(window.history.state, '', `${pathname}?${query}`);
     }, 400);
     return () => clearTimeout(timer);
-  }, [query, pathname, router]);
+  }, [query, pathname]);
   const fields: FieldsState = { text, set, fieldErrors: state.fieldErrors };
   return {
     cultivar,

@@ -107,10 +107,11 @@ for (const system of ['si', 'us'] as const) {
       expect(unitsOf(system, text).length).toBeGreaterThan(3);
       expect(unitsOf(other(system), text)).toEqual([]);
       // Chart ticks at round values: evenly spaced by 1, 2 or 5 × a power of ten.
-      // The chart draws once its container has a size: wait for its first tick.
+      // The chart draws once its container has a size: wait for its first tick (recharts 3 draws
+      // the tick labels in their own layer, not inside the axis group).
       const tickTexts = page
         .getByTestId('chart-stack-pressure')
-        .locator('.recharts-xAxis .recharts-cartesian-axis-tick-value');
+        .locator('.recharts-xAxis-tick-labels .recharts-cartesian-axis-tick-value');
       await expect(tickTexts.first()).toBeAttached();
       const ticks = (await tickTexts.allTextContents()).map(Number);
       expect(ticks.length).toBeGreaterThan(2);

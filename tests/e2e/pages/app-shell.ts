@@ -13,7 +13,7 @@ export class AppShell {
   }
 
   async signOut() {
-    await this.page.getByRole('button', { name: 'Sign out' }).click();
+    await this.page.getByRole('button', { name: 'Sign out', exact: true }).click();
     await expect(this.page).toHaveURL(/\/sign-in/);
   }
 }
