@@ -1,31 +1,12 @@
+import type { Selectable } from 'kysely';
+import type { RevisionValuesTable } from '@/lib/db-schema';
 import { QUANTITIES, isQuantity } from '@/lib/properties/quantities';
 
 /**
  * A stored value as the three-way rebase compares it: a `revision_values` row without its id,
  * revision and position. Pure (no database), so the merge is tested on hand-made value sets.
  */
-export interface StoredValue {
-  quantity: string;
-  variant: string;
-  value: number;
-  unit: string;
-  low: number | null;
-  high: number | null;
-  sd: number | null;
-  samples: number | null;
-  method: string | null;
-  ripeness: string | null;
-  temperature: string | null;
-  storage: string | null;
-  loading_rate: string | null;
-  probe: string | null;
-  note: string | null;
-  is_typical_default: boolean | number;
-  stage: string | null;
-  observation: string | null;
-  typical_basis: string | null;
-  source_id: number | null;
-}
+export type StoredValue = Omit<Selectable<RevisionValuesTable>, 'id' | 'revision_id' | 'position'>;
 
 /** What names a value: what was measured, from which source, under which conditions. */
 const IDENTITY = [
